@@ -1,0 +1,1 @@
+export { CliError, EXIT_PROBLEMS, EXIT_USAGE } from './errors.js';

@@ -1,0 +1,50 @@
+#!/usr/bin/env node
+// The steamwright command line: thin commands over the library, no physics here.
+import yargs from 'yargs';
+import { hideBin } from 'yargs/helpers';
+import { commands } from './commands/index.js';
+import { CliError, EXIT_USAGE } from './errors.js';
+
+export async function main(argv: string[]): Promise<number> {
+  let exitCode = 0;
+  const parser = yargs(argv)
+    .scriptName('steamwright')
+    .usage('$0 <command> [options]\n\nIndustrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.')
+    .strict()
+    .demandCommand(1, 'Name a command, for example: steamwright state --p "10 barg" --x 1')
+    .recommendCommands()
+    .help()
+    .alias('help', 'h')
+    .version()
+    .wrap(Math.min(100, process.stdout.columns ?? 100))
+    .fail((message, error) => {
+      // yargs' own usage errors (unknown option, missing argument) and our CliErrors
+      // both end as one line on stderr; anything else is a bug and is rethrown.
+      if (error && !(error instanceof CliError)) throw error;
+      const text = error instanceof CliError ? error.message : message;
+      process.stderr.write(`steamwright: ${text}\n`);
+      exitCode = error instanceof CliError ? error.exitCode : EXIT_USAGE;
+    });
+  for (const command of commands) parser.command(command);
+  try {
+    await parser.parseAsync();
+  } catch (error) {
+    if (error instanceof CliError) {
+      process.stderr.write(`steamwright: ${error.message}\n`);
+      return error.exitCode;
+    }
+    throw error;
+  }
+  return exitCode || (process.exitCode as number | undefined) || 0;
+}
+
+main(hideBin(process.argv)).then(
+  (code) => {
+    process.exitCode = code;
+  },
+  (error: unknown) => {
+    // A stack trace here is a bug in steamwright, not a user error.
+    process.stderr.write(`steamwright: internal error: ${error instanceof Error ? error.stack : String(error)}\n`);
+    process.exitCode = 70;
+  },
+);
