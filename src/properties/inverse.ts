@@ -1,3 +1,4 @@
+import { MAX_TEMPERATURE, MIN_TEMPERATURE, REGION1_MAX_TEMPERATURE } from './constants.js';
 import { newtonStepRegion1 } from './region1.js';
 import { temperaturePHRegion1Backward, temperaturePSRegion1Backward } from './region1Backward.js';
 import { newtonStepRegion2 } from './region2.js';
@@ -7,38 +8,55 @@ import { temperaturePSRegion2Backward } from './region2BackwardPS.js';
 // The backward equations agree with the forward ones to about 25 mK
 // (IAPWS R7-97(2012) sections 5.2 and 6.3). Newton on the forward equation
 // from there converges quadratically: two or three steps reach round-off.
+// Near the corners of their range (region 2 T(p,s) below the triple-point
+// pressure) the backward value can be far off, so Newton is safeguarded by
+// bisection inside the region's temperature bracket; h and s rise with T
+// at fixed p (cp > 0), so the sign of each step tells which side the root is.
 
-const MAX_STEPS = 8;
+const MAX_STEPS = 100;
 const RELATIVE_STEP_TOLERANCE = 1e-13;
 
 type NewtonStep = (p: number, T: number, target: number, onEntropy: boolean) => number;
 
-function refine(step: NewtonStep, p: number, start: number, target: number, onEntropy: boolean): number {
-  let T = start;
+function refine(
+  step: NewtonStep,
+  p: number,
+  start: number,
+  target: number,
+  onEntropy: boolean,
+  low: number,
+  high: number,
+): number {
+  let below = low;
+  let above = high;
+  let T = start > low && start < high ? start : start <= low ? low : high;
   for (let k = 0; k < MAX_STEPS; k++) {
     const dT = step(p, T, target, onEntropy);
-    T -= dT;
-    if (Math.abs(dT) <= RELATIVE_STEP_TOLERANCE * T) break;
+    if (Math.abs(dT) <= RELATIVE_STEP_TOLERANCE * T) return T - dT;
+    if (dT > 0) above = T;
+    else below = T;
+    const next = T - dT;
+    T = next > below && next < above ? next : 0.5 * (below + above);
   }
   return T;
 }
 
 /** T(p, h) in region 1 (K), consistent with enthalpyRegion1 to round-off. Allocation-free. */
 export function temperaturePHRegion1(p: number, h: number): number {
-  return refine(newtonStepRegion1, p, temperaturePHRegion1Backward(p, h), h, false);
+  return refine(newtonStepRegion1, p, temperaturePHRegion1Backward(p, h), h, false, MIN_TEMPERATURE, REGION1_MAX_TEMPERATURE);
 }
 
 /** T(p, s) in region 1 (K), consistent with entropyRegion1 to round-off. */
 export function temperaturePSRegion1(p: number, s: number): number {
-  return refine(newtonStepRegion1, p, temperaturePSRegion1Backward(p, s), s, true);
+  return refine(newtonStepRegion1, p, temperaturePSRegion1Backward(p, s), s, true, MIN_TEMPERATURE, REGION1_MAX_TEMPERATURE);
 }
 
 /** T(p, h) in region 2 (K), consistent with enthalpyRegion2 to round-off. Allocation-free. */
 export function temperaturePHRegion2(p: number, h: number): number {
-  return refine(newtonStepRegion2, p, temperaturePHRegion2Backward(p, h), h, false);
+  return refine(newtonStepRegion2, p, temperaturePHRegion2Backward(p, h), h, false, MIN_TEMPERATURE, MAX_TEMPERATURE);
 }
 
 /** T(p, s) in region 2 (K), consistent with entropyRegion2 to round-off. */
 export function temperaturePSRegion2(p: number, s: number): number {
-  return refine(newtonStepRegion2, p, temperaturePSRegion2Backward(p, s), s, true);
+  return refine(newtonStepRegion2, p, temperaturePSRegion2Backward(p, s), s, true, MIN_TEMPERATURE, MAX_TEMPERATURE);
 }
