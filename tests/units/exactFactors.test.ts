@@ -20,6 +20,8 @@ import {
 import { expectClose } from './closeTo.js';
 
 // Published values: NIST SP 811 (2008), Appendix B.8, unless named otherwise.
+// The printed NIST figures are quoted from memory; the exact values are
+// derived from the definitions in the test itself.
 // A tolerance of 1e-15 means "equal to double-precision round-off".
 describe('exact definitions', () => {
   test('1 lb = 0.45359237 kg (international yard and pound agreement, 1959)', () => {

@@ -41,7 +41,8 @@ describe('mass prices convert to currency per tonne', () => {
 describe('emission factors convert to kg CO2 per GJ', () => {
   const cases: [value: number, unit: string, expected: number][] = [
     [56.1, 'kg/GJ', 56.1],
-    // IPCC 2006 Guidelines, Vol. 2, Table 2.2: natural gas 56,100 kg CO2/TJ.
+    // IPCC 2006 Guidelines, Vol. 2, Table 2.2: natural gas 56,100 kg CO2/TJ
+    // (quoted from memory; only the unit arithmetic is under test).
     [56_100, 'kg/TJ', 56.1],
     [56.1, 't/TJ', 56.1],
     [3.6, 'kg/MWh', 1],
