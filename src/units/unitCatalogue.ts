@@ -12,7 +12,7 @@ import type { UnitDefinition } from './unitDefinition.js';
 // Matching rules, in order: spaces and middle dots are ignored; an exact
 // spelling wins; otherwise a spelling that differs only in letter case is
 // accepted ("BARG", "MMBTU", "kpa"), which is safe because no two units of one
-// kind differ only in case (checked by the tests). Price units are
+// kind differ only in case (buildIndex refuses such a table). Price units are
 // "<currency>/<denominator>".
 
 const tables: Record<QuantityKind, readonly UnitDefinition[]> = {
