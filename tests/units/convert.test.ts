@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, test } from 'vitest';
 import { fromSI, quantityKinds, toSI, unitsOf } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Round trips over every accepted spelling of every kind. Offsets (degC,
 // degF, gauge pressures) lose digits when the value is small beside the

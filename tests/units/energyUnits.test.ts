@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Definitions: 1 Btu(IT) = 1.05505585262 kJ (ISO 31-4; NIST SP 811 B.8),
 // 1 therm = 100,000 Btu(IT), 1 kWh = 3.6 MJ, 1 hp = 745.69987158227022 W.

@@ -17,7 +17,7 @@ import {
   RANKINE_K,
   THERM_KJ,
 } from '../../src/units/exactFactors.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Published values: NIST SP 811 (2008), Appendix B.8, unless named otherwise.
 // The printed NIST figures are quoted from memory; the exact values are

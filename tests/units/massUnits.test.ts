@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Definitions: 1 lb = 0.45359237 kg (1959 agreement), 1 t = 1000 kg.
 describe('mass flow units convert to kg/s', () => {

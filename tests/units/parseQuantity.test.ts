@@ -1,6 +1,6 @@
 import { describe, expect, test } from 'vitest';
 import { parseQuantity, type ParseResult, type QuantityKind } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // 1 psi = 4.4482216152605 N / (0.0254 m)^2 = 6894.757293168361 Pa (exact
 // definition, NIST SP 811 B.8), here in MPa.

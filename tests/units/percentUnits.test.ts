@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 describe('percent is stored as a fraction', () => {
   test.each([

@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Definitions: 1 bar = 100 kPa, 1 atm = 101.325 kPa (10th CGPM), 1 psi =
 // 6.894757293168 kPa (NIST SP 811 B.8). Gauge readings add the atmosphere.

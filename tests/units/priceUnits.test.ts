@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 const MMBTU_GJ = 1.05505585262; // 1e6 Btu(IT), NIST SP 811 B.8
 const LB_KG = 0.45359237; // 1959 agreement

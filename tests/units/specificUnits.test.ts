@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Definitions: 1 Btu/lb = 2.326 kJ/kg and 1 Btu/(lb degR) = 4.1868 kJ/(kg K),
 // both exact (NIST SP 811 B.8).

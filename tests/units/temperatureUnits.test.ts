@@ -1,6 +1,6 @@
 import { describe, test } from 'vitest';
 import { toSI } from '../../src/units/index.js';
-import { expectClose } from './closeTo.js';
+import { expectClose } from '../helpers/expectClose.js';
 
 // Definitions: T/K = t/degC + 273.15; T/K = (t/degF + 459.67) x 5/9;
 // T/K = T/degR x 5/9 (NIST SP 811 B.8 and 4.2.1.1).
