@@ -12,6 +12,13 @@ export type PressureAndLocation =
   | { region: 1 | 2 }
   | { region: 4; T: number; x: number };
 
+/**
+ * A value within this fraction of h_fg (or s_fg) of a saturated one is taken
+ * as saturated: the state evaluated along another code path may land an ulp
+ * on the other side, and a saturated liquid should come back as x = 0.
+ */
+const SATURATION_BAND = 1e-12;
+
 /** The forward property that (p, h) and (p, s) share the logic of. */
 interface Quantity {
   name: string;
@@ -44,10 +51,12 @@ function locate(p: number, value: number, quantity: Quantity): PressureAndLocati
   if (p <= REGION3_SATURATION_PRESSURE) {
     const T = saturationTemperatureRegion4(p);
     const liquid = quantity.region1(p, T);
-    if (value < liquid) return { region: 1 };
     const vapour = quantity.region2(p, T);
-    if (value > vapour) return { region: 2 };
-    return { region: 4, T, x: (value - liquid) / (vapour - liquid) };
+    const band = SATURATION_BAND * (vapour - liquid);
+    if (value < liquid - band) return { region: 1 };
+    if (value > vapour + band) return { region: 2 };
+    const x = (value - liquid) / (vapour - liquid);
+    return { region: 4, T, x: Math.min(1, Math.max(0, x)) };
   }
   if (value <= quantity.region1(p, REGION1_MAX_TEMPERATURE)) return { region: 1 };
   if (value >= quantity.region2(p, temperatureB23(p))) return { region: 2 };
