@@ -1,0 +1,247 @@
+// The case file as written: YAML keys in the trade's words, every quantity a
+// string with its unit ("42 barg", "60 t/h"). schema/case.schema.json describes
+// exactly these shapes; tests/model/schemaDrift.test.ts keeps the two in step.
+
+/** A number with its unit, e.g. "42 barg", "60 t/h", "9.5 EUR/GJ", "3 %". */
+export type QuantityText = string;
+
+export interface CaseFile {
+  format_version: 1;
+  name: string;
+  description?: string;
+  site: SiteEntry;
+  fuels?: FuelEntry[];
+  power: PowerEntry;
+  headers: HeaderEntry[];
+  boilers?: BoilerEntry[];
+  heat_recovery_boilers?: HeatRecoveryBoilerEntry[];
+  steam_imports?: SteamImportEntry[];
+  turbines?: TurbineEntry[];
+  letdowns?: LetdownEntry[];
+  users?: UserEntry[];
+  flash_tanks?: FlashTankEntry[];
+  deaerator: DeaeratorEntry;
+  machines?: MachineEntry[];
+  objective?: 'minimum_cost' | 'minimum_fuel' | 'maximum_power' | 'minimum_co2';
+  solver?: SolverEntry;
+  scenarios?: unknown[];
+  projects?: unknown[];
+}
+
+export interface SiteEntry {
+  atmospheric_pressure?: QuantityText;
+  ambient_temperature: QuantityText;
+  makeup_water: MakeupWaterEntry;
+  currency: string;
+  units: 'si' | 'us';
+  carbon_price?: QuantityText;
+}
+
+export interface MakeupWaterEntry {
+  temperature: QuantityText;
+  cost: QuantityText;
+}
+
+export interface FuelEntry {
+  id: string;
+  name?: string;
+  price: QuantityText;
+  basis: 'HHV' | 'LHV';
+  co2: QuantityText;
+}
+
+export interface PowerEntry {
+  site_demand: QuantityText;
+  import?: PowerImportEntry;
+  export?: PowerExportEntry;
+}
+
+export interface PowerImportEntry {
+  price: QuantityText;
+  max: QuantityText;
+  minimum_billed?: QuantityText;
+  shortfall_price?: QuantityText;
+  co2?: QuantityText;
+}
+
+export interface PowerExportEntry {
+  price: QuantityText;
+  max: QuantityText;
+}
+
+export interface HeaderEntry {
+  id: string;
+  name?: string;
+  pressure: QuantityText;
+  state: 'controlled' | 'floating';
+  temperature?: QuantityText;
+  enthalpy?: QuantityText;
+  venting?: 'allowed' | 'forbidden';
+  heat_loss?: QuantityText;
+}
+
+/** A flow range; a missing min is zero. */
+export interface FlowRangeEntry {
+  min?: QuantityText;
+  max: QuantityText;
+}
+
+/** A range where either end may be left open. */
+export interface OpenRangeEntry {
+  min?: QuantityText;
+  max?: QuantityText;
+}
+
+export interface EfficiencyPointEntry {
+  load: QuantityText;
+  efficiency: QuantityText;
+}
+
+export interface CyclesEntry {
+  cycles_of_concentration: number;
+}
+
+export interface BoilerEntry {
+  id: string;
+  name?: string;
+  header: string;
+  fuels: string[];
+  steam: FlowRangeEntry;
+  /** a temperature, or "saturated" */
+  outlet_temperature: QuantityText;
+  /** one efficiency, or a table against load */
+  efficiency: QuantityText | EfficiencyPointEntry[];
+  /** % of feedwater, or cycles of concentration */
+  blowdown: QuantityText | CyclesEntry;
+  /** a flash tank id or "drain" */
+  blowdown_to?: string;
+  can_switch_off?: boolean;
+}
+
+export interface SupplementaryFiringEntry {
+  fuel: string;
+  max_steam: QuantityText;
+  efficiency: QuantityText;
+}
+
+export interface HeatRecoveryBoilerEntry {
+  id: string;
+  name?: string;
+  header: string;
+  /** a fixed flow, or a range */
+  steam: QuantityText | FlowRangeEntry;
+  outlet_temperature: QuantityText;
+  blowdown: QuantityText | CyclesEntry;
+  blowdown_to?: string;
+  supplementary_firing?: SupplementaryFiringEntry;
+}
+
+export interface SteamImportEntry {
+  id: string;
+  name?: string;
+  header: string;
+  price: QuantityText;
+  min?: QuantityText;
+  max: QuantityText;
+  temperature: QuantityText;
+}
+
+export interface WillansLineEntry {
+  intercept: QuantityText;
+  slope: QuantityText;
+}
+
+export interface StageEntry {
+  /** a header id */
+  to?: string;
+  condenser_pressure?: QuantityText;
+  isentropic_efficiency?: QuantityText;
+  exhaust_enthalpy?: QuantityText;
+  exhaust_temperature?: QuantityText;
+  willans_line?: WillansLineEntry;
+  outflow?: OpenRangeEntry;
+  section_flow?: OpenRangeEntry;
+}
+
+export interface TurbineEntry {
+  id: string;
+  name?: string;
+  inlet: string;
+  stages: StageEntry[];
+  mechanical_efficiency?: QuantityText;
+  generator_efficiency?: QuantityText;
+  power?: OpenRangeEntry;
+  can_switch_off?: boolean;
+  /** "generator" or a machine / feedwater pump id */
+  drives?: string;
+}
+
+export interface DesuperheaterEntry {
+  target_temperature: QuantityText;
+  spray_water: 'feedwater' | 'makeup';
+}
+
+export interface LetdownEntry {
+  id: string;
+  name?: string;
+  from: string;
+  to: string;
+  capacity: QuantityText;
+  /** "none" for throttling only */
+  desuperheater?: 'none' | DesuperheaterEntry;
+}
+
+export interface CondensateEntry {
+  return: QuantityText;
+  temperature?: QuantityText;
+  /** a flash tank id, "deaerator" or "drain" */
+  to?: string;
+}
+
+export interface UserEntry {
+  id: string;
+  name?: string;
+  header: string;
+  steam?: QuantityText;
+  heat?: QuantityText;
+  condensate?: CondensateEntry;
+}
+
+export interface FlashTankEntry {
+  id: string;
+  name?: string;
+  pressure: QuantityText;
+  /** a header id or "atmosphere" */
+  vapour_to: string;
+  /** "deaerator", "drain" or another flash tank's id */
+  liquid_to: string;
+}
+
+export interface FeedwaterPumpEntry {
+  id: string;
+  name?: string;
+  efficiency: QuantityText;
+  motor_efficiency?: QuantityText;
+}
+
+export interface DeaeratorEntry {
+  pressure: QuantityText;
+  heating_steam: string;
+  vent: QuantityText;
+  feedwater_pumps?: FeedwaterPumpEntry[];
+}
+
+export interface MachineEntry {
+  id: string;
+  name?: string;
+  type: 'pump' | 'fan' | 'compressor';
+  shaft_power: QuantityText;
+  motor_efficiency?: QuantityText;
+}
+
+export interface SolverEntry {
+  mip_gap?: QuantityText;
+  time_limit_seconds?: number;
+  max_passes?: number;
+  enthalpy_tolerance?: QuantityText;
+}

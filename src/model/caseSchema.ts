@@ -1,0 +1,305 @@
+// The JSON Schema (draft 2020-12) of a case file, written once here and
+// shipped as schema/case.schema.json (tests/model/schemaFile.test.ts keeps the
+// file identical). Quantities are strings checked loosely here; the loader
+// parses them with src/units and reports the exact unit problem.
+//
+// Two annotation keywords help the error messages and are ignored by editors:
+// "x-quantity" names the kind of quantity a string holds, "x-message" says in
+// plain words what a oneOf / not constraint wants.
+
+type Schema = Record<string, unknown>;
+
+/** A number, then a unit: "42 barg", "1,200 kW", "-5 degC", "3 %". */
+export const QUANTITY_PATTERN = '^\\s*[-+]?[0-9][0-9,_]*(\\.[0-9]*)?([eE][-+]?[0-9]+)?\\s*[^\\s0-9.,].*$|^\\s*[-+]?\\.[0-9]+\\s*[^\\s0-9].*$';
+/** Ids: a letter, then letters, digits, underscores or hyphens. */
+export const ID_PATTERN = '^[A-Za-z][A-Za-z0-9_-]*$';
+
+export const SCHEMA_ID = 'https://steamwright.dev/schema/case.schema.json';
+
+function quantity(kind: string, example: string, description: string): Schema {
+  return { type: 'string', pattern: QUANTITY_PATTERN, 'x-quantity': kind, description, examples: [example] };
+}
+
+function quantityOr(word: string, kind: string, example: string, description: string): Schema {
+  return {
+    type: 'string',
+    anyOf: [{ const: word }, { pattern: QUANTITY_PATTERN }],
+    'x-quantity': kind,
+    'x-message': `expected "${word}" or a ${kind} such as "${example}"`,
+    description,
+    examples: [example, word],
+  };
+}
+
+function reference(description: string): Schema {
+  return { type: 'string', pattern: ID_PATTERN, description };
+}
+
+function text(description: string): Schema {
+  return { type: 'string', description };
+}
+
+function choice(values: string[], description: string): Schema {
+  return { type: 'string', enum: values, description };
+}
+
+function object(description: string, properties: Record<string, Schema>, required: string[], extra: Schema = {}): Schema {
+  return { type: 'object', description, properties, required, additionalProperties: false, ...extra };
+}
+
+function ref(name: string): Schema {
+  return { $ref: `#/$defs/${name}` };
+}
+
+function list(name: string, description: string): Schema {
+  return { type: 'array', description, items: ref(name) };
+}
+
+function exactlyOne(keys: string[], message: string): Schema {
+  return { oneOf: keys.map((key) => ({ required: [key] })), 'x-message': message };
+}
+
+const id = { type: 'string', pattern: ID_PATTERN, description: 'unique id across the whole plant, used to refer to this unit' };
+const name = text('display name');
+const percent = (description: string, example = '85 %') => quantity('percent', example, description);
+const flow = (description: string, example = '60 t/h') => quantity('massFlow', example, description);
+
+const blowdown: Schema = {
+  description: 'blowdown as a share of feedwater ("3 %") or from cycles of concentration',
+  oneOf: [percent('blowdown as a share of feedwater', '3 %'), ref('cycles')],
+  'x-message': 'expected a share of feedwater such as "3 %" or { cycles_of_concentration: 25 }',
+};
+
+const defs: Record<string, Schema> = {
+  site: object('the site: atmosphere, makeup water, currency, display units', {
+    atmospheric_pressure: quantity('pressure', '101.325 kPa', 'atmospheric pressure, the zero of gauge pressures; default 101.325 kPa'),
+    ambient_temperature: quantity('temperature', '15 degC', 'ambient air temperature'),
+    makeup_water: ref('makeupWater'),
+    currency: { type: 'string', pattern: '^[A-Z]{3}$', description: 'currency code every price is stated in, e.g. EUR, USD, GBP', examples: ['EUR'] },
+    units: choice(['si', 'us'], 'unit system for display: si (barg, degC, t/h) or us (psig, degF, klb/h)'),
+    carbon_price: quantity('massPrice', '80 EUR/t', 'price of emitted CO2 per tonne; default 0'),
+  }, ['ambient_temperature', 'makeup_water', 'currency', 'units']),
+  makeupWater: object('treated makeup water', {
+    temperature: quantity('temperature', '15 degC', 'makeup water temperature'),
+    cost: quantity('massPrice', '1.5 EUR/t', 'cost of water plus treatment per tonne'),
+  }, ['temperature', 'cost']),
+  fuel: object('a fuel', {
+    id, name,
+    price: quantity('energyPrice', '9.5 EUR/GJ', 'price per energy on the stated basis'),
+    basis: choice(['HHV', 'LHV'], 'heating-value basis of price, CO2 factor and efficiencies of boilers burning it'),
+    co2: quantity('emissionFactor', '56.1 kg/GJ', 'CO2 emitted per energy on the same basis'),
+  }, ['id', 'price', 'basis', 'co2']),
+  power: object('site electricity', {
+    site_demand: quantity('power', '12 MW', 'site electric demand'),
+    import: ref('powerImport'),
+    export: ref('powerExport'),
+  }, ['site_demand']),
+  powerImport: object('electricity bought; leave out when none may be bought', {
+    price: quantity('energyPrice', '95 EUR/MWh', 'price of imported electricity'),
+    max: quantity('power', '20 MW', 'import limit'),
+    minimum_billed: quantity('power', '2 MW', 'take-or-pay: import below this is billed anyway; default 0'),
+    shortfall_price: quantity('energyPrice', '60 EUR/MWh', 'price of each MWh of shortfall below minimum_billed'),
+    co2: quantity('emissionFactor', '0.35 kg/kWh', 'CO2 of grid electricity; default 0'),
+  }, ['price', 'max']),
+  powerExport: object('electricity sold; leave out when none may be sold', {
+    price: quantity('energyPrice', '45 EUR/MWh', 'price of exported electricity'),
+    max: quantity('power', '5 MW', 'export limit'),
+  }, ['price', 'max']),
+  header: object('a steam header', {
+    id, name,
+    pressure: quantity('pressure', '42 barg', 'header pressure'),
+    state: choice(['controlled', 'floating'], 'controlled: held at a temperature or enthalpy; floating: set by mixing'),
+    temperature: quantity('temperature', '400 degC', 'set temperature of a controlled header'),
+    enthalpy: quantity('specificEnthalpy', '3200 kJ/kg', 'set enthalpy of a controlled header'),
+    venting: choice(['allowed', 'forbidden'], 'whether steam may be vented from this header; default forbidden'),
+    heat_loss: quantity('power', '150 kW', 'fixed heat loss of the header piping; default 0'),
+  }, ['id', 'pressure', 'state'], {
+    allOf: [
+      {
+        if: { properties: { state: { const: 'controlled' } }, required: ['state'] },
+        then: exactlyOne(['temperature', 'enthalpy'], 'a controlled header needs a temperature or an enthalpy, one of the two'),
+      },
+      {
+        if: { properties: { state: { const: 'floating' } }, required: ['state'] },
+        then: {
+          not: { anyOf: [{ required: ['temperature'] }, { required: ['enthalpy'] }] },
+          'x-message': 'a floating header takes no temperature or enthalpy: its state is set by mixing',
+        },
+      },
+    ],
+  }),
+  flowRange: object('a flow range; min defaults to 0', {
+    min: flow('smallest flow', '10 t/h'),
+    max: flow('largest flow'),
+  }, ['max']),
+  openRange: object('a range; either end may be left out', {
+    min: quantity('any', '0 t/h', 'lower limit'),
+    max: quantity('any', '60 t/h', 'upper limit'),
+  }, []),
+  efficiencyPoint: object('boiler efficiency at one load', {
+    load: percent('load as a share of maximum steam', '50 %'),
+    efficiency: percent('efficiency at that load'),
+  }, ['load', 'efficiency']),
+  cycles: object('blowdown from cycles of concentration (blowdown = feedwater / cycles)', {
+    cycles_of_concentration: { type: 'number', exclusiveMinimum: 1, description: 'boiler water over feedwater concentration', examples: [25] },
+  }, ['cycles_of_concentration']),
+  boiler: object('a fired boiler', {
+    id, name,
+    header: reference('header it discharges into'),
+    fuels: { type: 'array', minItems: 1, items: reference('fuel id'), description: 'fuels it may burn' },
+    steam: ref('flowRange'),
+    outlet_temperature: quantityOr('saturated', 'temperature', '410 degC', 'outlet steam temperature, or saturated'),
+    efficiency: {
+      description: 'one efficiency ("84 %") or a table against load',
+      oneOf: [percent('efficiency at every load'), { type: 'array', minItems: 1, items: ref('efficiencyPoint') }],
+      'x-message': 'expected an efficiency such as "84 %" or a list of { load, efficiency }',
+    },
+    blowdown,
+    blowdown_to: reference('a flash tank id, or drain (default)'),
+    can_switch_off: { type: 'boolean', description: 'whether it may be switched off; default true' },
+  }, ['id', 'header', 'fuels', 'steam', 'outlet_temperature', 'efficiency', 'blowdown']),
+  supplementaryFiring: object('duct burner of a heat-recovery boiler', {
+    fuel: reference('fuel id'),
+    max_steam: flow('extra steam it can raise', '10 t/h'),
+    efficiency: percent('fuel-to-steam efficiency of the extra firing', '90 %'),
+  }, ['fuel', 'max_steam', 'efficiency']),
+  heatRecoveryBoiler: object('a waste-heat boiler', {
+    id, name,
+    header: reference('header it discharges into'),
+    steam: {
+      description: 'a fixed flow ("18 t/h") or a range',
+      oneOf: [flow('fixed steam flow', '18 t/h'), ref('flowRange')],
+      'x-message': 'expected a flow such as "18 t/h" or { min, max }',
+    },
+    outlet_temperature: quantityOr('saturated', 'temperature', '380 degC', 'outlet steam temperature, or saturated'),
+    blowdown,
+    blowdown_to: reference('a flash tank id, or drain (default)'),
+    supplementary_firing: ref('supplementaryFiring'),
+  }, ['id', 'header', 'steam', 'outlet_temperature', 'blowdown']),
+  steamImport: object('steam bought from outside the fence', {
+    id, name,
+    header: reference('header it is delivered to'),
+    price: quantity('massPrice', '25 EUR/t', 'price per tonne'),
+    min: flow('smallest flow; default 0', '0 t/h'),
+    max: flow('largest flow', '15 t/h'),
+    temperature: quantityOr('saturated', 'temperature', '250 degC', 'delivered temperature, or saturated'),
+  }, ['id', 'header', 'price', 'max', 'temperature']),
+  willansLine: object('Willans line: power = slope x flow - intercept', {
+    intercept: quantity('power', '250 kW', 'no-load loss'),
+    slope: quantity('specificEnthalpy', '200 kJ/kg', 'power per unit of flow (kW per kg/s = kJ/kg)'),
+  }, ['intercept', 'slope']),
+  stage: object('one turbine stage: the section from the previous point to this exhaust or extraction', {
+    to: reference('header the steam leaves to'),
+    condenser_pressure: quantity('pressure', '0.1 bar', 'condenser pressure of a condensing stage'),
+    isentropic_efficiency: percent('isentropic efficiency of the section', '75 %'),
+    exhaust_enthalpy: quantity('specificEnthalpy', '2950 kJ/kg', 'exhaust enthalpy'),
+    exhaust_temperature: quantity('temperature', '260 degC', 'exhaust temperature'),
+    willans_line: ref('willansLine'),
+    outflow: ref('openRange'),
+    section_flow: ref('openRange'),
+  }, [], {
+    allOf: [
+      exactlyOne(['to', 'condenser_pressure'], 'a stage needs to (a header) or condenser_pressure, one of the two'),
+      exactlyOne(['isentropic_efficiency', 'exhaust_enthalpy', 'exhaust_temperature', 'willans_line'],
+        'a stage needs one of isentropic_efficiency, exhaust_enthalpy, exhaust_temperature, willans_line'),
+    ],
+  }),
+  turbine: object('a steam turbine', {
+    id, name,
+    inlet: reference('inlet header'),
+    stages: { type: 'array', minItems: 1, items: ref('stage'), description: 'stages in flow order' },
+    mechanical_efficiency: percent('mechanical efficiency; default 98 %', '98 %'),
+    generator_efficiency: percent('generator efficiency; default 97 %', '97 %'),
+    power: ref('openRange'),
+    can_switch_off: { type: 'boolean', description: 'whether it may be stopped; default true' },
+    drives: reference('generator (default), or the id of a machine or feedwater pump'),
+  }, ['id', 'inlet', 'stages']),
+  desuperheater: object('desuperheater after a letdown valve', {
+    target_temperature: quantity('temperature', '220 degC', 'outlet temperature'),
+    spray_water: choice(['feedwater', 'makeup'], 'where the spray water comes from'),
+  }, ['target_temperature', 'spray_water']),
+  letdown: object('a pressure-reducing (letdown) station', {
+    id, name,
+    from: reference('higher-pressure header'),
+    to: reference('lower-pressure header'),
+    capacity: flow('largest flow', '40 t/h'),
+    desuperheater: {
+      description: 'none (throttling only, the default) or a desuperheater',
+      oneOf: [{ const: 'none' }, ref('desuperheater')],
+      'x-message': 'expected none or { target_temperature, spray_water }',
+    },
+  }, ['id', 'from', 'to', 'capacity']),
+  condensate: object('condensate returned by a user', {
+    return: percent('share of the steam returned as condensate', '80 %'),
+    temperature: quantity('temperature', '90 degC', 'condensate temperature'),
+    to: reference('a flash tank id, deaerator or drain'),
+  }, ['return']),
+  user: object('a process steam user', {
+    id, name,
+    header: reference('header it takes steam from'),
+    steam: flow('steam demand', '12 t/h'),
+    heat: quantity('power', '8 MW', 'heat duty, met by condensing steam'),
+    condensate: ref('condensate'),
+  }, ['id', 'header'], {
+    ...exactlyOne(['steam', 'heat'], 'a user needs steam (a flow) or heat (a duty), one of the two'),
+  }),
+  flashTank: object('a flash tank', {
+    id, name,
+    pressure: quantity('pressure', '3.5 barg', 'tank pressure'),
+    vapour_to: reference('header the flash steam goes to, or atmosphere'),
+    liquid_to: reference('deaerator, drain, or another flash tank'),
+  }, ['id', 'pressure', 'vapour_to', 'liquid_to']),
+  feedwaterPump: object('a boiler feedwater pump', {
+    id, name,
+    efficiency: percent('hydraulic efficiency', '70 %'),
+    motor_efficiency: percent('efficiency of its electric motor; leave out if only a turbine drives it', '95 %'),
+  }, ['id', 'efficiency']),
+  deaerator: object('the deaerator', {
+    pressure: quantity('pressure', '0.3 barg', 'deaerator pressure'),
+    heating_steam: reference('header that supplies heating steam'),
+    vent: percent('vent as a share of feedwater', '0.5 %'),
+    feedwater_pumps: list('feedwaterPump', 'boiler feedwater pumps'),
+  }, ['pressure', 'heating_steam', 'vent']),
+  machine: object('a machine a turbine may drive (pump, fan, compressor)', {
+    id, name,
+    type: choice(['pump', 'fan', 'compressor'], 'kind of machine'),
+    shaft_power: quantity('power', '400 kW', 'shaft power it needs while running'),
+    motor_efficiency: percent('efficiency of its electric motor; leave out if only a turbine drives it', '95 %'),
+  }, ['id', 'type', 'shaft_power']),
+  solver: object('solver options', {
+    mip_gap: percent('relative MIP gap; default 0.01 %', '0.01 %'),
+    time_limit_seconds: { type: 'number', exclusiveMinimum: 0, description: 'time limit per solve; default 60' },
+    max_passes: { type: 'integer', minimum: 1, description: 'most successive-linearisation passes; default 30' },
+    enthalpy_tolerance: quantity('specificEnthalpy', '0.1 kJ/kg', 'convergence tolerance on enthalpy; default 0.1 kJ/kg'),
+  }, []),
+};
+
+export const caseSchema: Schema = {
+  $schema: 'https://json-schema.org/draft/2020-12/schema',
+  $id: SCHEMA_ID,
+  title: 'steamwright plant case',
+  description: 'A steam plant described once: site, fuels, power, headers and equipment. Every quantity is a string with its unit.',
+  ...object('a steam plant case', {
+    format_version: { const: 1, description: 'version of this case format' },
+    name: text('plant name'),
+    description: text('free text'),
+    site: ref('site'),
+    fuels: list('fuel', 'fuels'),
+    power: ref('power'),
+    headers: { type: 'array', minItems: 1, items: ref('header'), description: 'steam headers' },
+    boilers: list('boiler', 'fired boilers'),
+    heat_recovery_boilers: list('heatRecoveryBoiler', 'waste-heat boilers'),
+    steam_imports: list('steamImport', 'purchased steam'),
+    turbines: list('turbine', 'steam turbines'),
+    letdowns: list('letdown', 'letdown stations'),
+    users: list('user', 'process steam users'),
+    flash_tanks: list('flashTank', 'flash tanks'),
+    deaerator: ref('deaerator'),
+    machines: list('machine', 'machines turbines may drive'),
+    objective: choice(['minimum_cost', 'minimum_fuel', 'maximum_power', 'minimum_co2'], 'what the optimiser minimises or maximises; default minimum_cost'),
+    solver: ref('solver'),
+    scenarios: { type: 'array', description: 'scenarios (described by the scenarios layer)' },
+    projects: { type: 'array', description: 'projects (described by the scenarios layer)' },
+  }, ['format_version', 'name', 'site', 'power', 'headers', 'deaerator']),
+  $defs: defs,
+};

@@ -1,0 +1,8 @@
+// src/model: the plant case file, its schema, loading with located issues, and the resolved plant in SI.
+export { loadCase, loadCaseText, type LoadResult } from './loadCase.js';
+export { displayPath, formatIssue, sortIssues, type CasePath, type Issue, type Severity } from './issue.js';
+export { caseSchema, QUANTITY_PATTERN, ID_PATTERN, SCHEMA_ID } from './caseSchema.js';
+export type * from './plantTypes.js';
+export type * from './caseFileTypes.js';
+export { starterCase } from './starterCase.js';
+export { summarisePlant } from './summary.js';

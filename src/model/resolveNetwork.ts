@@ -1,0 +1,181 @@
+// Letdowns, process users, flash tanks, the deaerator and driven machines.
+import { saturatedLiquid, saturationTemperature, statePT } from '../properties/index.js';
+import type { CasePath } from './issue.js';
+import type { Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, SteamUser } from './plantTypes.js';
+import type { ResolveContext } from './resolveContext.js';
+import { steamPressure } from './resolveHeaders.js';
+import { liquidDestination } from './resolveSupply.js';
+
+function headerAt(context: ResolveContext, path: CasePath, headers: Map<string, Header>): Header | undefined {
+  const id = context.reference(path, ['header']);
+  return id === undefined ? undefined : headers.get(id);
+}
+
+export function resolveLetdowns(context: ResolveContext, headers: Map<string, Header>): Letdown[] {
+  return context.entries(['letdowns']).flatMap(({ item, path }) => {
+    const from = headerAt(context, [...path, 'from'], headers);
+    const to = headerAt(context, [...path, 'to'], headers);
+    let ok = from !== undefined && to !== undefined;
+    if (from && to && to.pressure >= from.pressure) {
+      context.error('pressure-rises', [...path, 'to'],
+        `letdown goes from ${from.id} at ${context.show(from.pressure, 'pressure')} to ${to.id} at ${context.show(to.pressure, 'pressure')}; a letdown must go to a lower pressure`);
+      ok = false;
+    }
+    const capacity = context.amount([...path, 'capacity'], 'massFlow');
+    if (capacity === 0) context.error('out-of-range', [...path, 'capacity'], 'expected a capacity above zero, found "0"');
+    let desuperheater: Letdown['desuperheater'] = null;
+    const entry = item.desuperheater;
+    if (entry === undefined) {
+      context.addDefault([...path, 'desuperheater'], 'none', 'desuperheater not stated: throttling only, the outlet keeps the inlet enthalpy');
+    } else if (entry !== null && typeof entry === 'object') {
+      const targetPath = [...path, 'desuperheater', 'target_temperature'];
+      const target = context.quantity(targetPath, 'temperature');
+      const water = (entry as Record<string, unknown>).spray_water;
+      if (target !== undefined && to) {
+        const saturation = saturationTemperature(to.pressure);
+        if (target <= saturation) {
+          context.error('below-saturation', targetPath,
+            `desuperheater target ${context.text(targetPath)} is at or below saturation (${context.show(saturation, 'temperature')} at ${context.show(to.pressure, 'pressure')}); give a temperature above it`);
+          ok = false;
+        } else {
+          const state = context.property(targetPath, 'desuperheater outlet', () => statePT(to.pressure, target));
+          if (state && (water === 'feedwater' || water === 'makeup')) desuperheater = { targetTemperature: target, targetH: state.h, water };
+          else ok = false;
+        }
+      } else ok = false;
+    }
+    if (!ok || capacity === undefined || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'letdown' as const, from: from!.id, to: to!.id, capacity, desuperheater }];
+  });
+}
+
+export function resolveUsers(context: ResolveContext, headers: Map<string, Header>): SteamUser[] {
+  return context.entries(['users']).flatMap(({ item, path }) => {
+    const header = headerAt(context, [...path, 'header'], headers);
+    let demand: SteamUser['demand'] | undefined;
+    if (item.steam !== undefined && item.heat === undefined) {
+      const massFlow = context.amount([...path, 'steam'], 'massFlow');
+      if (massFlow !== undefined) demand = { kind: 'flow', massFlow };
+    } else if (item.heat !== undefined && item.steam === undefined) {
+      const heat = context.amount([...path, 'heat'], 'power');
+      if (heat !== undefined) demand = { kind: 'duty', heat };
+    }
+    const condensatePath = [...path, 'condensate'];
+    let condensate: SteamUser['condensate'] | undefined;
+    if (item.condensate === undefined) {
+      context.addDefault(condensatePath, 'no return', 'condensate not stated: none is returned, all of it is made up with fresh water');
+      if (header) {
+        const liquid = saturatedLiquid(header.pressure);
+        condensate = { returnFraction: 0, temperature: liquid.T, h: liquid.h, to: { kind: 'drain' } };
+      }
+    } else {
+      const returnFraction = context.fraction([...condensatePath, 'return']);
+      const temperaturePath = [...condensatePath, 'temperature'];
+      const temperature = context.raw(temperaturePath) === undefined ? undefined : context.quantity(temperaturePath, 'temperature');
+      let to: LiquidDestination | undefined = liquidDestination(context, [...condensatePath, 'to'], ['deaerator', 'drain']);
+      if (returnFraction !== undefined && returnFraction > 0) {
+        if (context.raw([...condensatePath, 'to']) === undefined) {
+          context.error('condensate-nowhere', condensatePath, `${context.text([...condensatePath, 'return'])} of the condensate is returned but has nowhere to go: add to (a flash tank id, deaerator or drain)`);
+        }
+        if (context.raw(temperaturePath) === undefined) {
+          context.error('missing-key', condensatePath, 'returned condensate needs a temperature, such as "90 degC"');
+        }
+      } else if (context.raw([...condensatePath, 'to']) === undefined) {
+        to = { kind: 'drain' };
+      }
+      if (header && temperature !== undefined) {
+        const saturation = saturationTemperature(header.pressure);
+        if (temperature > saturation + 1e-9) {
+          context.error('above-saturation', temperaturePath,
+            `condensate temperature ${context.text(temperaturePath)} is above saturation (${context.show(saturation, 'temperature')} at ${context.show(header.pressure, 'pressure')}); condensate is liquid at or below it`);
+        } else if (temperature <= 273.15) {
+          context.error('out-of-range', temperaturePath, `expected a condensate temperature above 0 degC, found "${context.text(temperaturePath)}"`);
+        } else {
+          const h = context.property(temperaturePath, 'condensate', () =>
+            saturation - temperature < 1e-6 ? saturatedLiquid(header.pressure).h : statePT(header.pressure, temperature).h);
+          if (h !== undefined && returnFraction !== undefined && to) condensate = { returnFraction, temperature, h, to };
+        }
+      } else if (header && returnFraction === 0 && to) {
+        const liquid = saturatedLiquid(header.pressure);
+        condensate = { returnFraction: 0, temperature: liquid.T, h: liquid.h, to };
+      }
+    }
+    if (!header || !demand || !condensate || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'user' as const, header: header.id, demand, condensate }];
+  });
+}
+
+export function resolveFlashTanks(context: ResolveContext, headers: Map<string, Header>): FlashTank[] {
+  const pressures = new Map<string, number>();
+  const entries = context.entries(['flash_tanks']);
+  for (const { item, path } of entries) {
+    const pressure = steamPressure(context, [...path, 'pressure'], { belowAtmosphereAllowed: false });
+    if (pressure !== undefined && typeof item.id === 'string') pressures.set(item.id, pressure);
+  }
+  return entries.flatMap(({ item, path }) => {
+    const pressure = typeof item.id === 'string' ? pressures.get(item.id) : undefined;
+    let vapourTo: FlashTank['vapourTo'] | undefined;
+    const vapour = context.reference([...path, 'vapour_to'], ['header'], ['atmosphere']);
+    if (vapour === 'atmosphere') vapourTo = { kind: 'atmosphere' };
+    else if (vapour !== undefined) {
+      const header = headers.get(vapour);
+      if (header && pressure !== undefined && header.pressure > pressure) {
+        context.error('pressure-rises', [...path, 'vapour_to'],
+          `flash steam at ${context.show(pressure, 'pressure')} cannot flow up to header ${header.id} at ${context.show(header.pressure, 'pressure')}; send it to a header at or below the tank pressure`);
+      } else if (header) vapourTo = { kind: 'header', id: header.id };
+    }
+    const liquidTo = liquidDestination(context, [...path, 'liquid_to'], ['deaerator', 'drain']);
+    let ok = liquidTo !== undefined;
+    if (liquidTo?.kind === 'flashTank' && pressure !== undefined) {
+      const next = pressures.get(liquidTo.id);
+      if (liquidTo.id === item.id) {
+        context.error('self-reference', [...path, 'liquid_to'], 'a flash tank cannot send its liquid to itself');
+        ok = false;
+      } else if (next !== undefined && next >= pressure) {
+        context.error('pressure-rises', [...path, 'liquid_to'],
+          `liquid at ${context.show(pressure, 'pressure')} cannot flash in ${liquidTo.id} at ${context.show(next, 'pressure')}; a cascade goes to lower pressure`);
+        ok = false;
+      }
+    }
+    if (pressure === undefined || !vapourTo || !ok || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'flashTank' as const, pressure, saturationTemperature: saturationTemperature(pressure), receives: [], vapourTo, liquidTo: liquidTo! }];
+  });
+}
+
+function motorOf(context: ResolveContext, path: CasePath): { efficiency: number } | null | undefined {
+  if (context.raw(path) === undefined) return null;
+  const efficiency = context.fraction(path, { zeroAllowed: false });
+  return efficiency === undefined ? undefined : { efficiency };
+}
+
+export function resolveDeaerator(context: ResolveContext, headers: Map<string, Header>): Deaerator | null {
+  const path = ['deaerator'];
+  const pressure = steamPressure(context, [...path, 'pressure'], { belowAtmosphereAllowed: true });
+  const heating = headerAt(context, [...path, 'heating_steam'], headers);
+  if (heating && pressure !== undefined && heating.pressure <= pressure) {
+    context.error('pressure-rises', [...path, 'heating_steam'],
+      `heating steam from ${heating.id} at ${context.show(heating.pressure, 'pressure')} cannot enter the deaerator at ${context.show(pressure, 'pressure')}; choose a header above the deaerator pressure`);
+  }
+  const vent = context.fraction([...path, 'vent']);
+  const pumps: FeedwaterPump[] = [];
+  let pumpsOk = true;
+  for (const { item, path: pumpPath } of context.entries([...path, 'feedwater_pumps'])) {
+    const efficiency = context.fraction([...pumpPath, 'efficiency'], { zeroAllowed: false });
+    const motor = motorOf(context, [...pumpPath, 'motor_efficiency']);
+    if (efficiency === undefined || motor === undefined || typeof item.id !== 'string') pumpsOk = false;
+    else pumps.push({ id: item.id, kind: 'feedwaterPump', pumpEfficiency: efficiency, motor, turbine: null });
+  }
+  if (pressure === undefined || !heating || heating.pressure <= pressure || vent === undefined || !pumpsOk) return null;
+  const liquid = saturatedLiquid(pressure);
+  return { id: 'deaerator', kind: 'deaerator', pressure, saturationTemperature: liquid.T, feedwaterH: liquid.h, heatingSteam: heating.id, ventFraction: vent, feedwaterPumps: pumps };
+}
+
+export function resolveMachines(context: ResolveContext): DrivenMachine[] {
+  return context.entries(['machines']).flatMap(({ item, path }) => {
+    const shaftPower = context.amount([...path, 'shaft_power'], 'power');
+    const motor = motorOf(context, [...path, 'motor_efficiency']);
+    const type = item.type;
+    if (shaftPower === undefined || motor === undefined || (type !== 'pump' && type !== 'fan' && type !== 'compressor') || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'machine' as const, machine: type, shaftPower, motor, turbine: null }];
+  });
+}

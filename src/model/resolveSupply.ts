@@ -1,0 +1,132 @@
+// Steam sources: fired boilers, waste-heat boilers and purchased steam.
+import type { CasePath } from './issue.js';
+import type { EfficiencyPoint, FiredBoiler, Header, HeatRecoveryBoiler, LiquidDestination, SteamImport } from './plantTypes.js';
+import type { ResolveContext } from './resolveContext.js';
+import { steamAt } from './resolveHeaders.js';
+
+/** Boiler efficiency above this is suspicious: condensing boilers on HHV only just reach it. Common practice, no single source. */
+export const SUSPICIOUS_EFFICIENCY = 0.95;
+/** Blowdown above this share of feedwater is suspicious. Common practice, no single source. */
+export const SUSPICIOUS_BLOWDOWN = 0.1;
+
+export function blowdownFraction(context: ResolveContext, path: CasePath): number | undefined {
+  const value = context.raw(path);
+  if (value !== null && typeof value === 'object') {
+    const cycles = (value as Record<string, unknown>).cycles_of_concentration;
+    // UFC 3-240-13FN: blowdown as a share of feedwater = 1 / cycles of concentration.
+    return typeof cycles === 'number' && cycles > 1 ? 1 / cycles : undefined;
+  }
+  const fraction = context.fraction(path);
+  if (fraction === undefined) return undefined;
+  if (fraction >= 1) {
+    context.error('percent-range', path, `expected a blowdown below 100 % of feedwater, found "${context.text(path)}"`);
+    return undefined;
+  }
+  if (fraction > SUSPICIOUS_BLOWDOWN) {
+    context.warn('suspicious-blowdown', path, `blowdown ${context.text(path)} of feedwater is above 10 %; check the value (typical blowdown is 1 to 8 %)`);
+  }
+  return fraction;
+}
+
+export function liquidDestination(context: ResolveContext, path: CasePath, words: ('deaerator' | 'drain')[], fallback?: LiquidDestination): LiquidDestination | undefined {
+  if (context.raw(path) === undefined) return fallback;
+  const target = context.reference(path, ['flashTank'], words);
+  if (target === undefined) return undefined;
+  if (target === 'drain') return { kind: 'drain' };
+  if (target === 'deaerator') return { kind: 'deaerator' };
+  return { kind: 'flashTank', id: target };
+}
+
+function efficiencyTable(context: ResolveContext, path: CasePath): EfficiencyPoint[] | undefined {
+  const value = context.raw(path);
+  const check = (pointPath: CasePath, efficiency: number | undefined) => {
+    if (efficiency !== undefined && efficiency > SUSPICIOUS_EFFICIENCY) {
+      context.warn('suspicious-efficiency', pointPath, `boiler efficiency ${context.text(pointPath)} is above 95 %; check the value and its heating-value basis`);
+    }
+  };
+  if (typeof value === 'string') {
+    const efficiency = context.fraction(path, { zeroAllowed: false });
+    check(path, efficiency);
+    return efficiency === undefined ? undefined : [{ load: 1, efficiency }];
+  }
+  if (!Array.isArray(value)) return undefined;
+  const points: EfficiencyPoint[] = [];
+  let complete = true;
+  value.forEach((_, index) => {
+    const load = context.fraction([...path, index, 'load'], { zeroAllowed: false });
+    const efficiency = context.fraction([...path, index, 'efficiency'], { zeroAllowed: false });
+    check([...path, index, 'efficiency'], efficiency);
+    if (load === undefined || efficiency === undefined) complete = false;
+    else if (points.some((point) => point.load === load)) {
+      context.error('duplicate-load', [...path, index, 'load'], `load ${context.text([...path, index, 'load'])} appears twice in the efficiency table`);
+      complete = false;
+    } else points.push({ load, efficiency });
+  });
+  return complete && points.length > 0 ? points.sort((a, b) => a.load - b.load) : undefined;
+}
+
+function headerOf(context: ResolveContext, path: CasePath, headers: Map<string, Header>): Header | undefined {
+  const id = context.reference(path, ['header']);
+  return id === undefined ? undefined : headers.get(id);
+}
+
+export function resolveBoilers(context: ResolveContext, headers: Map<string, Header>): FiredBoiler[] {
+  return context.entries(['boilers']).flatMap(({ item, path }) => {
+    const header = headerOf(context, [...path, 'header'], headers);
+    const fuelList = Array.isArray(item.fuels) ? item.fuels : [];
+    const fuels = fuelList.map((_, index) => context.reference([...path, 'fuels', index], ['fuel']));
+    const steam = context.range([...path, 'steam'], 'massFlow');
+    if (steam.max === 0) context.error('out-of-range', [...path, 'steam', 'max'], 'expected a maximum steam flow above zero, found "0"');
+    const outlet = header && steamAt(context, [...path, 'outlet_temperature'], header.pressure, 'boiler outlet temperature');
+    const efficiency = efficiencyTable(context, [...path, 'efficiency']);
+    const blowdown = blowdownFraction(context, [...path, 'blowdown']);
+    if (item.blowdown_to === undefined) context.addDefault([...path, 'blowdown_to'], 'drain', 'blowdown destination not stated: blowdown goes to drain');
+    const blowdownTo = liquidDestination(context, [...path, 'blowdown_to'], ['drain'], { kind: 'drain' });
+    if (item.can_switch_off === undefined) context.addDefault([...path, 'can_switch_off'], 'true', 'on/off not stated: the optimiser may switch this boiler off');
+    if (!header || !outlet || !efficiency || blowdown === undefined || !blowdownTo || typeof item.id !== 'string' || fuels.some((fuel) => fuel === undefined) || fuels.length === 0) return [];
+    return [{
+      id: item.id, kind: 'boiler' as const, header: header.id, fuels: fuels as string[], steam, outlet, efficiency,
+      blowdownFraction: blowdown, blowdownTo, canSwitchOff: item.can_switch_off !== false,
+    }];
+  });
+}
+
+export function resolveHeatRecoveryBoilers(context: ResolveContext, headers: Map<string, Header>): HeatRecoveryBoiler[] {
+  return context.entries(['heat_recovery_boilers']).flatMap(({ item, path }) => {
+    const header = headerOf(context, [...path, 'header'], headers);
+    let steam: { min: number; max: number } | undefined;
+    if (typeof item.steam === 'string') {
+      const fixed = context.amount([...path, 'steam'], 'massFlow');
+      steam = fixed === undefined ? undefined : { min: fixed, max: fixed };
+    } else if (item.steam !== null && typeof item.steam === 'object') {
+      steam = context.range([...path, 'steam'], 'massFlow');
+    }
+    const outlet = header && steamAt(context, [...path, 'outlet_temperature'], header.pressure, 'outlet temperature');
+    const blowdown = blowdownFraction(context, [...path, 'blowdown']);
+    if (item.blowdown_to === undefined) context.addDefault([...path, 'blowdown_to'], 'drain', 'blowdown destination not stated: blowdown goes to drain');
+    const blowdownTo = liquidDestination(context, [...path, 'blowdown_to'], ['drain'], { kind: 'drain' });
+    let firing: HeatRecoveryBoiler['supplementaryFiring'] = null;
+    let firingOk = true;
+    if (item.supplementary_firing !== undefined) {
+      const firingPath = [...path, 'supplementary_firing'];
+      const fuel = context.reference([...firingPath, 'fuel'], ['fuel']);
+      const maxSteam = context.amount([...firingPath, 'max_steam'], 'massFlow');
+      const efficiency = context.fraction([...firingPath, 'efficiency'], { zeroAllowed: false });
+      if (fuel === undefined || maxSteam === undefined || efficiency === undefined) firingOk = false;
+      else firing = { fuel, maxSteam, efficiency };
+    }
+    if (!header || !steam || !outlet || blowdown === undefined || !blowdownTo || !firingOk || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'heatRecoveryBoiler' as const, header: header.id, steam, outlet, blowdownFraction: blowdown, blowdownTo, supplementaryFiring: firing }];
+  });
+}
+
+export function resolveSteamImports(context: ResolveContext, headers: Map<string, Header>): SteamImport[] {
+  return context.entries(['steam_imports']).flatMap(({ item, path }) => {
+    const header = headerOf(context, [...path, 'header'], headers);
+    const price = context.amount([...path, 'price'], 'massPrice');
+    const flow = context.range(path, 'massFlow');
+    const delivered = header && steamAt(context, [...path, 'temperature'], header.pressure, 'delivered steam temperature');
+    if (!header || price === undefined || !delivered || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'steamImport' as const, header: header.id, price, flow, delivered }];
+  });
+}
