@@ -1,0 +1,19 @@
+import type { LinearModel } from './linearModel.js';
+import type { SolveResult } from './result.js';
+
+export interface SolveOptions {
+  /** Wall-clock limit per solve, seconds. For javascript-lp-solver it is the watchdog limit (default 10 s). */
+  timeLimitSeconds?: number;
+  /** HiGHS presolve; default 'choose'. */
+  presolve?: 'on' | 'off' | 'choose';
+  /** Relative MIP gap at which HiGHS may stop; HiGHS default 1e-4. */
+  mipRelativeGap?: number;
+  /** Tolerance of our own primal check of every returned point; default 1e-6 relative. */
+  feasibilityTolerance?: number;
+}
+
+/** One solver behind one small interface; results are keyed by our own names. */
+export interface SolverBackend {
+  readonly name: string;
+  solve(model: LinearModel, options?: SolveOptions): Promise<SolveResult>;
+}
