@@ -1,6 +1,9 @@
 // Every command of the steamwright CLI, in the order `--help` lists them.
 import type { CommandModule } from 'yargs';
+import { checkCommand } from './check.js';
+import { initCommand } from './init.js';
+import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [stateCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, checkCommand, initCommand, stateCommand];

@@ -1,0 +1,60 @@
+// `steamwright solve CASE`: the best operating point, its audited balance and
+// the marginal value of steam at every header.
+import type { Argv, CommandModule } from 'yargs';
+import { getBackend, toLpFormat, type BackendName } from '../../lp/index.js';
+import { formatIssue, loadCase, type Objective } from '../../model/index.js';
+import { plantResult, solvePlant } from '../../plant/index.js';
+import { solveSummary, writeFileAtomic } from '../../report/index.js';
+import { CliError, EXIT_PROBLEMS } from '../errors.js';
+
+interface SolveArgs {
+  case: string;
+  objective?: string;
+  json: boolean;
+  'export-lp'?: string;
+  solver: BackendName;
+}
+
+/** Command-line words for the objectives. */
+export const OBJECTIVE_WORDS: Record<string, Objective> = {
+  'min-cost': 'minimumCost',
+  'min-fuel': 'minimumFuel',
+  'max-power': 'maximumPower',
+  'min-co2': 'minimumCo2',
+};
+
+export const solveCommand: CommandModule<object, SolveArgs> = {
+  command: 'solve <case>',
+  describe: 'Find the best operating point of a plant case and print its audited steam balance',
+  builder: (yargs: Argv<object>) =>
+    yargs
+      .positional('case', { type: 'string', demandOption: true, describe: 'the plant case file (YAML)' })
+      .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
+      .option('json', { type: 'boolean', default: false, describe: 'print the whole result as JSON (SI units)' })
+      .option('export-lp', { type: 'string', describe: 'also write the final linear model in CPLEX LP format to FILE' })
+      .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
+      .example('$0 solve cases/mill.yaml', 'solve the demo plant')
+      .example('$0 solve cases/mill.yaml --objective max-power --json', 'most on-site power, as JSON') as Argv<SolveArgs>,
+  handler: async (args) => {
+    const loaded = await loadCase(args.case);
+    if (!loaded.ok) {
+      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
+      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
+      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; nothing was solved`, EXIT_PROBLEMS);
+    }
+    const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
+    const outcome = await solvePlant(loaded.plant, { objective, backend: getBackend(args.solver) });
+    if (!outcome.ok) throw new CliError(`${args.case}: ${outcome.message}`, EXIT_PROBLEMS);
+    const result = plantResult(outcome);
+    if (args['export-lp']) {
+      try {
+        await writeFileAtomic(args['export-lp'], toLpFormat(outcome.pass.context.model).text);
+      } catch (error) {
+        throw new CliError(`--export-lp: cannot write "${args['export-lp']}": ${(error as Error).message}`, EXIT_PROBLEMS);
+      }
+    }
+    process.stdout.write(
+      args.json ? `${JSON.stringify(result, null, 2)}\n` : solveSummary(result, { atmosphericPressure_MPa: loaded.plant.site.atmosphericPressure }),
+    );
+  },
+};

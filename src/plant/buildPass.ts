@@ -1,0 +1,109 @@
+// One pass of the successive linearisation: with every property point fixed,
+// the plant becomes a linear model.
+import { expr, type LinearExpression, type Variable } from '../lp/index.js';
+import type { Objective, Plant } from '../model/index.js';
+import { BuildContext, GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
+import type { UnitContribution } from './contribution.js';
+import { MAKEUP } from './network.js';
+
+/** Penalty per kg/s (or per kW) of balance slack when diagnosing a case that cannot be met. */
+export const SLACK_PENALTY = 1e7;
+
+export interface BalanceSlack {
+  row: string;
+  node: string;
+  quantity: 'mass' | 'energy';
+  /** supplied from nowhere: the node is short */
+  short: Variable;
+  /** taken to nowhere: the node has a surplus it cannot shed */
+  surplus: Variable;
+}
+
+export interface Pass {
+  context: BuildContext;
+  slacks: BalanceSlack[];
+  /** the objective's components, for totals */
+  costs: Map<CostComponent, LinearExpression>;
+}
+
+export function massRowName(node: string): string {
+  return `${node}.mass`;
+}
+
+export function energyRowName(node: string): string {
+  return `${node}.energy`;
+}
+
+export function buildPass(
+  plant: Plant,
+  contributions: readonly UnitContribution[],
+  headerEnthalpy: ReadonlyMap<string, number>,
+  objective: Objective,
+  withSlack = false,
+): Pass {
+  const context = new BuildContext(plant, headerEnthalpy, withSlack);
+  for (const unit of contributions) unit.build(context);
+  for (const unit of contributions) unit.finish?.(context);
+
+  // Makeup water is bought wherever it is used.
+  const makeup = expr();
+  for (const stream of context.streamsOutOf(MAKEUP)) makeup.addExpression(stream.flow);
+  context.cost.set('water', expr().addExpression(makeup, T_PER_H_PER_KG_S * plant.site.makeupWater.cost));
+
+  // Carbon is priced on every tonne emitted.
+  if (plant.site.carbonPrice > 0) context.addCost('carbon', expr().addExpression(context.co2, plant.site.carbonPrice / 1000));
+
+  const slacks: BalanceSlack[] = [];
+  for (const node of context.nodes.values()) {
+    const mass = expr();
+    const energy = expr();
+    for (const stream of context.streamsInto(node.id)) {
+      mass.addExpression(stream.flow);
+      energy.addExpression(stream.flow, stream.h);
+    }
+    for (const stream of context.streamsOutOf(node.id)) {
+      mass.addExpression(stream.flow, -1);
+      energy.addExpression(stream.flow, -stream.h);
+    }
+    energy.addConstant(-node.heatLoss);
+    if (withSlack) slacks.push(addSlack(context, node.id, 'mass', mass));
+    context.model.addRow(massRowName(node.id), mass, '=', 0);
+    if (node.energyRow) {
+      if (withSlack) slacks.push(addSlack(context, node.id, 'energy', energy));
+      context.model.addRow(energyRowName(node.id), energy, '=', 0);
+    }
+  }
+
+  const goal = objectiveExpression(context, objective);
+  if (withSlack) for (const slack of slacks) goal.expression.add(slack.short, SLACK_PENALTY * goal.sign).add(slack.surplus, SLACK_PENALTY * goal.sign);
+  context.model.setObjective(goal.sense, goal.expression);
+  return { context, slacks, costs: context.cost };
+}
+
+function addSlack(context: BuildContext, node: string, quantity: 'mass' | 'energy', balance: LinearExpression): BalanceSlack {
+  const short = context.variable(`${node}.${quantity}.short`);
+  const surplus = context.variable(`${node}.${quantity}.surplus`);
+  balance.add(short, 1).add(surplus, -1);
+  return { row: quantity === 'mass' ? massRowName(node) : energyRowName(node), node, quantity, short, surplus };
+}
+
+/** Total cost per hour over every component. */
+export function totalCost(context: BuildContext): LinearExpression {
+  const total = expr();
+  for (const component of context.cost.values()) total.addExpression(component);
+  return total;
+}
+
+function objectiveExpression(context: BuildContext, objective: Objective): { sense: 'minimize' | 'maximize'; sign: 1 | -1; expression: LinearExpression } {
+  const cost = totalCost(context);
+  // A tiny cost term breaks ties among the many optima of the physical objectives.
+  const tieBreak = 1e-6;
+  if (objective === 'minimumCost') return { sense: 'minimize', sign: 1, expression: cost };
+  if (objective === 'minimumFuel') {
+    const fuel = expr();
+    for (const fired of context.fuel.values()) fuel.addExpression(fired, GJ_PER_KWH);
+    return { sense: 'minimize', sign: 1, expression: fuel.addExpression(cost, tieBreak) };
+  }
+  if (objective === 'minimumCo2') return { sense: 'minimize', sign: 1, expression: context.co2.clone().addExpression(cost, tieBreak) };
+  return { sense: 'maximize', sign: -1, expression: context.generation.clone().addExpression(cost, -tieBreak) };
+}

@@ -1,0 +1,114 @@
+// The builder's workspace for one pass: the linear model being written, the
+// streams, the site power balance and the cost, fuel and CO2 ledgers.
+import { LinearModel, expr, type LinearExpression, type Variable, type VariableOptions } from '../lp/index.js';
+import type { Plant } from '../model/index.js';
+import type { BalanceNode, Stream } from './network.js';
+
+export type CostComponent = 'fuel' | 'power' | 'steam' | 'water' | 'carbon';
+
+/** GJ per hour in one kW sustained for an hour. */
+export const GJ_PER_KWH = 0.0036;
+/** tonnes per hour in one kg/s. */
+export const T_PER_H_PER_KG_S = 3.6;
+
+export class BuildContext {
+  readonly model: LinearModel;
+  readonly streams: Stream[] = [];
+  readonly nodes = new Map<string, BalanceNode>();
+  /** currency per hour, by component */
+  readonly cost = new Map<CostComponent, LinearExpression>();
+  /** fuel fired, kW, by fuel id */
+  readonly fuel = new Map<string, LinearExpression>();
+  /** CO2 emitted, kg/h */
+  readonly co2 = expr();
+  /** electricity made on site, kW */
+  readonly generation = expr();
+  /** electricity used by modelled motors and pumps, kW (site demand is added by the builder) */
+  readonly electricLoad = expr();
+  /** feedwater pumping shaft power, kW, declared by every unit fed from the deaerator */
+  readonly pumpShaft = expr();
+  /** shaft power supplied to a driven machine or pump by turbines, kW, by machine id */
+  readonly shaftSupply = new Map<string, LinearExpression>();
+  /** rows named per unit, so reports can find a unit's limits */
+  readonly unitRows = new Map<string, string[]>();
+
+  constructor(
+    readonly plant: Plant,
+    /** enthalpy of each header for this pass, kJ/kg */
+    readonly headerEnthalpy: ReadonlyMap<string, number>,
+    /** slack on every balance, for diagnosing a case that cannot be met */
+    readonly withSlack: boolean,
+  ) {
+    this.model = new LinearModel(plant.name);
+  }
+
+  variable(name: string, options: VariableOptions = {}): Variable {
+    return this.model.addVariable(name, options);
+  }
+
+  /** A binary, or the constant 1 when the unit may not switch off. */
+  onOff(name: string, canSwitchOff: boolean): Variable | null {
+    return canSwitchOff ? this.model.addVariable(name, { type: 'binary' }) : null;
+  }
+
+  row(owner: string, name: string, expression: LinearExpression, sense: '<=' | '>=' | '=', rhs: number): void {
+    this.model.addRow(name, expression, sense, rhs);
+    const rows = this.unitRows.get(owner) ?? [];
+    rows.push(name);
+    this.unitRows.set(owner, rows);
+  }
+
+  h(headerId: string): number {
+    const value = this.headerEnthalpy.get(headerId);
+    if (value === undefined) throw new Error(`no enthalpy for header "${headerId}". The builder must set every header's point first.`);
+    return value;
+  }
+
+  pressure(headerId: string): number {
+    const header = this.plant.headers.find((candidate) => candidate.id === headerId);
+    if (!header) throw new Error(`unknown header "${headerId}". The loader should have caught this reference.`);
+    return header.pressure;
+  }
+
+  stream(stream: Stream): Stream {
+    this.streams.push(stream);
+    return stream;
+  }
+
+  node(node: BalanceNode): void {
+    if (this.nodes.has(node.id)) throw new Error(`balance node "${node.id}" declared twice.`);
+    this.nodes.set(node.id, node);
+  }
+
+  supplyShaft(machineId: string, kW: LinearExpression): void {
+    const ledger = this.shaftSupply.get(machineId) ?? expr();
+    ledger.addExpression(kW);
+    this.shaftSupply.set(machineId, ledger);
+  }
+
+  /** Streams entering or leaving a node, as declared so far. */
+  streamsInto(id: string): Stream[] {
+    return this.streams.filter((stream) => stream.to === id);
+  }
+
+  streamsOutOf(id: string): Stream[] {
+    return this.streams.filter((stream) => stream.from === id);
+  }
+
+  addCost(component: CostComponent, perHour: LinearExpression): void {
+    const ledger = this.cost.get(component) ?? expr();
+    ledger.addExpression(perHour);
+    this.cost.set(component, ledger);
+  }
+
+  /** Fuel fired, kW of the fuel's heating value; its cost and CO2 follow from the fuel. */
+  addFuel(fuelId: string, firedKW: LinearExpression): void {
+    const fuel = this.plant.fuels.find((candidate) => candidate.id === fuelId);
+    if (!fuel) throw new Error(`unknown fuel "${fuelId}". The loader should have caught this reference.`);
+    const ledger = this.fuel.get(fuelId) ?? expr();
+    ledger.addExpression(firedKW);
+    this.fuel.set(fuelId, ledger);
+    this.addCost('fuel', expr().addExpression(firedKW, GJ_PER_KWH * fuel.price));
+    this.co2.addExpression(firedKW, GJ_PER_KWH * fuel.co2);
+  }
+}

@@ -1,0 +1,34 @@
+// What each equipment kind gives the linear model. The builder loops over these
+// and never asks what kind a unit is.
+import type { BuildContext } from './context.js';
+import type { PassSolution } from './passSolution.js';
+
+export interface UnitReport {
+  id: string;
+  kind: string;
+  /** a short description of the load, e.g. "42.0 t/h" is left to the report; here numbers */
+  values: Record<string, number | string | boolean | null>;
+  /** limits the unit sits at in the solution, in words */
+  binding: string[];
+}
+
+export interface PointChange {
+  /** what moved, e.g. "hp.h" or "st1.stage2.h" */
+  what: string;
+  /** absolute change, in the unit of `unit` */
+  change: number;
+  unit: 'kJ/kg' | 'kg/s' | 'fraction';
+}
+
+export interface UnitContribution {
+  readonly id: string;
+  readonly kind: string;
+  /** Declares variables, streams, rows and costs for one pass, at the current property points. */
+  build(context: BuildContext): void;
+  /** Moves this unit's own property points to agree with the solution; returns what changed. */
+  update?(solution: PassSolution, headerEnthalpy: (id: string) => number): PointChange[];
+  /** The unit's results from the final pass. */
+  report(solution: PassSolution): UnitReport;
+  /** Runs after every unit has built: for rows that need streams or loads declared by others. */
+  finish?(context: BuildContext): void;
+}

@@ -1,0 +1,13 @@
+export { solvePlant, initialHeaderEnthalpy, AUDIT_TOLERANCE, type PlantOutcome, type SolvePlantOptions, type PassRecord } from './solvePlant.js';
+export { plantResult, type PlantResult, type HeaderResult, type StreamResult, type Totals, type Kpis } from './results.js';
+export { auditPass, type Audit, type BalanceResidual } from './audit.js';
+export { buildPass, massRowName, energyRowName, type Pass } from './buildPass.js';
+export { contributionsOf } from './contributions.js';
+export type { UnitContribution, UnitReport, PointChange } from './contribution.js';
+export type { Diagnosis, Shortfall } from './diagnose.js';
+export { flashSplit, type FlashSplit } from './physics/flash.js';
+export { sprayWaterRatio } from './physics/desuperheater.js';
+export { boilerFuel, blowdownFromCycles, blowdownFromFraction } from './physics/boilerFuel.js';
+export { expandIsentropic, expandToEnthalpy, impliedEfficiency, theoreticalSteamRate, type StageExpansion } from './physics/turbineStage.js';
+export { willansPower } from './physics/willans.js';
+export { PlantPhysicsError } from './units/user.js';

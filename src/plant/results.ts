@@ -1,0 +1,215 @@
+// The solved plant as plain data: headers, streams, units, totals, KPIs and
+// the audit, in SI numbers. The report layer formats it; `--json` prints it.
+import { statePH } from '../properties/index.js';
+import type { Audit } from './audit.js';
+import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
+import type { UnitReport } from './contribution.js';
+import { energyRowName, massRowName } from './buildPass.js';
+import { ATMOSPHERE } from './network.js';
+import type { PassRecord, PlantOutcome } from './solvePlant.js';
+
+export interface StreamResult {
+  from: string;
+  to: string;
+  kind: string;
+  mass_kg_s: number;
+  h_kJ_kg: number;
+  p_MPa: number;
+  T_K: number | null;
+}
+
+export interface HeaderResult {
+  id: string;
+  name: string;
+  pressure_MPa: number;
+  T_K: number;
+  h_kJ_kg: number;
+  state: 'controlled' | 'floating';
+  /** d(objective)/d(one more tonne used at this header): currency per t for min-cost */
+  marginal_value_per_t: number | null;
+  inflow_kg_s: number;
+  outflow_kg_s: number;
+  inflows: { from: string; kind: string; mass_kg_s: number }[];
+  outflows: { to: string; kind: string; mass_kg_s: number }[];
+  vent_kg_s: number;
+  heat_loss_kW?: number;
+}
+
+export interface Totals {
+  cost_per_h: number;
+  cost_by_component_per_h: Record<CostComponent, number>;
+  fuel_kW: number;
+  fuel_GJ_per_h: number;
+  power_generated_kW: number;
+  power_imported_kW: number;
+  power_exported_kW: number;
+  site_demand_kW: number;
+  modelled_loads_kW: number;
+  makeup_kg_s: number;
+  vented_kg_s: number;
+  let_down_kg_s: number;
+  steam_raised_kg_s: number;
+  process_steam_kg_s: number;
+  process_heat_kW: number;
+  co2_kg_per_h: number;
+}
+
+export interface Kpis {
+  /** heat absorbed by fired boilers (and duct firing) over their fuel */
+  boiler_fuel_to_steam_efficiency: number | null;
+  /** condensate returned over process steam used */
+  condensate_return_fraction: number | null;
+  /** steam through letdowns over steam raised */
+  let_down_fraction: number | null;
+  /** steam vented (headers, flash tanks, deaerator) over steam raised */
+  vented_fraction: number | null;
+  /** turbine power per tonne of throttle steam, kWh/t */
+  power_per_throttle_t_kWh: number | null;
+  /** fuel beyond what the process heat alone would need at the boilers' efficiency, per kWh generated: kJ/kWh */
+  fuel_chargeable_to_power_kJ_per_kWh: number | null;
+  /** (useful process heat + net power) / fuel energy */
+  site_useful_energy_efficiency: number | null;
+}
+
+export interface PlantResult {
+  plant: string;
+  objective: string;
+  backend: string;
+  currency: string;
+  unit_system: 'si' | 'us';
+  headers: HeaderResult[];
+  streams: StreamResult[];
+  units: UnitReport[];
+  totals: Totals;
+  kpis: Kpis;
+  audit: {
+    max_mass_residual_kg_s: number;
+    max_energy_residual_kW: number;
+    worst_relative: number;
+    worst: string;
+    balances: Audit['balances'];
+  };
+  passes: PassRecord[];
+  marginal_power_value_per_kWh: number | null;
+}
+
+export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): PlantResult {
+  const { plant, pass, solution, audit } = outcome;
+  const context = pass.context;
+  const units = outcome.contributions.map((unit) => unit.report(solution));
+  const byId = new Map(units.map((unit) => [unit.id, unit]));
+  const num = (unit: UnitReport | undefined, key: string): number => {
+    const value = unit?.values[key];
+    return typeof value === 'number' ? value : 0;
+  };
+
+  const streams: StreamResult[] = context.streams.map((stream) => {
+    let temperature: number | null = null;
+    try {
+      temperature = statePH(stream.p, stream.h).T;
+    } catch {
+      temperature = null;
+    }
+    return { from: stream.from, to: stream.to, kind: stream.kind, mass_kg_s: solution.evaluate(stream.flow), h_kJ_kg: stream.h, p_MPa: stream.p, T_K: temperature };
+  });
+
+  const headers: HeaderResult[] = plant.headers.map((header) => {
+    const h = context.h(header.id);
+    const inflows = streams.filter((stream) => stream.to === header.id);
+    const outflows = streams.filter((stream) => stream.from === header.id);
+    // One more kg/s drawn at h moves the mass row by 1 and, on a controlled
+    // header, the energy row by h: its value is the sum of both prices.
+    const massPrice = solution.shadowPrice(massRowName(header.id));
+    const energyPrice = header.state.kind === 'controlled' ? solution.shadowPrice(energyRowName(header.id)) : 0;
+    const dual = massPrice === null || energyPrice === null ? null : massPrice + h * energyPrice;
+    const result: HeaderResult = {
+      id: header.id,
+      name: header.name,
+      pressure_MPa: header.pressure,
+      T_K: statePH(header.pressure, h).T,
+      h_kJ_kg: h,
+      state: header.state.kind,
+      marginal_value_per_t: dual === null ? null : dual / T_PER_H_PER_KG_S,
+      inflow_kg_s: inflows.reduce((total, stream) => total + stream.mass_kg_s, 0),
+      outflow_kg_s: outflows.reduce((total, stream) => total + stream.mass_kg_s, 0),
+      inflows: inflows.map((stream) => ({ from: stream.from, kind: stream.kind, mass_kg_s: stream.mass_kg_s })),
+      outflows: outflows.map((stream) => ({ to: stream.to, kind: stream.kind, mass_kg_s: stream.mass_kg_s })),
+      vent_kg_s: outflows.filter((stream) => stream.to === ATMOSPHERE).reduce((total, stream) => total + stream.mass_kg_s, 0),
+    };
+    if (header.heatLoss > 0) result.heat_loss_kW = header.heatLoss;
+    return result;
+  });
+
+  const cost = {} as Record<CostComponent, number>;
+  for (const component of ['fuel', 'power', 'steam', 'water', 'carbon'] as CostComponent[]) {
+    const ledger = context.cost.get(component);
+    cost[component] = ledger ? solution.evaluate(ledger) : 0;
+  }
+  let fuel = 0;
+  for (const fired of context.fuel.values()) fuel += solution.evaluate(fired);
+  const grid = byId.get('grid');
+  const sum = (kind: string, key: string): number => units.filter((unit) => unit.kind === kind).reduce((total, unit) => total + num(unit, key), 0);
+  const vented = streams.filter((stream) => stream.to === ATMOSPHERE).reduce((total, stream) => total + stream.mass_kg_s, 0);
+  const steamRaised = sum('boiler', 'steam_kg_s') + sum('heatRecoveryBoiler', 'steam_kg_s') + sum('steamImport', 'steam_kg_s');
+  const processSteam = sum('user', 'steam_kg_s');
+  const processHeat = sum('user', 'heat_kW');
+  const generated = num(grid, 'generated_kW');
+  const loads = num(grid, 'modelled_loads_kW');
+  const totals: Totals = {
+    cost_per_h: Object.values(cost).reduce((total, value) => total + value, 0),
+    cost_by_component_per_h: cost,
+    fuel_kW: fuel,
+    fuel_GJ_per_h: fuel * GJ_PER_KWH,
+    power_generated_kW: generated,
+    power_imported_kW: num(grid, 'import_kW'),
+    power_exported_kW: num(grid, 'export_kW'),
+    site_demand_kW: plant.power.siteDemand,
+    modelled_loads_kW: loads,
+    makeup_kg_s: streams.filter((stream) => stream.from === 'makeup').reduce((total, stream) => total + stream.mass_kg_s, 0),
+    vented_kg_s: vented,
+    let_down_kg_s: sum('letdown', 'steam_kg_s'),
+    steam_raised_kg_s: steamRaised,
+    process_steam_kg_s: processSteam,
+    process_heat_kW: processHeat,
+    co2_kg_per_h: solution.evaluate(context.co2),
+  };
+
+  const firedHeat = sum('boiler', 'heat_absorbed_kW');
+  const firedFuel = sum('boiler', 'fuel_kW');
+  const boilerEfficiency = firedFuel > 0 ? firedHeat / firedFuel : null;
+  const throttle = sum('turbine', 'inlet_kg_s');
+  const turbinePower = sum('turbine', 'power_kW');
+  const ratio = (a: number, b: number): number | null => (b > 1e-12 ? a / b : null);
+  const kpis: Kpis = {
+    boiler_fuel_to_steam_efficiency: boilerEfficiency,
+    condensate_return_fraction: ratio(sum('user', 'condensate_returned_kg_s'), processSteam),
+    let_down_fraction: ratio(totals.let_down_kg_s, steamRaised),
+    vented_fraction: ratio(vented, steamRaised),
+    power_per_throttle_t_kWh: ratio(turbinePower, throttle * T_PER_H_PER_KG_S),
+    fuel_chargeable_to_power_kJ_per_kWh:
+      boilerEfficiency && generated > 0 ? ((fuel - processHeat / boilerEfficiency) * 3600) / generated : null,
+    site_useful_energy_efficiency: ratio(processHeat + generated - loads, fuel),
+  };
+
+  return {
+    plant: plant.name,
+    objective: outcome.objective,
+    backend: outcome.backend,
+    currency: plant.site.currency,
+    unit_system: plant.site.unitSystem,
+    headers,
+    streams,
+    units,
+    totals,
+    kpis,
+    audit: {
+      max_mass_residual_kg_s: audit.maxMassResidual,
+      max_energy_residual_kW: audit.maxEnergyResidual,
+      worst_relative: audit.worstRelative,
+      worst: audit.worstDescription,
+      balances: audit.balances,
+    },
+    passes: outcome.passes,
+    marginal_power_value_per_kWh: solution.shadowPrice('site.power'),
+  };
+}

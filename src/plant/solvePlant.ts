@@ -1,0 +1,129 @@
+// Successive linearisation: fix the property points, solve the linear model,
+// move the points to agree with the flows, and repeat until nothing moves.
+import { highsBackend, type SolveResult, type SolverBackend } from '../lp/index.js';
+import type { Objective, Plant } from '../model/index.js';
+import { saturatedVapour } from '../properties/index.js';
+import { auditPass, type Audit } from './audit.js';
+import { buildPass, type Pass } from './buildPass.js';
+import type { PointChange, UnitContribution } from './contribution.js';
+import { contributionsOf } from './contributions.js';
+import { diagnose, type Diagnosis } from './diagnose.js';
+import { passSolution, type PassSolution } from './passSolution.js';
+import { PlantPhysicsError } from './units/user.js';
+
+export interface SolvePlantOptions {
+  objective?: Objective;
+  backend?: SolverBackend;
+  /** largest enthalpy change between passes for convergence, kJ/kg (default from the case) */
+  enthalpyTolerance?: number;
+  maxPasses?: number;
+}
+
+export interface PassRecord {
+  pass: number;
+  objective: number;
+  /** the largest change of any property point after this pass */
+  largestChange: PointChange | null;
+  solveMs: number;
+}
+
+export type PlantOutcome =
+  | { ok: true; plant: Plant; objective: Objective; pass: Pass; solution: PassSolution; result: SolveResult; headerEnthalpy: Map<string, number>; contributions: UnitContribution[]; passes: PassRecord[]; audit: Audit; backend: string }
+  | { ok: false; plant: Plant; reason: 'infeasible' | 'not_converged' | 'physics' | 'audit' | 'solver'; message: string; diagnosis?: Diagnosis; passes: PassRecord[] };
+
+/** Audit residuals above this relative size fail the solve. */
+export const AUDIT_TOLERANCE = 1e-6;
+
+export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}): Promise<PlantOutcome> {
+  const objective = options.objective ?? plant.objective;
+  const backend = options.backend ?? highsBackend;
+  const tolerance = options.enthalpyTolerance ?? plant.solver.enthalpyTolerance;
+  const maxPasses = options.maxPasses ?? plant.solver.maxPasses;
+  const contributions = contributionsOf(plant);
+  const headerEnthalpy = initialHeaderEnthalpy(plant);
+  const passes: PassRecord[] = [];
+  const solveOptions = { timeLimitSeconds: plant.solver.timeLimit, mipRelativeGap: plant.solver.mipGap };
+
+  try {
+    let converged = false;
+    for (let passNumber = 1; passNumber <= maxPasses; passNumber += 1) {
+      const pass = buildPass(plant, contributions, headerEnthalpy, objective);
+      const result = await backend.solve(pass.context.model, solveOptions);
+      if (result.status !== 'optimal') {
+        if (result.status === 'infeasible' || result.status === 'unbounded') {
+          const diagnosis = await diagnose(plant, contributions, headerEnthalpy, objective, backend, solveOptions);
+          return { ok: false, plant, reason: 'infeasible', message: diagnosis.summary, diagnosis, passes };
+        }
+        return { ok: false, plant, reason: 'solver', message: `the solver (${result.backend}) ended "${result.status}"${result.message ? `: ${result.message}` : ''}`, passes };
+      }
+      const solution = passSolution(result);
+      const changes = updatePoints(plant, pass, solution, contributions, headerEnthalpy);
+      const enthalpyChanges = changes.filter((change) => change.unit === 'kJ/kg');
+      const largest = changes.reduce<PointChange | null>((worst, change) => (worst === null || change.change > worst.change ? change : worst), null);
+      const largestEnthalpy = enthalpyChanges.reduce((worst, change) => Math.max(worst, change.change), 0);
+      passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs });
+      // Converged once the points hold still; the audit then decides whether the
+      // last pass's points were close enough for balances to close.
+      if (largestEnthalpy < tolerance && passNumber > 1) converged = true;
+      if (converged) {
+        const audit = auditPass(pass, solution);
+        if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
+          if (audit.worstRelative > AUDIT_TOLERANCE) {
+            return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes };
+          }
+          return { ok: true, plant, objective, pass, solution, result, headerEnthalpy: pointsOf(pass), contributions, passes, audit, backend: result.backend };
+        }
+      }
+    }
+    const last = passes[passes.length - 1]?.largestChange;
+    return {
+      ok: false,
+      plant,
+      reason: 'not_converged',
+      message: `the property points did not settle in ${maxPasses} passes: ${last ? `${last.what} still moved ${last.change.toPrecision(3)} ${last.unit}` : 'no pass finished'} (tolerance ${tolerance} kJ/kg). Raise solver.max_passes or look for a recycle that oscillates.`,
+      passes,
+    };
+  } catch (error) {
+    if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
+    throw error;
+  }
+}
+
+function pointsOf(pass: Pass): Map<string, number> {
+  return new Map(pass.context.headerEnthalpy);
+}
+
+/** First guess: controlled headers at their set point, floating ones as dry saturated steam. */
+export function initialHeaderEnthalpy(plant: Plant): Map<string, number> {
+  const points = new Map<string, number>();
+  for (const header of plant.headers) {
+    points.set(header.id, header.state.kind === 'controlled' ? header.state.h : saturatedVapour(header.pressure).h);
+  }
+  return points;
+}
+
+/**
+ * Moves floating headers to the mixing enthalpy of what entered them,
+ * h = (sum m h - heat loss) / sum m, then lets each unit move its own points.
+ */
+function updatePoints(plant: Plant, pass: Pass, solution: PassSolution, contributions: readonly UnitContribution[], headerEnthalpy: Map<string, number>): PointChange[] {
+  const changes: PointChange[] = [];
+  for (const header of plant.headers) {
+    if (header.state.kind === 'controlled') continue;
+    let mass = 0;
+    let energy = -header.heatLoss;
+    for (const stream of pass.context.streamsInto(header.id)) {
+      const flow = solution.evaluate(stream.flow);
+      mass += flow;
+      energy += flow * stream.h;
+    }
+    if (mass <= 1e-9) continue;
+    const next = energy / mass;
+    const previous = headerEnthalpy.get(header.id)!;
+    changes.push({ what: `${header.id}.h`, change: Math.abs(next - previous), unit: 'kJ/kg' });
+    headerEnthalpy.set(header.id, next);
+  }
+  const enthalpyOf = (id: string): number => headerEnthalpy.get(id)!;
+  for (const unit of contributions) changes.push(...(unit.update?.(solution, enthalpyOf) ?? []));
+  return changes;
+}

@@ -1,0 +1,160 @@
+// A steam turbine, section by section: flows in series, extraction or exhaust
+// to headers, an optional condensing end, power to a generator or a machine.
+import { expr, type LinearExpression, type Variable } from '../../lp/index.js';
+import type { Turbine, TurbineStage } from '../../model/index.js';
+import { saturatedLiquid, statePH, statePT, type SteamState } from '../../properties/index.js';
+import type { BuildContext } from '../context.js';
+import type { PointChange, UnitContribution, UnitReport } from '../contribution.js';
+import type { PassSolution } from '../passSolution.js';
+import { expandIsentropic } from '../physics/turbineStage.js';
+import { PlantPhysicsError } from './user.js';
+
+export class TurbineContribution implements UnitContribution {
+  readonly kind = 'turbine';
+  private on: Variable | null = null;
+  private sections: Variable[] = [];
+  private power: LinearExpression = expr();
+  private inletH = 0;
+  private exhaustH: number[] = [];
+  private drops: number[] = [];
+  /** enthalpy drop per kg of each Willans section, from the previous pass's flow */
+  private readonly willansDrop: (number | null)[];
+
+  constructor(private readonly turbine: Turbine) {
+    const overall = turbine.mechanicalEfficiency * turbine.generatorEfficiency;
+    this.willansDrop = turbine.stages.map((stage) => (stage.performance.kind === 'willans' ? stage.performance.slope / overall : null));
+  }
+
+  get id(): string {
+    return this.turbine.id;
+  }
+
+  private get overallEfficiency(): number {
+    return this.turbine.mechanicalEfficiency * this.turbine.generatorEfficiency;
+  }
+
+  build(context: BuildContext): void {
+    const turbine = this.turbine;
+    const id = turbine.id;
+    this.inletH = context.h(turbine.inlet);
+    this.expand(statePH(context.pressure(turbine.inlet), this.inletH));
+
+    this.on = context.onOff(`${id}.on`, turbine.canSwitchOff);
+    const onTimes = (value: number): LinearExpression => (this.on ? expr().add(this.on, value) : expr().addConstant(value));
+    this.sections = turbine.stages.map((stage, k) => context.variable(`${id}.section${k + 1}`, { upper: stage.sectionFlow.max }));
+
+    this.power = expr();
+    turbine.stages.forEach((stage, k) => {
+      const flow = this.sections[k];
+      const next = this.sections[k + 1];
+      if (stage.sectionFlow.min > 0) context.row(id, `${id}.section${k + 1}.min`, expr().add(flow, 1).addExpression(onTimes(stage.sectionFlow.min), -1), '>=', 0);
+      // outflow at this point = section flow - next section flow
+      const outflow = expr().add(flow, 1);
+      if (next) outflow.add(next, -1);
+      context.row(id, `${id}.out${k + 1}.max`, outflow.clone(), '<=', stage.outflow.max);
+      context.row(id, `${id}.out${k + 1}.min`, outflow.clone().addExpression(onTimes(stage.outflow.min), -1), '>=', 0);
+      this.declareOutflow(context, stage, k, outflow);
+
+      if (stage.performance.kind === 'willans') {
+        this.power.add(flow, stage.performance.slope).addExpression(onTimes(stage.performance.intercept), -1);
+      } else {
+        this.power.add(flow, this.drops[k] * this.overallEfficiency);
+      }
+    });
+
+    const inflow = this.sections[0];
+    context.stream({ from: turbine.inlet, to: id, kind: 'steam', flow: expr().add(inflow, 1), h: this.inletH, p: context.pressure(turbine.inlet) });
+    context.row(id, `${id}.inlet.max`, expr().add(inflow, 1).addExpression(onTimes(turbine.inletFlow.max), -1), '<=', 0);
+    if (turbine.inletFlow.min > 0) context.row(id, `${id}.inlet.min`, expr().add(inflow, 1).addExpression(onTimes(turbine.inletFlow.min), -1), '>=', 0);
+    context.row(id, `${id}.power.max`, this.power.clone().addExpression(onTimes(turbine.power.max), -1), '<=', 0);
+    if (turbine.power.min > 0) context.row(id, `${id}.power.min`, this.power.clone().addExpression(onTimes(turbine.power.min), -1), '>=', 0);
+
+    if (turbine.drives.kind === 'generator') context.generation.addExpression(this.power);
+    else context.supplyShaft(turbine.drives.id, this.power);
+  }
+
+  /** Exhaust states of every section for this pass, in series from the inlet. */
+  private expand(inlet: SteamState): void {
+    let state = inlet;
+    this.exhaustH = [];
+    this.drops = [];
+    this.turbine.stages.forEach((stage, k) => {
+      const pressure = stage.exhaust.pressure;
+      const performance = stage.performance;
+      let h: number;
+      if (performance.kind === 'isentropic') h = expandIsentropic(state, pressure, performance.efficiency).exhaust.h;
+      else if (performance.kind === 'exhaustEnthalpy') h = performance.h;
+      else if (performance.kind === 'exhaustTemperature') h = statePT(pressure, performance.T).h;
+      else h = state.h - (this.willansDrop[k] ?? 0);
+      if (!(h < state.h)) {
+        throw new PlantPhysicsError(
+          `turbine ${this.turbine.id} stage ${k + 1}: exhaust enthalpy ${h.toFixed(1)} kJ/kg is not below its inlet's ${state.h.toFixed(1)} kJ/kg, so the stage would make no power. Check its exhaust enthalpy or temperature.`,
+        );
+      }
+      this.drops.push(state.h - h);
+      this.exhaustH.push(h);
+      state = statePH(pressure, h);
+    });
+  }
+
+  private declareOutflow(context: BuildContext, stage: TurbineStage, k: number, outflow: LinearExpression): void {
+    const id = this.turbine.id;
+    const last = k === this.turbine.stages.length - 1;
+    if (stage.exhaust.kind === 'header') {
+      context.stream({ from: id, to: stage.exhaust.id, kind: last ? 'exhaust' : 'extraction', flow: outflow, h: this.exhaustH[k], p: stage.exhaust.pressure });
+    } else {
+      // The condenser's condensate returns to the deaerator as saturated liquid.
+      const condensate = saturatedLiquid(stage.exhaust.pressure).h;
+      context.stream({ from: id, to: 'deaerator', kind: 'condensate', flow: outflow, h: condensate, p: stage.exhaust.pressure });
+    }
+  }
+
+  update(solution: PassSolution): PointChange[] {
+    const changes: PointChange[] = [];
+    this.turbine.stages.forEach((stage, k) => {
+      if (stage.performance.kind !== 'willans') return;
+      const flow = solution.value(this.sections[k]);
+      if (flow <= 1e-9) return;
+      const running = this.on ? solution.value(this.on) : 1;
+      const drop = (stage.performance.slope * flow - stage.performance.intercept * running) / (this.overallEfficiency * flow);
+      changes.push({ what: `${this.turbine.id}.section${k + 1}.h`, change: Math.abs(drop - (this.willansDrop[k] ?? 0)), unit: 'kJ/kg' });
+      this.willansDrop[k] = drop;
+    });
+    return changes;
+  }
+
+  report(solution: PassSolution): UnitReport {
+    const turbine = this.turbine;
+    const flows = this.sections.map((section) => solution.value(section));
+    const power = solution.evaluate(this.power);
+    const running = this.on ? solution.value(this.on) > 0.5 : true;
+    const values: Record<string, number | string | boolean | null> = {
+      running,
+      inlet_kg_s: flows[0] ?? 0,
+      power_kW: power,
+      inlet_h_kJ_kg: this.inletH,
+    };
+    let condenserKW = 0;
+    turbine.stages.forEach((stage, k) => {
+      const outflow = flows[k] - (flows[k + 1] ?? 0);
+      values[`stage${k + 1}_outflow_kg_s`] = outflow;
+      values[`stage${k + 1}_exhaust_h_kJ_kg`] = this.exhaustH[k];
+      if (stage.exhaust.kind === 'condenser') condenserKW += outflow * (this.exhaustH[k] - saturatedLiquid(stage.exhaust.pressure).h);
+    });
+    values.condenser_kW = condenserKW;
+    values.steam_rate_kg_kWh = power > 0 ? ((flows[0] ?? 0) * 3600) / power : null;
+    const binding: string[] = [];
+    const near = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-6 * Math.max(1, Math.abs(b));
+    if (!running) binding.push('stopped');
+    if (running && near(flows[0] ?? 0, turbine.inletFlow.max)) binding.push('inlet flow at maximum');
+    if (running && turbine.inletFlow.min > 0 && near(flows[0] ?? 0, turbine.inletFlow.min)) binding.push('inlet flow at minimum');
+    if (running && near(power, turbine.power.max)) binding.push('power at maximum');
+    turbine.stages.forEach((stage, k) => {
+      const outflow = flows[k] - (flows[k + 1] ?? 0);
+      if (running && near(outflow, stage.outflow.max) && stage.outflow.max < Infinity) binding.push(`stage ${k + 1} outflow at maximum`);
+      if (running && stage.outflow.min > 0 && near(outflow, stage.outflow.min)) binding.push(`stage ${k + 1} outflow at minimum`);
+      if (running && near(flows[k], stage.sectionFlow.max) && stage.sectionFlow.max < Infinity) binding.push(`section ${k + 1} flow at maximum`);
+    });
+    return { id: turbine.id, kind: this.kind, values, binding };
+  }
+}

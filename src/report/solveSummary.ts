@@ -1,0 +1,155 @@
+// The readable summary `steamwright solve` prints, in the case's unit system.
+import type { PlantResult } from '../plant/index.js';
+import { formatQuantity, type UnitSystem } from '../units/index.js';
+import { SAFETY_CAUTION } from './safety.js';
+import { table } from './table.js';
+
+export interface SummaryOptions {
+  atmosphericPressure_MPa: number;
+}
+
+export function solveSummary(result: PlantResult, options: SummaryOptions): string {
+  const system: UnitSystem = result.unit_system;
+  const atm = { atmosphericPressure_MPa: options.atmosphericPressure_MPa };
+  // Values within solver round-off of zero print as zero.
+  const clean = (value: number): number => (Math.abs(value) < 1e-7 ? 0 : value);
+  const flow = (kgs: number): string => formatQuantity(clean(kgs), 'massFlow', system);
+  const power = (kw: number): string => formatQuantity(clean(kw), 'power', system);
+  const money = (value: number): string => `${value.toLocaleString('en-US', { maximumFractionDigits: 0 })} ${result.currency}`;
+  const perMass = system === 'si' ? 't' : 'klb';
+  const valuePerMass = (perT: number | null): string => {
+    if (perT === null) return 'n/a';
+    const value = system === 'si' ? perT : perT * 0.45359237;
+    return `${value.toFixed(2)} ${result.currency}/${perMass}`;
+  };
+  const lines: string[] = [];
+  lines.push(`${result.plant}: ${objectiveWords(result.objective)} balance, ${result.passes.length} passes (${result.backend})`);
+  lines.push('');
+
+  lines.push('Headers');
+  lines.push(
+    table(
+      ['header', 'pressure', 'temperature', 'in', 'out', 'vent', 'marginal steam value'],
+      result.headers.map((header) => [
+        header.id,
+        formatQuantity(header.pressure_MPa, 'pressure', system, atm),
+        formatQuantity(header.T_K, 'temperature', system),
+        flow(header.inflow_kg_s),
+        flow(header.outflow_kg_s),
+        header.vent_kg_s > 1e-9 ? flow(header.vent_kg_s) : '-',
+        valuePerMass(header.marginal_value_per_t),
+      ]),
+    ),
+  );
+
+  const losses: string[][] = [];
+  for (const stream of result.streams) {
+    if (stream.to === 'atmosphere' && stream.mass_kg_s > 1e-9) losses.push([`vent from ${stream.from}`, flow(stream.mass_kg_s)]);
+  }
+  for (const stream of result.streams) {
+    if (stream.to === 'drain' && stream.mass_kg_s > 1e-9) losses.push([`${stream.kind} from ${stream.from} to drain`, flow(stream.mass_kg_s)]);
+  }
+  lines.push('', 'Losses (vents first: venting is usually the largest avoidable loss)');
+  lines.push(losses.length > 0 ? table(['where', 'flow'], losses) : '  none');
+
+  const units = result.units;
+  const sources = units.filter((unit) => ['boiler', 'heatRecoveryBoiler', 'steamImport'].includes(unit.kind));
+  lines.push('', 'Sources');
+  lines.push(
+    table(
+      ['unit', 'steam', 'fuel', 'efficiency', 'limits'],
+      sources.map((unit) => [
+        unit.id,
+        flow(Number(unit.values.steam_kg_s ?? 0)),
+        unit.values.fuel_kW !== undefined ? power(Number(unit.values.fuel_kW)) : '-',
+        typeof unit.values.efficiency === 'number' ? `${(unit.values.efficiency * 100).toFixed(1)} %` : '-',
+        unit.binding.join(', ') || '-',
+      ]),
+    ),
+  );
+  const turbines = units.filter((unit) => unit.kind === 'turbine');
+  if (turbines.length > 0) {
+    lines.push('', 'Turbines');
+    lines.push(
+      table(
+        ['unit', 'throttle', 'power', 'steam rate', 'limits'],
+        turbines.map((unit) => [
+          unit.id,
+          flow(Number(unit.values.inlet_kg_s ?? 0)),
+          power(Number(unit.values.power_kW ?? 0)),
+          typeof unit.values.steam_rate_kg_kWh === 'number' ? `${unit.values.steam_rate_kg_kWh.toFixed(2)} kg/kWh` : '-',
+          unit.binding.join(', ') || '-',
+        ]),
+      ),
+    );
+  }
+  const letdowns = units.filter((unit) => unit.kind === 'letdown');
+  if (letdowns.length > 0) {
+    lines.push('', 'Letdowns');
+    lines.push(
+      table(
+        ['unit', 'steam', 'spray water', 'limits'],
+        letdowns.map((unit) => [unit.id, flow(Number(unit.values.steam_kg_s ?? 0)), flow(Number(unit.values.spray_kg_s ?? 0)), unit.binding.join(', ') || '-']),
+      ),
+    );
+  }
+  const users = units.filter((unit) => unit.kind === 'user');
+  lines.push('', 'Users');
+  lines.push(
+    table(
+      ['unit', 'steam', 'heat', 'condensate returned'],
+      users.map((unit) => [unit.id, flow(Number(unit.values.steam_kg_s)), power(Number(unit.values.heat_kW)), flow(Number(unit.values.condensate_returned_kg_s))]),
+    ),
+  );
+
+  const totals = result.totals;
+  lines.push('', 'Totals');
+  lines.push(
+    table(
+      ['', ''],
+      [
+        ['cost', `${money(totals.cost_per_h)} per hour`],
+        ['  fuel / power / steam / water / carbon', ['fuel', 'power', 'steam', 'water', 'carbon'].map((key) => money(totals.cost_by_component_per_h[key as keyof typeof totals.cost_by_component_per_h])).join(' / ')],
+        ['fuel fired', power(totals.fuel_kW)],
+        ['power made / bought / sold', `${power(totals.power_generated_kW)} / ${power(totals.power_imported_kW)} / ${power(totals.power_exported_kW)}`],
+        ['steam raised', flow(totals.steam_raised_kg_s)],
+        ['steam let down', flow(totals.let_down_kg_s)],
+        ['steam vented', flow(totals.vented_kg_s)],
+        ['makeup water', flow(totals.makeup_kg_s)],
+        ['CO2', `${(totals.co2_kg_per_h / 1000).toFixed(2)} t/h`],
+      ],
+      false,
+    ),
+  );
+  const kpis = result.kpis;
+  const percent = (value: number | null): string => (value === null ? 'n/a' : `${(value * 100).toFixed(1)} %`);
+  lines.push('', 'Key figures');
+  lines.push(
+    table(
+      ['', ''],
+      [
+        ['boiler fuel-to-steam efficiency', percent(kpis.boiler_fuel_to_steam_efficiency)],
+        ['condensate return', percent(kpis.condensate_return_fraction)],
+        ['steam let down / vented', `${percent(kpis.let_down_fraction)} / ${percent(kpis.vented_fraction)}`],
+        ['power per tonne of throttle steam', kpis.power_per_throttle_t_kWh === null ? 'n/a' : `${kpis.power_per_throttle_t_kWh.toFixed(1)} kWh/t`],
+        ['fuel chargeable to power', kpis.fuel_chargeable_to_power_kJ_per_kWh === null ? 'n/a' : `${(kpis.fuel_chargeable_to_power_kJ_per_kWh / 1000).toFixed(2)} MJ/kWh`],
+        ['site useful-energy efficiency', percent(kpis.site_useful_energy_efficiency)],
+      ],
+      false,
+    ),
+  );
+  const audit = result.audit;
+  lines.push(
+    '',
+    `Audit: largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, largest energy residual ${audit.max_energy_residual_kW.toExponential(2)} kW (${audit.worst}).`,
+  );
+  lines.push('', SAFETY_CAUTION, '');
+  return lines.join('\n');
+}
+
+function objectiveWords(objective: string): string {
+  if (objective === 'minimumCost') return 'minimum-cost';
+  if (objective === 'minimumFuel') return 'minimum-fuel';
+  if (objective === 'minimumCo2') return 'minimum-CO2';
+  return 'maximum-power';
+}
