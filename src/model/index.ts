@@ -6,3 +6,4 @@ export type * from './plantTypes.js';
 export type * from './caseFileTypes.js';
 export { starterCase } from './starterCase.js';
 export { summarisePlant } from './summary.js';
+export { schemaFilePath } from './schemaLocation.js';

@@ -82,14 +82,15 @@ export function loadCaseText(text: string, fileName: string): LoadResult {
   if (source.data === null || source.data === undefined) {
     return { ok: false, issues: [{ severity: 'error', code: 'empty', path: '', line: 1, column: 1, message: 'the file is empty; expected a plant case (steamwright init FILE writes a starter)' }] };
   }
-  const schemaIssues = validateAgainstSchema(source);
   const context = new ResolveContext(source);
-  context.schemaFlagged = new Set(schemaIssues.map((issue) => issue.path));
+  let schemaIssues: Issue[] = [];
   let plant: Plant | null = null;
-  if (typeof source.data === 'object' && !Array.isArray(source.data)) {
-    try {
-      plant = resolvePlant(context);
-    } catch (error) {
+  try {
+    schemaIssues = validateAgainstSchema(source);
+    context.schemaFlagged = new Set(schemaIssues.map((issue) => issue.path));
+    if (typeof source.data === 'object' && !Array.isArray(source.data)) plant = resolvePlant(context);
+  } catch (error) {
+    {
       // A bug, not bad input: still one located line rather than a stack trace.
       const detail = error instanceof Error ? error.message : String(error);
       context.error('internal', [], `steamwright could not finish checking this file (internal error: ${detail}); please report it with the file`);

@@ -26,7 +26,7 @@ const QUANTITY_NOUNS: Record<string, string> = {
 };
 
 /** Validates a branch of a oneOf on its own, to learn what that branch wants. */
-export type BranchValidator = (schemaPointer: string) => ValidateFunction;
+export type BranchValidator = (branch: object) => ValidateFunction;
 
 function pathOf(instancePath: string): CasePath {
   if (instancePath === '') return [];
@@ -169,8 +169,8 @@ export function schemaIssues(errors: ErrorObject[], source: YamlSource, validate
   for (const union of unions) {
     const branches = union.schema as Schema[];
     const value = dataAt(data, pathOf(union.instancePath));
-    const branchErrors = branches.map((_, index) => {
-      const validate = validateBranch(`${union.schemaPath.slice(1)}/${index}`);
+    const branchErrors = branches.map((branch) => {
+      const validate = validateBranch(branch);
       return validate(value) ? [] : shiftErrors(validate.errors ?? [], union.instancePath);
     });
     // Drop every error that came from trying the branches.

@@ -1,8 +1,9 @@
 // The commented starter case `steamwright init` writes: the smallest plant
 // that passes `check`, with pointers to everything else the format offers.
 
-export function starterCase(): string {
-  return `# yaml-language-server: $schema=https://steamwright.dev/schema/case.schema.json
+/** `schemaReference`: path or URL of case.schema.json for the editor modeline. */
+export function starterCase(schemaReference: string): string {
+  return `# yaml-language-server: $schema=${schemaReference}
 # A starter steamwright case. Edit the numbers, then run:  steamwright check THIS_FILE
 # Every quantity is a string with its unit ("42 barg", "60 t/h", "9.5 EUR/GJ", "3 %").
 # Ids are unique across the plant; items refer to each other by id.

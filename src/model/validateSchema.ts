@@ -8,7 +8,7 @@ import type { YamlSource } from './yamlSource.js';
 
 let ajv: InstanceType<typeof Ajv2020.default> | undefined;
 let validateCase: ValidateFunction | undefined;
-const branchValidators = new Map<string, ValidateFunction>();
+const branchValidators = new WeakMap<object, ValidateFunction>();
 
 function compiler(): InstanceType<typeof Ajv2020.default> {
   if (!ajv) {
@@ -22,11 +22,12 @@ function compiler(): InstanceType<typeof Ajv2020.default> {
   return ajv;
 }
 
-function branchValidator(pointer: string): ValidateFunction {
-  let validate = branchValidators.get(pointer);
+/** One branch of a oneOf compiled on its own; its "#/$defs/..." references still resolve. */
+function branchValidator(branch: object): ValidateFunction {
+  let validate = branchValidators.get(branch);
   if (!validate) {
-    validate = compiler().compile({ $ref: `${SCHEMA_ID}#${pointer}` });
-    branchValidators.set(pointer, validate);
+    validate = compiler().compile({ $defs: caseSchema.$defs, ...branch });
+    branchValidators.set(branch, validate);
   }
   return validate;
 }
