@@ -19,16 +19,19 @@ export type PressureAndLocation =
  */
 const SATURATION_BAND = 1e-12;
 
+
 /** The forward property that (p, h) and (p, s) share the logic of. */
 interface Quantity {
   name: string;
   unit: string;
   region1(p: number, T: number): number;
   region2(p: number, T: number): number;
+  /** Typical size; near 273.15 K h and s are small differences of large terms. */
+  scale: number;
 }
 
-const ENTHALPY: Quantity = { name: 'enthalpy', unit: 'kJ/kg', region1: enthalpyRegion1, region2: enthalpyRegion2 };
-const ENTROPY: Quantity = { name: 'entropy', unit: 'kJ/(kg K)', region1: entropyRegion1, region2: entropyRegion2 };
+const ENTHALPY: Quantity = { name: 'enthalpy', unit: 'kJ/kg', region1: enthalpyRegion1, region2: enthalpyRegion2, scale: 1000 };
+const ENTROPY: Quantity = { name: 'entropy', unit: 'kJ/(kg K)', region1: entropyRegion1, region2: entropyRegion2, scale: 10 };
 
 /**
  * Compares the value with the forward equations along the isobar: at the
@@ -38,15 +41,19 @@ const ENTROPY: Quantity = { name: 'entropy', unit: 'kJ/(kg K)', region1: entropy
 function locate(p: number, value: number, quantity: Quantity): PressureAndLocation {
   requirePressure(p);
   requireFinite(quantity.name, value, quantity.unit);
+  // The edges of the range (273.15 K, 1073.15 K, region 3) are compared with a
+  // round-off allowance, so a state computed exactly at an edge is not refused.
+  const edge = (limit: number): number => 1e-12 * (Math.abs(limit) + quantity.scale);
   const second = `${formatValue(value)} ${quantity.unit}`;
   const liquidExists = p >= MIN_SATURATION_PRESSURE;
   const lowest = liquidExists ? quantity.region1(p, MIN_TEMPERATURE) : quantity.region2(p, MIN_TEMPERATURE);
-  if (value < lowest) {
+  if (value < lowest - edge(lowest)) {
     throw new PropertyRangeError(
       `${quantity.name} ${second} at ${formatValue(p)} MPa is below the IF97 limit of ${formatValue(lowest)} ${quantity.unit} (${MIN_TEMPERATURE} K at this pressure)`,
     );
   }
-  if (value > quantity.region2(p, MAX_TEMPERATURE)) throw aboveMaxTemperatureRefusal(p, second);
+  const highest = quantity.region2(p, MAX_TEMPERATURE);
+  if (value > highest + edge(highest)) throw aboveMaxTemperatureRefusal(p, second);
   if (!liquidExists) return { region: 2 };
   if (p <= REGION3_SATURATION_PRESSURE) {
     const T = saturationTemperatureRegion4(p);
@@ -55,11 +62,14 @@ function locate(p: number, value: number, quantity: Quantity): PressureAndLocati
     const band = SATURATION_BAND * (vapour - liquid);
     if (value < liquid - band) return { region: 1 };
     if (value > vapour + band) return { region: 2 };
-    const x = (value - liquid) / (vapour - liquid);
-    return { region: 4, T, x: Math.min(1, Math.max(0, x)) };
+    if (value <= liquid + band) return { region: 4, T, x: 0 };
+    if (value >= vapour - band) return { region: 4, T, x: 1 };
+    return { region: 4, T, x: (value - liquid) / (vapour - liquid) };
   }
-  if (value <= quantity.region1(p, REGION1_MAX_TEMPERATURE)) return { region: 1 };
-  if (value >= quantity.region2(p, temperatureB23(p))) return { region: 2 };
+  const region1Edge = quantity.region1(p, REGION1_MAX_TEMPERATURE);
+  if (value <= region1Edge + edge(region1Edge)) return { region: 1 };
+  const region2Edge = quantity.region2(p, temperatureB23(p));
+  if (value >= region2Edge - edge(region2Edge)) return { region: 2 };
   throw region3Refusal(p, second);
 }
 
