@@ -1,6 +1,6 @@
 import type { SolveOptions, SolverBackend } from './backend.js';
 import { compileModel, objectiveValue } from './compile.js';
-import { jslpColumnKey, toJslpModel } from './jslpModel.js';
+import { toJslpModel } from './jslpModel.js';
 import { type JslpAnswer, JslpWatchdog } from './jslpWatchdog.js';
 import type { LinearModel } from './linearModel.js';
 import { buildResult, type SolveResult, type SolveStatus } from './result.js';
@@ -46,7 +46,8 @@ export const jslpBackend: SolverBackend = {
   async solve(model: LinearModel, options: SolveOptions = {}): Promise<SolveResult> {
     const compiled = compileModel(model);
     const limitSeconds = options.timeLimitSeconds ?? defaultJslpTimeLimitSeconds;
-    const outcome = await sharedWatchdog.run(toJslpModel(compiled), limitSeconds * 1000);
+    const translation = toJslpModel(compiled);
+    const outcome = await sharedWatchdog.run(translation.model, limitSeconds * 1000);
     const noDuals = 'javascript-lp-solver gives no duals';
     if (outcome.kind === 'timeout') {
       return buildResult(compiled, {
@@ -68,10 +69,7 @@ export const jslpBackend: SolverBackend = {
     }
     const key = jslpVerdictKey(outcome.answer);
     const status = jslpStatusTable.get(key) ?? 'unknown';
-    const colValue = compiled.columnNames.map((_, column) => {
-      const found = outcome.answer[jslpColumnKey(column)];
-      return typeof found === 'number' ? found : 0; // the package leaves out variables at zero
-    });
+    const colValue = translation.recover(outcome.answer);
     return buildResult(
       compiled,
       {
