@@ -44,14 +44,21 @@ export function linkFlashTanks(context: ResolveContext, plant: PlantParts): void
   }
 }
 
+/**
+ * A header nothing can feed. Sources are read from the case as written, so a
+ * boiler that failed its own checks still counts and no second error follows.
+ */
 export function checkSources(context: ResolveContext, plant: PlantParts): void {
-  const fed = new Set<string>();
-  for (const boiler of plant.boilers) fed.add(boiler.header);
-  for (const boiler of plant.heatRecoveryBoilers) fed.add(boiler.header);
-  for (const purchase of plant.steamImports) fed.add(purchase.header);
-  for (const turbine of plant.turbines) for (const stage of turbine.stages) if (stage.exhaust.kind === 'header') fed.add(stage.exhaust.id);
-  for (const letdown of plant.letdowns) fed.add(letdown.to);
-  for (const tank of plant.flashTanks) if (tank.vapourTo.kind === 'header') fed.add(tank.vapourTo.id);
+  const fed = new Set<unknown>();
+  const named = (list: string, key: string) => context.entries([list]).forEach(({ item }) => fed.add(item[key]));
+  named('boilers', 'header');
+  named('heat_recovery_boilers', 'header');
+  named('steam_imports', 'header');
+  named('letdowns', 'to');
+  named('flash_tanks', 'vapour_to');
+  for (const { path } of context.entries(['turbines'])) {
+    for (const { item } of context.entries([...path, 'stages'])) fed.add(item.to);
+  }
   for (const header of plant.headers) {
     if (!fed.has(header.id)) {
       context.error('no-source', context.ids.get(header.id)?.path ?? [],

@@ -105,8 +105,8 @@ export class ResolveContext {
     if (value === undefined) return undefined;
     const zeroOk = options.zeroAllowed ? value >= 0 : value > 0;
     if (!zeroOk || value > 1) {
-      const low = options.zeroAllowed ? '0 %' : 'above 0 %';
-      this.error('percent-range', path, `expected a percentage from ${low} to 100 %, found "${this.text(path)}"`);
+      const range = options.zeroAllowed ? 'from 0 % to 100 %' : 'above 0 % and at most 100 %';
+      this.error('percent-range', path, `expected a percentage ${range}, found "${this.text(path)}"`);
       return undefined;
     }
     return value;

@@ -19,7 +19,7 @@ export function resolveSite(context: ResolveContext): Site | null {
     }
   }
   const currency = context.text([...path, 'currency']);
-  if (currency !== undefined) context.currency = currency;
+  if (currency !== undefined && /^[A-Z]{3}$/.test(currency)) context.currency = currency;
   const units = context.raw([...path, 'units']);
   if (units === 'si' || units === 'us') context.unitSystem = units;
 

@@ -2,6 +2,7 @@
 // missing or unknown, the unit expected and the text found, one message per
 // problem (a failed oneOf reports the branch the data was evidently meant for).
 import type { ErrorObject, ValidateFunction } from 'ajv';
+import { caseSchema } from './caseSchema.js';
 import type { CasePath, Issue } from './issue.js';
 import { describeFound } from './issue.js';
 import { makeIssue, type YamlSource } from './yamlSource.js';
@@ -96,7 +97,9 @@ function messageFor(error: ErrorObject, data: unknown): { message: string; path:
   switch (error.keyword) {
     case 'required': {
       const missing = String(params.missingProperty);
-      const property = (parent?.properties as Record<string, Schema> | undefined)?.[missing];
+      let property = (parent?.properties as Record<string, Schema> | undefined)?.[missing];
+      const target = typeof property?.$ref === 'string' ? property.$ref.replace('#/$defs/', '') : undefined;
+      if (target) property = (caseSchema.$defs as Record<string, Schema>)[target];
       const hint = property ? quantityWanted(property) ?? (typeof property.description === 'string' ? property.description : undefined) : undefined;
       return { message: `missing key "${missing}"${hint ? `: expected ${hint}` : ''}`, path: [...path, missing], pointAtKey: false };
     }
