@@ -24,7 +24,7 @@ describe('LP-format names', () => {
       expect(solution.Status, name).toBe('Optimal');
       expect(solution.ObjectiveValue, name).toBeCloseTo(5, 12);
       expect(Object.keys(solution.Columns), name).toEqual([name, 'y']);
-      expect(solution.Rows[0].Name, name).toBe(name);
+      expect((solution.Rows[0] as { Name?: string }).Name, name).toBe(name);
     }
   });
 });
