@@ -37,8 +37,13 @@ export function linkFlashTanks(context: ResolveContext, plant: PlantParts): void
   for (const boiler of plant.boilers) send(boiler.id, boiler.blowdownTo);
   for (const boiler of plant.heatRecoveryBoilers) send(boiler.id, boiler.blowdownTo);
   for (const tank of plant.flashTanks) send(tank.id, tank.liquidTo);
+  // Read from the case as written, so a user that failed its own checks still counts.
+  const named = new Set<unknown>();
+  for (const { item } of context.entries(['users'])) named.add((item.condensate as Record<string, unknown> | undefined)?.to);
+  for (const list of ['boilers', 'heat_recovery_boilers']) for (const { item } of context.entries([list])) named.add(item.blowdown_to);
+  for (const { item } of context.entries(['flash_tanks'])) named.add(item.liquid_to);
   for (const tank of plant.flashTanks) {
-    if (tank.receives.length === 0) {
+    if (tank.receives.length === 0 && !named.has(tank.id)) {
       context.warn('flash-tank-unused', context.ids.get(tank.id)?.path ?? [], `flash tank ${tank.id} receives nothing: no user condensate, blowdown or flash liquid is sent to it`);
     }
   }

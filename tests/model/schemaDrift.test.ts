@@ -1,0 +1,59 @@
+// The schema and the TypeScript types of the case file cannot drift apart:
+// each field list below is type-checked against its interface (a missing,
+// extra or wrongly optional key fails `tsc`), and this test checks each list
+// against the schema's properties and required keys.
+import { describe, expect, test } from 'vitest';
+import { caseSchema } from '../../src/model/index.js';
+import type * as Case from '../../src/model/index.js';
+
+/** Every key of T, marked required or optional exactly as T declares it. */
+type FieldList<T> = { [K in keyof Required<T>]: {} extends Pick<T, K> ? 'optional' : 'required' };
+
+const fieldLists: Record<string, Record<string, 'required' | 'optional'>> = {
+  root: { format_version: 'required', name: 'required', description: 'optional', site: 'required', fuels: 'optional', power: 'required', headers: 'required', boilers: 'optional', heat_recovery_boilers: 'optional', steam_imports: 'optional', turbines: 'optional', letdowns: 'optional', users: 'optional', flash_tanks: 'optional', deaerator: 'required', machines: 'optional', objective: 'optional', solver: 'optional', scenarios: 'optional', projects: 'optional' } satisfies FieldList<Case.CaseFile>,
+  site: { atmospheric_pressure: 'optional', ambient_temperature: 'required', makeup_water: 'required', currency: 'required', units: 'required', carbon_price: 'optional' } satisfies FieldList<Case.SiteEntry>,
+  makeupWater: { temperature: 'required', cost: 'required' } satisfies FieldList<Case.MakeupWaterEntry>,
+  fuel: { id: 'required', name: 'optional', price: 'required', basis: 'required', co2: 'required' } satisfies FieldList<Case.FuelEntry>,
+  power: { site_demand: 'required', import: 'optional', export: 'optional' } satisfies FieldList<Case.PowerEntry>,
+  powerImport: { price: 'required', max: 'required', minimum_billed: 'optional', shortfall_price: 'optional', co2: 'optional' } satisfies FieldList<Case.PowerImportEntry>,
+  powerExport: { price: 'required', max: 'required' } satisfies FieldList<Case.PowerExportEntry>,
+  header: { id: 'required', name: 'optional', pressure: 'required', state: 'required', temperature: 'optional', enthalpy: 'optional', venting: 'optional', heat_loss: 'optional' } satisfies FieldList<Case.HeaderEntry>,
+  flowRange: { min: 'optional', max: 'required' } satisfies FieldList<Case.FlowRangeEntry>,
+  openRange: { min: 'optional', max: 'optional' } satisfies FieldList<Case.OpenRangeEntry>,
+  efficiencyPoint: { load: 'required', efficiency: 'required' } satisfies FieldList<Case.EfficiencyPointEntry>,
+  cycles: { cycles_of_concentration: 'required' } satisfies FieldList<Case.CyclesEntry>,
+  boiler: { id: 'required', name: 'optional', header: 'required', fuels: 'required', steam: 'required', outlet_temperature: 'required', efficiency: 'required', blowdown: 'required', blowdown_to: 'optional', can_switch_off: 'optional' } satisfies FieldList<Case.BoilerEntry>,
+  supplementaryFiring: { fuel: 'required', max_steam: 'required', efficiency: 'required' } satisfies FieldList<Case.SupplementaryFiringEntry>,
+  heatRecoveryBoiler: { id: 'required', name: 'optional', header: 'required', steam: 'required', outlet_temperature: 'required', blowdown: 'required', blowdown_to: 'optional', supplementary_firing: 'optional' } satisfies FieldList<Case.HeatRecoveryBoilerEntry>,
+  steamImport: { id: 'required', name: 'optional', header: 'required', price: 'required', min: 'optional', max: 'required', temperature: 'required' } satisfies FieldList<Case.SteamImportEntry>,
+  willansLine: { intercept: 'required', slope: 'required' } satisfies FieldList<Case.WillansLineEntry>,
+  stage: { to: 'optional', condenser_pressure: 'optional', isentropic_efficiency: 'optional', exhaust_enthalpy: 'optional', exhaust_temperature: 'optional', willans_line: 'optional', outflow: 'optional', section_flow: 'optional' } satisfies FieldList<Case.StageEntry>,
+  turbine: { id: 'required', name: 'optional', inlet: 'required', stages: 'required', mechanical_efficiency: 'optional', generator_efficiency: 'optional', power: 'optional', can_switch_off: 'optional', drives: 'optional' } satisfies FieldList<Case.TurbineEntry>,
+  desuperheater: { target_temperature: 'required', spray_water: 'required' } satisfies FieldList<Case.DesuperheaterEntry>,
+  letdown: { id: 'required', name: 'optional', from: 'required', to: 'required', capacity: 'required', desuperheater: 'optional' } satisfies FieldList<Case.LetdownEntry>,
+  condensate: { return: 'required', temperature: 'optional', to: 'optional' } satisfies FieldList<Case.CondensateEntry>,
+  user: { id: 'required', name: 'optional', header: 'required', steam: 'optional', heat: 'optional', condensate: 'optional' } satisfies FieldList<Case.UserEntry>,
+  flashTank: { id: 'required', name: 'optional', pressure: 'required', vapour_to: 'required', liquid_to: 'required' } satisfies FieldList<Case.FlashTankEntry>,
+  feedwaterPump: { id: 'required', name: 'optional', efficiency: 'required', motor_efficiency: 'optional' } satisfies FieldList<Case.FeedwaterPumpEntry>,
+  deaerator: { pressure: 'required', heating_steam: 'required', vent: 'required', feedwater_pumps: 'optional' } satisfies FieldList<Case.DeaeratorEntry>,
+  machine: { id: 'required', name: 'optional', type: 'required', shaft_power: 'required', motor_efficiency: 'optional' } satisfies FieldList<Case.MachineEntry>,
+  solver: { mip_gap: 'optional', time_limit_seconds: 'optional', max_passes: 'optional', enthalpy_tolerance: 'optional' } satisfies FieldList<Case.SolverEntry>,
+};
+
+type ObjectSchema = { properties: Record<string, unknown>; required: string[] };
+const defs = caseSchema.$defs as Record<string, ObjectSchema>;
+const schemaObjects: Record<string, ObjectSchema> = { root: caseSchema as unknown as ObjectSchema, ...defs };
+
+test('every object of the schema has a field list, and every field list an object', () => {
+  expect(Object.keys(fieldLists).sort()).toEqual(Object.keys(schemaObjects).sort());
+});
+
+describe.each(Object.keys(fieldLists))('%s', (name) => {
+  test('has the same keys in the schema and in the type', () => {
+    expect(Object.keys(schemaObjects[name].properties).sort()).toEqual(Object.keys(fieldLists[name]).sort());
+  });
+  test('requires the same keys in the schema and in the type', () => {
+    const required = Object.entries(fieldLists[name]).filter(([, mark]) => mark === 'required').map(([key]) => key);
+    expect([...schemaObjects[name].required].sort()).toEqual(required.sort());
+  });
+});
