@@ -7,14 +7,14 @@ import { temperaturePSRegion2Backward } from './region2BackwardPS.js';
 
 // The backward equations agree with the forward ones to about 25 mK
 // (IAPWS R7-97(2012) sections 5.2 and 6.3). Newton on the forward equation
-// from there converges quadratically: two or three steps reach round-off.
+// from there converges quadratically: two steps reach round-off.
 // Near the corners of their range (region 2 T(p,s) below the triple-point
 // pressure) the backward value can be far off, so Newton is safeguarded by
 // bisection inside the region's temperature bracket; h and s rise with T
 // at fixed p (cp > 0), so the sign of each step tells which side the root is.
 
 const MAX_STEPS = 100;
-const RELATIVE_STEP_TOLERANCE = 1e-13;
+const LAST_STEP = 1e-9;
 
 type NewtonStep = (p: number, T: number, target: number, onEntropy: boolean) => number;
 
@@ -32,7 +32,10 @@ function refine(
   let T = start > low && start < high ? start : start <= low ? low : high;
   for (let k = 0; k < MAX_STEPS; k++) {
     const dT = step(p, T, target, onEntropy);
-    if (Math.abs(dT) <= RELATIVE_STEP_TOLERANCE * T) return T - dT;
+    // Convergence is quadratic: after a step of 1e-9 T (about 1e-6 K) the
+    // remaining error is of order (1e-6 K)^2 (dcp/dT) / cp, far below round-off,
+    // so that step is taken without evaluating again.
+    if (Math.abs(dT) <= LAST_STEP * T) return T - dT;
     if (dT > 0) above = T;
     else below = T;
     const next = T - dT;

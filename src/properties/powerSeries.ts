@@ -2,6 +2,9 @@
 // derivatives. Integer powers come from tables filled by repeated
 // multiplication (cheaper than Math.pow and free of allocation); the
 // coefficient rows are flattened once into typed arrays at module load.
+// The tables are filled by four interleaved products (x^k from x^(k-4)),
+// which cuts the chain of dependent multiplications by four; on the
+// benchmark this alone nearly doubles the rate of region 2 h(p, T).
 
 /** Coefficient rows as printed in the release: [I, J, n]. */
 export type CoefficientRow = readonly [number, number, number];
@@ -18,17 +21,22 @@ export interface SeriesDerivatives {
 
 export interface PowerSeries {
   readonly count: number;
-  readonly exponentX: Int32Array;
-  readonly exponentY: Int32Array;
+  readonly exponentX: Float64Array;
+  readonly exponentY: Float64Array;
   readonly coefficient: Float64Array;
+  /** Where x^I and y^J of each row sit in the power tables (exponent - min). */
+  readonly indexX: Int32Array;
+  readonly indexY: Int32Array;
   /** Lowest and highest power of x (and y) any evaluation needs, 0 included. */
   readonly minX: number;
   readonly maxX: number;
   readonly minY: number;
   readonly maxY: number;
-  /** Scratch tables of powers; index k - minX holds x^k. */
+  /** Scratch tables of powers; index zeroX + k holds x^k (3 spare slots at each end). */
   readonly powersX: Float64Array;
   readonly powersY: Float64Array;
+  readonly zeroX: number;
+  readonly zeroY: number;
 }
 
 /**
@@ -43,8 +51,8 @@ export function createPowerSeries(
   scaleX = 1,
 ): PowerSeries {
   const count = rows.length;
-  const exponentX = new Int32Array(count);
-  const exponentY = new Int32Array(count);
+  const exponentX = new Float64Array(count);
+  const exponentY = new Float64Array(count);
   const coefficient = new Float64Array(count);
   let minX = 0;
   let maxX = 0;
@@ -63,69 +71,129 @@ export function createPowerSeries(
     minY = Math.min(minY, J - derivativeOrder);
     maxY = Math.max(maxY, J);
   });
+  const zeroX = SPARE - minX;
+  const zeroY = SPARE - minY;
+  const indexX = Int32Array.from(exponentX, (exponent) => zeroX + exponent);
+  const indexY = Int32Array.from(exponentY, (exponent) => zeroY + exponent);
   return {
     count,
     exponentX,
     exponentY,
     coefficient,
+    indexX,
+    indexY,
     minX,
     maxX,
     minY,
     maxY,
-    powersX: new Float64Array(maxX - minX + 1),
-    powersY: new Float64Array(maxY - minY + 1),
+    powersX: new Float64Array(maxX - minX + 1 + 2 * SPARE),
+    powersY: new Float64Array(maxY - minY + 1 + 2 * SPARE),
+    zeroX,
+    zeroY,
   };
 }
 
-/** Fills out[k - min] = base^k for min <= k <= max (min <= 0 <= max). */
-export function fillPowers(base: number, min: number, max: number, out: Float64Array): void {
-  const zero = -min;
+/** Slots beyond each end of a power table, written by the last group of four. */
+const SPARE = 3;
+
+/**
+ * Fills out[zero + k] = base^k for min <= k <= max (min <= 0 <= max), and
+ * possibly up to three more powers beyond each end.
+ */
+export function fillPowers(base: number, min: number, max: number, zero: number, out: Float64Array): void {
+  const base2 = base * base;
+  const base3 = base2 * base;
+  const base4 = base2 * base2;
   out[zero] = 1;
-  let power = 1;
-  for (let k = 1; k <= max; k++) {
-    power *= base;
-    out[zero + k] = power;
+  out[zero + 1] = base;
+  out[zero + 2] = base2;
+  out[zero + 3] = base3;
+  let p0 = base4;
+  let p1 = base4 * base;
+  let p2 = base4 * base2;
+  let p3 = base4 * base3;
+  for (let k = 4; k <= max; k += 4) {
+    out[zero + k] = p0;
+    out[zero + k + 1] = p1;
+    out[zero + k + 2] = p2;
+    out[zero + k + 3] = p3;
+    p0 *= base4;
+    p1 *= base4;
+    p2 *= base4;
+    p3 *= base4;
   }
   if (min < 0) {
     const inverse = 1 / base;
-    power = 1;
-    for (let k = 1; k <= zero; k++) {
-      power *= inverse;
-      out[zero - k] = power;
+    const inverse2 = inverse * inverse;
+    const inverse3 = inverse2 * inverse;
+    const inverse4 = inverse2 * inverse2;
+    out[zero - 1] = inverse;
+    out[zero - 2] = inverse2;
+    out[zero - 3] = inverse3;
+    let q0 = inverse4;
+    let q1 = inverse4 * inverse;
+    let q2 = inverse4 * inverse2;
+    let q3 = inverse4 * inverse3;
+    for (let k = 4; k <= -min; k += 4) {
+      out[zero - k] = q0;
+      out[zero - k - 1] = q1;
+      out[zero - k - 2] = q2;
+      out[zero - k - 3] = q3;
+      q0 *= inverse4;
+      q1 *= inverse4;
+      q2 *= inverse4;
+      q3 *= inverse4;
     }
   }
 }
 
+/**
+ * The rows of d/dy of a series: [I, J - 1, n J], rows with J = 0 dropped.
+ * Evaluating this derived series gives the derivative without extra work
+ * per row, and without the negative powers the J = 0 rows would ask for.
+ */
+export function derivativeRowsInY(rows: readonly CoefficientRow[]): CoefficientRow[] {
+  return rows.filter(([, J]) => J !== 0).map(([I, J, n]) => [I, J - 1, n * J] as const);
+}
+
 /** sum n x^I y^J. */
 export function seriesValue(series: PowerSeries, x: number, y: number): number {
-  const { count, exponentX, exponentY, coefficient, minX, minY, powersX, powersY } = series;
-  fillPowers(x, minX, series.maxX, powersX);
-  fillPowers(y, minY, series.maxY, powersY);
+  const { count, coefficient, indexX, indexY, powersX, powersY } = series;
+  fillPowers(x, series.minX, series.maxX, series.zeroX, powersX);
+  fillPowers(y, series.minY, series.maxY, series.zeroY, powersY);
   let sum = 0;
-  for (let i = 0; i < count; i++) {
-    sum += coefficient[i] * powersX[exponentX[i] - minX] * powersY[exponentY[i] - minY];
-  }
+  for (let i = 0; i < count; i++) sum += coefficient[i] * powersX[indexX[i]] * powersY[indexY[i]];
   return sum;
 }
 
-/** d/dy of sum n x^I y^J: sum n J x^I y^(J-1). */
-export function seriesDy(series: PowerSeries, x: number, y: number): number {
-  const { count, exponentX, exponentY, coefficient, minX, minY, powersX, powersY } = series;
-  fillPowers(x, minX, series.maxX, powersX);
-  fillPowers(y, minY, series.maxY, powersY);
-  let sum = 0;
+/** Value and d/dy of a series in one pass; needs derivativeOrder >= 1. */
+export interface ValueAndSlope {
+  value: number;
+  dy: number;
+}
+
+export function seriesValueAndDy(series: PowerSeries, x: number, y: number, out: ValueAndSlope): ValueAndSlope {
+  const { count, coefficient, exponentY, indexX, indexY, powersX, powersY } = series;
+  fillPowers(x, series.minX, series.maxX, series.zeroX, powersX);
+  fillPowers(y, series.minY, series.maxY, series.zeroY, powersY);
+  let value = 0;
+  let dy = 0;
   for (let i = 0; i < count; i++) {
-    const J = exponentY[i];
-    sum += coefficient[i] * J * powersX[exponentX[i] - minX] * powersY[J - 1 - minY];
+    const term = coefficient[i] * powersX[indexX[i]];
+    const k = indexY[i];
+    value += term * powersY[k];
+    dy += term * exponentY[i] * powersY[k - 1];
   }
-  return sum;
+  out.value = value;
+  out.dy = dy;
+  return out;
 }
 
 /** Value, first and second derivatives in one pass, written into `out`. */
 export function seriesDerivatives(series: PowerSeries, x: number, y: number, out: SeriesDerivatives): SeriesDerivatives {
-  const { count, exponentX, exponentY, coefficient, minX, minY, powersX, powersY } = series;
-  fillPowers(x, minX, series.maxX, powersX);
-  fillPowers(y, minY, series.maxY, powersY);
+  const { count, exponentX, exponentY, coefficient, indexX, indexY, powersX, powersY } = series;
+  fillPowers(x, series.minX, series.maxX, series.zeroX, powersX);
+  fillPowers(y, series.minY, series.maxY, series.zeroY, powersY);
   let value = 0;
   let dx = 0;
   let dy = 0;
@@ -136,15 +204,17 @@ export function seriesDerivatives(series: PowerSeries, x: number, y: number, out
     const I = exponentX[i];
     const J = exponentY[i];
     const n = coefficient[i];
-    const xI = powersX[I - minX];
-    const xI1 = powersX[I - 1 - minX];
-    const yJ = powersY[J - minY];
-    const yJ1 = powersY[J - 1 - minY];
+    const a = indexX[i];
+    const b = indexY[i];
+    const xI = powersX[a];
+    const xI1 = powersX[a - 1];
+    const yJ = powersY[b];
+    const yJ1 = powersY[b - 1];
     value += n * xI * yJ;
     dx += n * I * xI1 * yJ;
     dy += n * J * xI * yJ1;
-    dxx += n * I * (I - 1) * powersX[I - 2 - minX] * yJ;
-    dyy += n * J * (J - 1) * xI * powersY[J - 2 - minY];
+    dxx += n * I * (I - 1) * powersX[a - 2] * yJ;
+    dyy += n * J * (J - 1) * xI * powersY[b - 2];
     dxy += n * I * J * xI1 * yJ1;
   }
   out.value = value;
@@ -154,6 +224,10 @@ export function seriesDerivatives(series: PowerSeries, x: number, y: number, out
   out.dyy = dyy;
   out.dxy = dxy;
   return out;
+}
+
+export function emptyValueAndSlope(): ValueAndSlope {
+  return { value: 0, dy: 0 };
 }
 
 export function emptyDerivatives(): SeriesDerivatives {

@@ -2,9 +2,12 @@ import { GAS_CONSTANT } from './constants.js';
 import { emptyReducedGibbs, propertiesFromGibbs, type PhaseProperties, type ReducedGibbs } from './gibbsProperties.js';
 import {
   createPowerSeries,
+  derivativeRowsInY,
   emptyDerivatives,
+  emptyValueAndSlope,
   seriesDerivatives,
-  seriesDy,
+  seriesValue,
+  seriesValueAndDy,
   type CoefficientRow,
 } from './powerSeries.js';
 
@@ -53,7 +56,11 @@ const TABLE_2: readonly CoefficientRow[] = [
 ];
 
 const series = createPowerSeries(TABLE_2, 2);
+// gamma_tau as a series of its own (with its tau-derivative gamma_tautau), for
+// the hot paths that need only h and cp.
+const slope = createPowerSeries(derivativeRowsInY(TABLE_2), 1);
 const scratch = emptyDerivatives();
+const slopeScratch = emptyValueAndSlope();
 const scratchGibbs = emptyReducedGibbs();
 
 /** Reduced Gibbs function of region 1 and its derivatives, written into `out`. */
@@ -80,7 +87,7 @@ export function propertiesRegion1(p: number, T: number): PhaseProperties {
 /** Specific enthalpy in region 1, kJ/kg: h = R T tau gamma_tau. Allocation-free. */
 export function enthalpyRegion1(p: number, T: number): number {
   const tau = REDUCING_TEMPERATURE / T;
-  return GAS_CONSTANT * REDUCING_TEMPERATURE * seriesDy(series, 7.1 - p / REDUCING_PRESSURE, tau - 1.222);
+  return GAS_CONSTANT * REDUCING_TEMPERATURE * seriesValue(slope, 7.1 - p / REDUCING_PRESSURE, tau - 1.222);
 }
 
 /** Specific entropy in region 1, kJ/(kg K). */
@@ -95,12 +102,13 @@ export function entropyRegion1(p: number, T: number): number {
  */
 export function newtonStepRegion1(p: number, T: number, target: number, onEntropy: boolean): number {
   const tau = REDUCING_TEMPERATURE / T;
-  const d = seriesDerivatives(series, 7.1 - p / REDUCING_PRESSURE, tau - 1.222, scratch);
-  const cp = -GAS_CONSTANT * tau * tau * d.dyy;
+  const x = 7.1 - p / REDUCING_PRESSURE;
   if (onEntropy) {
+    const d = seriesDerivatives(series, x, tau - 1.222, scratch);
     const s = GAS_CONSTANT * (tau * d.dy - d.value);
-    return ((s - target) * T) / cp;
+    return ((s - target) * T) / (-GAS_CONSTANT * tau * tau * d.dyy);
   }
-  const h = GAS_CONSTANT * T * tau * d.dy;
-  return (h - target) / cp;
+  const d = seriesValueAndDy(slope, x, tau - 1.222, slopeScratch);
+  const h = GAS_CONSTANT * REDUCING_TEMPERATURE * d.value;
+  return (h - target) / (-GAS_CONSTANT * tau * tau * d.dy);
 }

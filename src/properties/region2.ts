@@ -2,10 +2,12 @@ import { GAS_CONSTANT } from './constants.js';
 import { emptyReducedGibbs, propertiesFromGibbs, type PhaseProperties, type ReducedGibbs } from './gibbsProperties.js';
 import {
   createPowerSeries,
+  derivativeRowsInY,
   emptyDerivatives,
-  fillPowers,
+  emptyValueAndSlope,
   seriesDerivatives,
-  seriesDy,
+  seriesValue,
+  seriesValueAndDy,
   type CoefficientRow,
 } from './powerSeries.js';
 
@@ -78,13 +80,17 @@ const TABLE_11: readonly CoefficientRow[] = [
 ];
 
 // The ideal part is a series in tau alone: written as pi^0 tau^J0.
-const ideal = createPowerSeries(
-  TABLE_10.map(([J0, n0]) => [0, J0, n0] as const),
-  2,
-);
+const idealRows = TABLE_10.map(([J0, n0]) => [0, J0, n0] as const);
+const ideal = createPowerSeries(idealRows, 2);
 const residual = createPowerSeries(TABLE_11, 2);
+// gamma0_tau and gammar_tau as series of their own (with their tau-derivatives),
+// for the hot paths that need only h and cp.
+const idealSlope = createPowerSeries(derivativeRowsInY(idealRows), 1);
+const residualSlope = createPowerSeries(derivativeRowsInY(TABLE_11), 1);
 const idealScratch = emptyDerivatives();
 const residualScratch = emptyDerivatives();
+const idealSlopeScratch = emptyValueAndSlope();
+const residualSlopeScratch = emptyValueAndSlope();
 
 /** Reduced Gibbs function of region 2 (ideal + residual) and its derivatives. */
 export function gibbsRegion2(p: number, T: number, out: ReducedGibbs = emptyReducedGibbs()): ReducedGibbs {
@@ -107,22 +113,10 @@ export function propertiesRegion2(p: number, T: number): PhaseProperties {
   return propertiesFromGibbs(p, T, p / REDUCING_PRESSURE, REDUCING_TEMPERATURE / T, gibbs);
 }
 
-/** gamma0_tau = sum n0 J0 tau^(J0 - 1), evaluated directly from the flat table. */
-function idealGammaTau(tau: number): number {
-  const { count, exponentY, coefficient, minY, maxY, powersY } = ideal;
-  fillPowers(tau, minY, maxY, powersY);
-  let sum = 0;
-  for (let k = 0; k < count; k++) {
-    const J = exponentY[k];
-    sum += coefficient[k] * J * powersY[J - 1 - minY];
-  }
-  return sum;
-}
-
 /** Specific enthalpy in region 2, kJ/kg: h = R T tau (gamma0_tau + gammar_tau). Allocation-free. */
 export function enthalpyRegion2(p: number, T: number): number {
   const tau = REDUCING_TEMPERATURE / T;
-  const gammaTau = idealGammaTau(tau) + seriesDy(residual, p / REDUCING_PRESSURE, tau - 0.5);
+  const gammaTau = seriesValue(idealSlope, 1, tau) + seriesValue(residualSlope, p / REDUCING_PRESSURE, tau - 0.5);
   return GAS_CONSTANT * REDUCING_TEMPERATURE * gammaTau;
 }
 
@@ -140,12 +134,13 @@ export function entropyRegion2(p: number, T: number): number {
  */
 export function newtonStepRegion2(p: number, T: number, target: number, onEntropy: boolean): number {
   const tau = REDUCING_TEMPERATURE / T;
-  const gibbs = gibbsRegion2(p, T, scratchGibbs);
-  const cp = -GAS_CONSTANT * tau * tau * gibbs.gammaTauTau;
   if (onEntropy) {
+    const gibbs = gibbsRegion2(p, T, scratchGibbs);
     const s = GAS_CONSTANT * (tau * gibbs.gammaTau - gibbs.gamma);
-    return ((s - target) * T) / cp;
+    return ((s - target) * T) / (-GAS_CONSTANT * tau * tau * gibbs.gammaTauTau);
   }
-  const h = GAS_CONSTANT * T * tau * gibbs.gammaTau;
-  return (h - target) / cp;
+  const i = seriesValueAndDy(idealSlope, 1, tau, idealSlopeScratch);
+  const r = seriesValueAndDy(residualSlope, p / REDUCING_PRESSURE, tau - 0.5, residualSlopeScratch);
+  const h = GAS_CONSTANT * REDUCING_TEMPERATURE * (i.value + r.value);
+  return (h - target) / (-GAS_CONSTANT * tau * tau * (i.dy + r.dy));
 }

@@ -1,0 +1,172 @@
+// Evaluations per second of the property hot paths, over a million varied,
+// precomputed inputs. Each function runs several rounds after a warm-up; the
+// median round is reported. Run: npm run bench:properties [-- --json] [-- --only h_pT_region2]
+import {
+  enthalpyRegion1,
+  enthalpyRegion2,
+  pressureB23,
+  saturationPressureRegion4,
+  saturationTemperatureRegion4,
+  temperatureB23,
+  temperaturePHRegion2,
+} from '../src/properties/index.js';
+
+const INPUTS = 1_000_000;
+const ROUNDS = 7;
+
+/** Small deterministic generator (mulberry32), so every run sees the same inputs. */
+function random(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+interface Inputs {
+  first: Float64Array;
+  second: Float64Array;
+}
+
+/** Compressed liquid: 273.15-623.15 K, from saturation up to 100 MPa. */
+function region1Inputs(next: () => number): Inputs {
+  const p = new Float64Array(INPUTS);
+  const T = new Float64Array(INPUTS);
+  for (let i = 0; i < INPUTS; i++) {
+    T[i] = 273.15 + 350 * next();
+    const lowest = saturationPressureRegion4(T[i]);
+    p[i] = lowest + (100 - lowest) * next();
+  }
+  return { first: p, second: T };
+}
+
+/** Steam: 1 kPa to 100 MPa (log-uniform), from saturation or the B23 line to 1073.15 K. */
+function region2Inputs(next: () => number): Inputs {
+  const p = new Float64Array(INPUTS);
+  const T = new Float64Array(INPUTS);
+  const boundary = pressureB23(623.15);
+  for (let i = 0; i < INPUTS; i++) {
+    p[i] = Math.exp(Math.log(0.001) + (Math.log(100) - Math.log(0.001)) * next());
+    const coldest = p[i] <= boundary ? saturationTemperatureRegion4(p[i]) : temperatureB23(p[i]);
+    T[i] = coldest + (1073.15 - coldest) * next();
+  }
+  return { first: p, second: T };
+}
+
+/** One pass over all inputs, summing the results so none can be optimised away. */
+type Pass = (first: Float64Array, second: Float64Array) => number;
+
+interface Case {
+  name: string;
+  pass: Pass;
+  inputs: Inputs;
+}
+
+let sink = 0;
+
+interface Rates {
+  /** Evaluations per second of CPU time: the per-core figure, even on a busy machine. */
+  cpu: number;
+  /** Evaluations per second of wall-clock time. */
+  wall: number;
+}
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)];
+}
+
+function measure({ pass, inputs: { first, second } }: Case): Rates {
+  sink += pass(first, second); // warm-up: lets the JIT settle before timing
+  const cpu: number[] = [];
+  const wall: number[] = [];
+  for (let round = 0; round < ROUNDS; round++) {
+    const startWall = process.hrtime.bigint();
+    const startCpu = process.cpuUsage();
+    sink += pass(first, second);
+    const used = process.cpuUsage(startCpu);
+    wall.push(INPUTS / (Number(process.hrtime.bigint() - startWall) / 1e9));
+    cpu.push(INPUTS / ((used.user + used.system) / 1e6));
+  }
+  return { cpu: median(cpu), wall: median(wall) };
+}
+
+function main(): void {
+  const json = process.argv.includes('--json');
+  const next = random(0x1f97);
+  const liquid = region1Inputs(next);
+  const steam = region2Inputs(next);
+  const steamEnthalpy: Inputs = {
+    first: steam.first,
+    second: steam.first.map((p, i) => enthalpyRegion2(p, steam.second[i])),
+  };
+  const saturation: Inputs = { first: new Float64Array(INPUTS), second: new Float64Array(INPUTS) };
+  for (let i = 0; i < INPUTS; i++) saturation.first[i] = Math.exp(Math.log(0.001) + (Math.log(22.064) - Math.log(0.001)) * next());
+
+  // Each case has its own loop calling the function directly: a loop shared
+  // through a function parameter would see four callees and stop inlining.
+  const cases: Case[] = [
+    {
+      name: 'h_pT_region1',
+      inputs: liquid,
+      pass: (p, T) => {
+        let sum = 0;
+        for (let i = 0; i < INPUTS; i++) sum += enthalpyRegion1(p[i], T[i]);
+        return sum;
+      },
+    },
+    {
+      name: 'h_pT_region2',
+      inputs: steam,
+      pass: (p, T) => {
+        let sum = 0;
+        for (let i = 0; i < INPUTS; i++) sum += enthalpyRegion2(p[i], T[i]);
+        return sum;
+      },
+    },
+    {
+      name: 'T_ph_region2',
+      inputs: steamEnthalpy,
+      pass: (p, h) => {
+        let sum = 0;
+        for (let i = 0; i < INPUTS; i++) sum += temperaturePHRegion2(p[i], h[i]);
+        return sum;
+      },
+    },
+    {
+      name: 'Tsat_p',
+      inputs: saturation,
+      pass: (p) => {
+        let sum = 0;
+        for (let i = 0; i < INPUTS; i++) sum += saturationTemperatureRegion4(p[i]);
+        return sum;
+      },
+    },
+  ];
+
+  const only = process.argv.indexOf('--only');
+  const chosen = only >= 0 ? cases.filter((item) => item.name === process.argv[only + 1]) : cases;
+  const results = chosen.map((item) => ({ name: item.name, rates: measure(item) }));
+  if (json) {
+    for (const { name, rates } of results) console.log(JSON.stringify({ name, evals_per_s: Number(rates.cpu.toPrecision(3)) }));
+  } else {
+    console.log(`IAPWS-IF97 hot paths: ${INPUTS.toLocaleString('en-US')} inputs, median of ${ROUNDS} rounds, one thread`);
+    console.log('Rates are per second of CPU time (the per-core figure); wall-clock rates are lower on a busy machine.');
+    console.log('');
+    console.log(`${'function'.padEnd(14)}${'evals/s (cpu)'.padStart(16)}${'ns/eval'.padStart(10)}${'evals/s (wall)'.padStart(17)}`);
+    for (const { name, rates } of results) {
+      const millions = (rate: number): string => `${(rate / 1e6).toFixed(2)} M`;
+      console.log(
+        `${name.padEnd(14)}${millions(rates.cpu).padStart(16)}${(1e9 / rates.cpu).toFixed(1).padStart(10)}${millions(rates.wall).padStart(17)}`,
+      );
+    }
+    console.log('');
+  }
+  // Printed to stderr so --json output stays one line per function.
+  console.error(`checksum ${sink.toPrecision(12)}`);
+}
+
+main();
