@@ -6,7 +6,6 @@ import { commands } from './commands/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
 
 export async function main(argv: string[]): Promise<number> {
-  let exitCode = 0;
   const parser = yargs(argv)
     .scriptName('steamwright')
     .usage('$0 <command> [options]\n\nIndustrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.')
@@ -14,16 +13,12 @@ export async function main(argv: string[]): Promise<number> {
     .demandCommand(1, 'Name a command, for example: steamwright state --p "10 barg" --x 1')
     .recommendCommands()
     .help()
-    .alias('help', 'h')
     .version()
     .wrap(Math.min(100, process.stdout.columns ?? 100))
     .fail((message, error) => {
-      // yargs' own usage errors (unknown option, missing argument) and our CliErrors
-      // both end as one line on stderr; anything else is a bug and is rethrown.
-      if (error && !(error instanceof CliError)) throw error;
-      const text = error instanceof CliError ? error.message : message;
-      process.stderr.write(`steamwright: ${text}\n`);
-      exitCode = error instanceof CliError ? error.exitCode : EXIT_USAGE;
+      // Errors thrown by a command (ours or a bug) go on to the catch below;
+      // yargs' own usage errors (unknown option, missing argument) end here.
+      throw error ?? new CliError(message, EXIT_USAGE);
     });
   for (const command of commands) parser.command(command);
   try {
@@ -35,7 +30,7 @@ export async function main(argv: string[]): Promise<number> {
     }
     throw error;
   }
-  return exitCode || (process.exitCode as number | undefined) || 0;
+  return (process.exitCode as number | undefined) ?? 0;
 }
 
 main(hideBin(process.argv)).then(

@@ -15,6 +15,11 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const clean = (value: number): number => (Math.abs(value) < 1e-7 ? 0 : value);
   const flow = (kgs: number): string => formatQuantity(clean(kgs), 'massFlow', system);
   const power = (kw: number): string => formatQuantity(clean(kw), 'power', system);
+  // Fuel is a heat rate: MW in SI, MMBtu/h in US units (1 kW = 3412.1416 Btu/h, Btu(IT)).
+  const fuelRate = (kw: number): string =>
+    system === 'si' ? `${(clean(kw) / 1000).toFixed(2)} MW` : `${(clean(kw) * 0.0034121416).toFixed(2)} MMBtu/h`;
+  const steamRate = (kgPerKWh: number): string =>
+    system === 'si' ? `${kgPerKWh.toFixed(2)} kg/kWh` : `${(kgPerKWh / 0.45359237).toFixed(2)} lb/kWh`;
   const money = (value: number): string => `${value.toLocaleString('en-US', { maximumFractionDigits: 0 })} ${result.currency}`;
   const perMass = system === 'si' ? 't' : 'klb';
   const valuePerMass = (perT: number | null): string => {
@@ -42,15 +47,18 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
     ),
   );
 
-  const losses: string[][] = [];
-  for (const stream of result.streams) {
-    if (stream.to === 'atmosphere' && stream.mass_kg_s > 1e-9) losses.push([`vent from ${stream.from}`, flow(stream.mass_kg_s)]);
+  // Vents first, then drains; flows of one kind from one unit are added up.
+  const losses = new Map<string, number>();
+  for (const terminal of ['atmosphere', 'drain']) {
+    for (const stream of result.streams) {
+      if (stream.to !== terminal) continue;
+      const label = terminal === 'atmosphere' ? `vent from ${stream.from}` : `${words(stream.kind)} from ${stream.from} to drain`;
+      losses.set(label, (losses.get(label) ?? 0) + stream.mass_kg_s);
+    }
   }
-  for (const stream of result.streams) {
-    if (stream.to === 'drain' && stream.mass_kg_s > 1e-9) losses.push([`${stream.kind} from ${stream.from} to drain`, flow(stream.mass_kg_s)]);
-  }
+  const lossRows = [...losses].filter(([, value]) => value > 1e-9).map(([label, value]) => [label, flow(value)]);
   lines.push('', 'Losses (vents first: venting is usually the largest avoidable loss)');
-  lines.push(losses.length > 0 ? table(['where', 'flow'], losses) : '  none');
+  lines.push(lossRows.length > 0 ? table(['where', 'flow'], lossRows) : '  none');
 
   const units = result.units;
   const sources = units.filter((unit) => ['boiler', 'heatRecoveryBoiler', 'steamImport'].includes(unit.kind));
@@ -61,7 +69,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
       sources.map((unit) => [
         unit.id,
         flow(Number(unit.values.steam_kg_s ?? 0)),
-        unit.values.fuel_kW !== undefined ? power(Number(unit.values.fuel_kW)) : '-',
+        unit.values.fuel_kW !== undefined ? fuelRate(Number(unit.values.fuel_kW)) : '-',
         typeof unit.values.efficiency === 'number' ? `${(unit.values.efficiency * 100).toFixed(1)} %` : '-',
         unit.binding.join(', ') || '-',
       ]),
@@ -77,7 +85,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
           unit.id,
           flow(Number(unit.values.inlet_kg_s ?? 0)),
           power(Number(unit.values.power_kW ?? 0)),
-          typeof unit.values.steam_rate_kg_kWh === 'number' ? `${unit.values.steam_rate_kg_kWh.toFixed(2)} kg/kWh` : '-',
+          typeof unit.values.steam_rate_kg_kWh === 'number' ? steamRate(unit.values.steam_rate_kg_kWh) : '-',
           unit.binding.join(', ') || '-',
         ]),
       ),
@@ -110,7 +118,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
       [
         ['cost', `${money(totals.cost_per_h)} per hour`],
         ['  fuel / power / steam / water / carbon', ['fuel', 'power', 'steam', 'water', 'carbon'].map((key) => money(totals.cost_by_component_per_h[key as keyof typeof totals.cost_by_component_per_h])).join(' / ')],
-        ['fuel fired', power(totals.fuel_kW)],
+        ['fuel fired', fuelRate(totals.fuel_kW)],
         ['power made / bought / sold', `${power(totals.power_generated_kW)} / ${power(totals.power_imported_kW)} / ${power(totals.power_exported_kW)}`],
         ['steam raised', flow(totals.steam_raised_kg_s)],
         ['steam let down', flow(totals.let_down_kg_s)],
@@ -131,8 +139,20 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         ['boiler fuel-to-steam efficiency', percent(kpis.boiler_fuel_to_steam_efficiency)],
         ['condensate return', percent(kpis.condensate_return_fraction)],
         ['steam let down / vented', `${percent(kpis.let_down_fraction)} / ${percent(kpis.vented_fraction)}`],
-        ['power per tonne of throttle steam', kpis.power_per_throttle_t_kWh === null ? 'n/a' : `${kpis.power_per_throttle_t_kWh.toFixed(1)} kWh/t`],
-        ['fuel chargeable to power', kpis.fuel_chargeable_to_power_kJ_per_kWh === null ? 'n/a' : `${(kpis.fuel_chargeable_to_power_kJ_per_kWh / 1000).toFixed(2)} MJ/kWh`],
+        [
+          `power per ${perMass} of throttle steam`,
+          kpis.power_per_throttle_t_kWh === null
+            ? 'n/a'
+            : `${(system === 'si' ? kpis.power_per_throttle_t_kWh : kpis.power_per_throttle_t_kWh * 0.45359237).toFixed(1)} kWh/${perMass}`,
+        ],
+        [
+          'fuel chargeable to power',
+          kpis.fuel_chargeable_to_power_kJ_per_kWh === null
+            ? 'n/a'
+            : system === 'si'
+              ? `${(kpis.fuel_chargeable_to_power_kJ_per_kWh / 1000).toFixed(2)} MJ/kWh`
+              : `${((kpis.fuel_chargeable_to_power_kJ_per_kWh / 1.05505585262)).toFixed(0)} Btu/kWh`,
+        ],
         ['site useful-energy efficiency', percent(kpis.site_useful_energy_efficiency)],
       ],
       false,
@@ -145,6 +165,11 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   );
   lines.push('', SAFETY_CAUTION, '');
   return lines.join('\n');
+}
+
+/** "flashLiquid" -> "flash liquid". */
+function words(kind: string): string {
+  return kind.replace(/([a-z])([A-Z])/g, (_, lower: string, upper: string) => `${lower} ${upper.toLowerCase()}`);
 }
 
 function objectiveWords(objective: string): string {

@@ -2,13 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { runCli } from '../helpers/cli.js';
 
 describe('steamwright state', () => {
-  it('saturated steam at 1 MPa matches IF97 (R7-97 Table 35: Tsat(1 MPa) = 453.035632 K)', async () => {
-    const run = await runCli(['state', '--p', '1 MPa', '--x', '1', '--json']);
+  it('wet steam at 1 MPa sits at Tsat = 453.035632 K (R7-97 Table 35) with no cp', async () => {
+    const run = await runCli(['state', '--p', '1 MPa', '--x', '0.5', '--json']);
     expect(run.stderr).toBe('');
     expect(run.code).toBe(0);
     const state = JSON.parse(run.stdout);
     expect(state.region).toBe(4);
-    expect(state.x).toBe(1);
+    expect(state.x).toBe(0.5);
     expect(state.T_K).toBeCloseTo(453.035632, 5);
     expect(state.cp_kJ_kgK).toBeNull();
   });

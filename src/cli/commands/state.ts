@@ -74,19 +74,23 @@ function atmosphereOptions(text: string | undefined): ParseOptions {
 /** A readable two-column table of one state in the chosen unit system. */
 export function stateTable(state: SteamState, system: UnitSystem, options: ParseOptions): string {
   const absolute = system === 'si' ? 'MPa' : 'psia';
+  // A property table reads to six significant digits, as steam tables print.
+  const digits = 6;
+  const show = (value: number, kind: Parameters<typeof formatQuantity>[1], extra: Parameters<typeof formatQuantity>[3] = {}): string =>
+    formatQuantity(value, kind, system, { ...extra, digits });
   const rows: [string, string][] = [
     ['region', regionName(state)],
-    ['pressure', `${formatQuantity(state.p, 'pressure', system, { ...options, unit: absolute })}  (${formatQuantity(state.p, 'pressure', system, options)})`],
-    ['temperature', formatQuantity(state.T, 'temperature', system)],
-    ['saturation temperature', state.Tsat === null ? 'none (above the critical pressure)' : formatQuantity(state.Tsat, 'temperature', system)],
+    ['pressure', `${show(state.p, 'pressure', { ...options, unit: absolute })}  (${show(state.p, 'pressure', options)})`],
+    ['temperature', show(state.T, 'temperature')],
+    ['saturation temperature', state.Tsat === null ? 'none (above the critical pressure)' : show(state.Tsat, 'temperature')],
   ];
-  if (state.superheat !== null) rows.push(['superheat', formatQuantity(state.superheat, 'temperatureDifference', system)]);
+  if (state.superheat !== null) rows.push(['superheat', show(state.superheat, 'temperatureDifference')]);
   if (state.x !== null) rows.push(['vapour quality', state.x.toFixed(4)]);
   rows.push(
-    ['specific enthalpy', formatQuantity(state.h, 'specificEnthalpy', system)],
-    ['specific entropy', formatQuantity(state.s, 'specificEntropy', system)],
+    ['specific enthalpy', show(state.h, 'specificEnthalpy')],
+    ['specific entropy', show(state.s, 'specificEntropy')],
     ['specific volume', system === 'si' ? `${state.v.toPrecision(6)} m3/kg` : `${(state.v * 16.01846337396).toPrecision(6)} ft3/lb`],
-    ['specific heat cp', state.cp === null ? 'not defined in the two-phase region' : formatQuantity(state.cp, 'specificEntropy', system)],
+    ['specific heat cp', state.cp === null ? 'not defined in the two-phase region' : show(state.cp, 'specificEntropy')],
   );
   const width = Math.max(...rows.map(([label]) => label.length));
   return rows.map(([label, value]) => `${label.padEnd(width)}  ${value}`).join('\n') + '\nIAPWS-IF97\n';

@@ -1,0 +1,59 @@
+// npm run bench:solve: wall time of `steamwright solve` on each demo case from
+// process start (module load, wasm start, every pass), and time per pass in
+// process. Medians over rounds; never part of the test suite.
+import { spawnSync } from 'node:child_process';
+import { readdirSync, readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { loadCaseText } from '../src/model/index.js';
+import { solvePlant } from '../src/plant/index.js';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+const cli = fileURLToPath(new URL('../src/cli/main.js', import.meta.url));
+const rounds = Number(process.env.BENCH_ROUNDS ?? 7);
+const json = process.argv.includes('--json');
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  const middle = Math.floor(sorted.length / 2);
+  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+}
+
+const cases = readdirSync(`${root}/cases`).filter((name) => name.endsWith('.yaml'));
+for (const name of cases) {
+  const path = `${root}/cases/${name}`;
+  const wall: number[] = [];
+  for (let round = 0; round < rounds; round += 1) {
+    const start = process.hrtime.bigint();
+    const run = spawnSync(process.execPath, [cli, 'solve', path, '--json'], { encoding: 'utf8' });
+    wall.push(Number(process.hrtime.bigint() - start) / 1e6);
+    if (run.status !== 0) throw new Error(`solve ${name} failed: ${run.stderr}`);
+  }
+  const loaded = loadCaseText(readFileSync(path, 'utf8'), name);
+  if (!loaded.ok) throw new Error(`${name} does not load`);
+  await solvePlant(loaded.plant); // warm: wasm compiled, code optimised
+  const inProcess: number[] = [];
+  const perPass: number[] = [];
+  let passes = 0;
+  for (let round = 0; round < rounds; round += 1) {
+    const start = process.hrtime.bigint();
+    const outcome = await solvePlant(loaded.plant);
+    const ms = Number(process.hrtime.bigint() - start) / 1e6;
+    passes = outcome.passes.length;
+    inProcess.push(ms);
+    perPass.push(ms / Math.max(1, passes));
+  }
+  const figures = {
+    case: name,
+    end_to_end_ms_median: median(wall),
+    warm_solve_ms_median: median(inProcess),
+    passes,
+    ms_per_pass_median: median(perPass),
+    rounds,
+  };
+  if (json) console.log(JSON.stringify(figures));
+  else {
+    console.log(`${name}`);
+    console.log(`  end to end (new process, solve --json): ${figures.end_to_end_ms_median.toFixed(0)} ms median of ${rounds}`);
+    console.log(`  warm in-process solve: ${figures.warm_solve_ms_median.toFixed(1)} ms, ${passes} passes, ${figures.ms_per_pass_median.toFixed(1)} ms per pass`);
+  }
+}

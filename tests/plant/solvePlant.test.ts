@@ -1,0 +1,122 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { readdirSync, readFileSync } from 'node:fs';
+import { jslpBackend } from '../../src/lp/index.js';
+import { plantResult, solvePlant, type PlantOutcome } from '../../src/plant/index.js';
+import { saturatedLiquid, saturatedVapour, statePT } from '../../src/properties/index.js';
+import { expectClose } from '../helpers/expectClose.js';
+import { loadPlant, smallCase } from './helpers/cases.js';
+
+type Solved = Extract<PlantOutcome, { ok: true }>;
+
+async function solved(text: string): Promise<Solved> {
+  const outcome = await solvePlant(loadPlant(text));
+  if (!outcome.ok) throw new Error(`expected a solution, got: ${outcome.message}`);
+  return outcome;
+}
+
+const unit = (outcome: Solved, id: string) => plantResult(outcome).units.find((candidate) => candidate.id === id)!;
+const P_MAIN = 1.101325; // 10 barg on 101.325 kPa
+const P_DA = 0.121325; // 0.2 barg = 0.02 MPa above 101.325 kPa
+
+describe('solvePlant: one boiler, one user, a deaerator, solved by hand', () => {
+  it('fuel = steam x enthalpy rise / efficiency, with the deaerator balance closed by hand', async () => {
+    const outcome = await solved(smallCase());
+    // By hand (IF97 states): the user takes 20 t/h of dry saturated steam at
+    // 10 barg and returns nothing, so makeup M = 20 t/h enters the deaerator at
+    // 15 degC. Deaerator: M h_m + D h_g = (M + D) h_fw, so the heating steam
+    // D = M (h_fw - h_m) / (h_g - h_fw). Feedwater pump (no pumps described,
+    // efficiency 1): w = v_f (p_boiler - p_da). Boiler: S = M + D, fuel = S (h_g - h_fw - w) / 0.8.
+    const makeup = 20 / 3.6;
+    const hg = saturatedVapour(P_MAIN).h;
+    const liquid = saturatedLiquid(P_DA);
+    const hm = statePT(0.101325, 288.15).h;
+    const heating = (makeup * (liquid.h - hm)) / (hg - liquid.h);
+    const steam = makeup + heating;
+    const pumpWork = liquid.v * (P_MAIN - P_DA) * 1000;
+    const fuel = (steam * (hg - liquid.h - pumpWork)) / 0.8;
+    expectClose(Number(unit(outcome, 'deaerator').values.heating_steam_kg_s), heating, 1e-9, 'deaerator steam');
+    expectClose(Number(unit(outcome, 'b1').values.steam_kg_s), steam, 1e-9, 'boiler steam');
+    expectClose(Number(unit(outcome, 'b1').values.fuel_kW), fuel, 1e-9, 'boiler fuel');
+    // Cost: fuel at 10 USD/GJ, makeup at 0.5 USD/t, pump power bought at 100 USD/MWh.
+    const totals = plantResult(outcome).totals;
+    expectClose(totals.cost_per_h, fuel * 0.0036 * 10 + makeup * 3.6 * 0.5 + steam * pumpWork * 0.1, 1e-9, 'cost per hour');
+  });
+
+  it('the marginal value of steam equals its fuel cost when the boiler is on the margin', async () => {
+    const outcome = await solved(smallCase());
+    const header = plantResult(outcome).headers[0];
+    // One more tonne drawn at the header costs its makeup, deaerator steam and fuel: more than the
+    // fuel for the enthalpy rise alone, 1000 (h_g - h_fw) / 0.8 kJ at 10 USD/GJ, and less than twice it.
+    const fuelOnly = ((saturatedVapour(P_MAIN).h - saturatedLiquid(P_DA).h) / 0.8) * 1e-6 * 1000 * 10;
+    expect(header.marginal_value_per_t).toBeGreaterThan(fuelOnly);
+    expect(header.marginal_value_per_t).toBeLessThan(2 * fuelOnly);
+  });
+
+  it('condensate returned to the deaerator cuts makeup one for one', async () => {
+    const outcome = await solved(smallCase({ returnPercent: 60, condensateTemperature: '90 degC' }));
+    expectClose(Number(unit(outcome, 'deaerator').values.makeup_kg_s), (20 / 3.6) * 0.4, 1e-9, 'makeup');
+    expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+  });
+});
+
+describe('solvePlant: letdown with desuperheater', () => {
+  it('spray water = m (h_in - h_out) / (h_out - h_w) with IF97 values', async () => {
+    const outcome = await solved(smallCase({ letdown: true }));
+    const letdown = unit(outcome, 'prv');
+    const hIn = statePT(4.101325, 673.15).h; // controlled header at 400 degC
+    const hOut = statePT(1.101325, 493.15).h; // target 220 degC at 10 barg
+    const hWater = saturatedLiquid(P_DA).h; // feedwater from the deaerator
+    const steam = Number(letdown.values.steam_kg_s);
+    expectClose(Number(letdown.values.inlet_h_kJ_kg), hIn, 1e-9, 'inlet enthalpy');
+    expectClose(Number(letdown.values.spray_kg_s), (steam * (hIn - hOut)) / (hOut - hWater), 1e-9, 'spray water');
+    expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+  });
+});
+
+describe('solvePlant: infeasible demands', () => {
+  it('names the short header and by how much', async () => {
+    const outcome = await solvePlant(loadPlant(smallCase({ boilerMax: '10 t/h', userSteam: '30 t/h' })));
+    expect(outcome.ok).toBe(false);
+    if (outcome.ok) return;
+    expect(outcome.reason).toBe('infeasible');
+    expect(outcome.message).toMatch(/main is short of/);
+    expect(outcome.message).toMatch(/b1 at maximum steam/);
+    const short = outcome.diagnosis!.shortfalls.find((item) => item.node === 'main')!;
+    // 30 t/h asked, 10 t/h of boiler steam less what the deaerator takes.
+    expect(short.amount * 3.6).toBeGreaterThan(20);
+    expect(short.amount * 3.6).toBeLessThan(22);
+  });
+
+  it('property: any demand beyond the boiler names the header, any demand within it solves and closes its audit', async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.integer({ min: 5, max: 80 }), fc.integer({ min: 1, max: 90 }), fc.integer({ min: 0, max: 95 }), async (boilerMax, demand, returned) => {
+        const outcome = await solvePlant(loadPlant(smallCase({ boilerMax: `${boilerMax} t/h`, userSteam: `${demand} t/h`, returnPercent: returned })));
+        // The boiler must also heat the deaerator: at most about 20 % on top of the demand here.
+        if (demand > boilerMax) {
+          expect(outcome.ok).toBe(false);
+          if (!outcome.ok) expect(outcome.message).toMatch(/main is short of/);
+        } else if (demand * 1.25 < boilerMax) {
+          expect(outcome.ok).toBe(true);
+          if (outcome.ok) expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+        }
+      }),
+      { numRuns: 25 },
+    );
+  });
+});
+
+describe('solvePlant on the demo cases', () => {
+  const cases = readdirSync('cases').filter((name) => name.endsWith('.yaml'));
+  for (const name of cases) {
+    it(`${name} converges, closes its audit, and HiGHS and javascript-lp-solver agree on the optimum`, async () => {
+      const plant = loadPlant(readFileSync(`cases/${name}`, 'utf8'));
+      const highs = await solvePlant(plant);
+      if (!highs.ok) throw new Error(highs.message);
+      expect(highs.audit.worstRelative).toBeLessThan(1e-6);
+      const second = await solvePlant(plant, { backend: jslpBackend });
+      if (!second.ok) throw new Error(second.message);
+      expectClose(second.result.objective!, highs.result.objective!, 1e-6, `${name} objective`);
+    });
+  }
+});
