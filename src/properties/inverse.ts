@@ -14,7 +14,7 @@ import { temperaturePSRegion2Backward } from './region2BackwardPS.js';
 // at fixed p (cp > 0), so the sign of each step tells which side the root is.
 
 const MAX_STEPS = 100;
-const LAST_STEP = 1e-9;
+const LAST_STEP = 1e-7;
 
 type NewtonStep = (p: number, T: number, target: number, onEntropy: boolean) => number;
 
@@ -32,9 +32,11 @@ function refine(
   let T = start > low && start < high ? start : start <= low ? low : high;
   for (let k = 0; k < MAX_STEPS; k++) {
     const dT = step(p, T, target, onEntropy);
-    // Convergence is quadratic: after a step of 1e-9 T (about 1e-6 K) the
-    // remaining error is of order (1e-6 K)^2 (dcp/dT) / cp, far below round-off,
-    // so that step is taken without evaluating again.
+    // Convergence is quadratic: after a step d the remaining error is about
+    // d^2 (dcp/dT) / (2 cp), and (dcp/dT) / cp stays below 0.1 /K in regions 1
+    // and 2 (measured: 0.095 /K in region 2 beside the B23 line at 16.6 MPa).
+    // A step under 1e-7 T (6e-5 K at 600 K) leaves under 2e-10 K, so it is
+    // taken without evaluating again: usually after the second evaluation.
     if (Math.abs(dT) <= LAST_STEP * T) return T - dT;
     if (dT > 0) above = T;
     else below = T;

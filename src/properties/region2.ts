@@ -87,6 +87,9 @@ const residual = createPowerSeries(TABLE_11, 2);
 // for the hot paths that need only h and cp.
 const idealSlope = createPowerSeries(derivativeRowsInY(idealRows), 1);
 const residualSlope = createPowerSeries(derivativeRowsInY(TABLE_11), 1);
+// The same without room for a further derivative: its powers of (tau - 0.5)
+// are all non-negative, so h(p, T) needs no division for them.
+const residualSlopeOnly = createPowerSeries(derivativeRowsInY(TABLE_11), 0);
 const idealScratch = emptyDerivatives();
 const residualScratch = emptyDerivatives();
 const idealSlopeScratch = emptyValueAndSlope();
@@ -116,7 +119,7 @@ export function propertiesRegion2(p: number, T: number): PhaseProperties {
 /** Specific enthalpy in region 2, kJ/kg: h = R T tau (gamma0_tau + gammar_tau). Allocation-free. */
 export function enthalpyRegion2(p: number, T: number): number {
   const tau = REDUCING_TEMPERATURE / T;
-  const gammaTau = seriesValue(idealSlope, 1, tau) + seriesValue(residualSlope, p / REDUCING_PRESSURE, tau - 0.5);
+  const gammaTau = seriesValue(idealSlope, 1, tau) + seriesValue(residualSlopeOnly, p / REDUCING_PRESSURE, tau - 0.5);
   return GAS_CONSTANT * REDUCING_TEMPERATURE * gammaTau;
 }
 
