@@ -5,8 +5,19 @@ import { hideBin } from 'yargs/helpers';
 import { commands } from './commands/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
 
+/** yargs reads a lone "-" as an unknown argument, not as an option's value ("--batch -" for stdin). */
+function joinStdinValues(argv: string[]): string[] {
+  const joined: string[] = [];
+  for (const arg of argv) {
+    const previous = joined[joined.length - 1];
+    if (arg === '-' && previous !== undefined && /^--[a-z][\w-]*$/.test(previous)) joined[joined.length - 1] = `${previous}=-`;
+    else joined.push(arg);
+  }
+  return joined;
+}
+
 export async function main(argv: string[]): Promise<number> {
-  const parser = yargs(argv)
+  const parser = yargs(joinStdinValues(argv))
     .scriptName('steamwright')
     .usage('$0 <command> [options]\n\nIndustrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.')
     .strict()

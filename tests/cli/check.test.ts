@@ -86,7 +86,6 @@ describe('steamwright init', () => {
     expect(run.code).toBe(2);
     expect(run.stderr.replaceAll(file, 'plant.yaml')).toMatchInlineSnapshot(`
       "steamwright: plant.yaml already exists; choose another name or remove it first
-      steamwright: plant.yaml already exists; choose another name or remove it first
       "
     `);
     expect(readFileSync(file, 'utf8')).toBe('mine\n');

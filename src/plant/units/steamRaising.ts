@@ -57,7 +57,9 @@ export function declareSteamRaising(
   blowdownTo: LiquidDestination,
 ): void {
   const feedPerKg = 1 + point.blowdownPerKg;
-  context.stream({ from: 'deaerator', to: owner, kind: 'feedwater', flow: expr().addExpression(steam, feedPerKg), h: point.feedwaterH, p: point.pressure });
+  // The stream is what leaves the deaerator; the pump's work is added between it and the boiler.
+  const deaerator = context.plant.deaerator;
+  context.stream({ from: 'deaerator', to: owner, kind: 'feedwater', flow: expr().addExpression(steam, feedPerKg), h: deaerator.feedwaterH, p: deaerator.pressure });
   context.stream({ from: owner, to: headerId, kind: 'steam', flow: steam.clone(), h: outlet.h, p: point.pressure });
   if (point.blowdownPerKg > 0) {
     context.stream({ from: owner, to: liquidNode(blowdownTo), kind: 'blowdown', flow: expr().addExpression(steam, point.blowdownPerKg), h: point.drumWaterH, p: point.pressure });
