@@ -101,6 +101,12 @@ export function createPowerSeries(
  * possibly up to three more powers beyond each end.
  */
 export function fillPowers(base: number, min: number, max: number, zero: number, out: Float64Array): void {
+  fillUp(base, max, zero, out);
+  if (min < 0) fillDown(1 / base, -min, zero, out);
+}
+
+/** out[zero + k] = base^k for 0 <= k <= max (and up to three more). */
+function fillUp(base: number, max: number, zero: number, out: Float64Array): void {
   const base2 = base * base;
   const base3 = base2 * base;
   const base4 = base2 * base2;
@@ -112,38 +118,39 @@ export function fillPowers(base: number, min: number, max: number, zero: number,
   let p1 = base4 * base;
   let p2 = base4 * base2;
   let p3 = base4 * base3;
-  for (let k = 4; k <= max; k += 4) {
-    out[zero + k] = p0;
-    out[zero + k + 1] = p1;
-    out[zero + k + 2] = p2;
-    out[zero + k + 3] = p3;
+  for (let k = zero + 4; k <= zero + max; k += 4) {
+    out[k] = p0;
+    out[k + 1] = p1;
+    out[k + 2] = p2;
+    out[k + 3] = p3;
     p0 *= base4;
     p1 *= base4;
     p2 *= base4;
     p3 *= base4;
   }
-  if (min < 0) {
-    const inverse = 1 / base;
-    const inverse2 = inverse * inverse;
-    const inverse3 = inverse2 * inverse;
-    const inverse4 = inverse2 * inverse2;
-    out[zero - 1] = inverse;
-    out[zero - 2] = inverse2;
-    out[zero - 3] = inverse3;
-    let q0 = inverse4;
-    let q1 = inverse4 * inverse;
-    let q2 = inverse4 * inverse2;
-    let q3 = inverse4 * inverse3;
-    for (let k = 4; k <= -min; k += 4) {
-      out[zero - k] = q0;
-      out[zero - k - 1] = q1;
-      out[zero - k - 2] = q2;
-      out[zero - k - 3] = q3;
-      q0 *= inverse4;
-      q1 *= inverse4;
-      q2 *= inverse4;
-      q3 *= inverse4;
-    }
+}
+
+/** out[zero - k] = inverse^k for 1 <= k <= depth (and up to three more). */
+function fillDown(inverse: number, depth: number, zero: number, out: Float64Array): void {
+  const inverse2 = inverse * inverse;
+  const inverse3 = inverse2 * inverse;
+  const inverse4 = inverse2 * inverse2;
+  out[zero - 1] = inverse;
+  out[zero - 2] = inverse2;
+  out[zero - 3] = inverse3;
+  let q0 = inverse4;
+  let q1 = inverse4 * inverse;
+  let q2 = inverse4 * inverse2;
+  let q3 = inverse4 * inverse3;
+  for (let k = zero - 4; k >= zero - depth; k -= 4) {
+    out[k] = q0;
+    out[k - 1] = q1;
+    out[k - 2] = q2;
+    out[k - 3] = q3;
+    q0 *= inverse4;
+    q1 *= inverse4;
+    q2 *= inverse4;
+    q3 *= inverse4;
   }
 }
 
