@@ -12,7 +12,7 @@ import {
 } from '../src/properties/index.js';
 
 const INPUTS = 1_000_000;
-const ROUNDS = 7;
+const ROUNDS = 9;
 
 /** Small deterministic generator (mulberry32), so every run sees the same inputs. */
 function random(seed: number): () => number {
@@ -68,7 +68,7 @@ interface Case {
 let sink = 0;
 
 interface Rates {
-  /** Evaluations per second of CPU time: the per-core figure, even on a busy machine. */
+  /** Evaluations per second of this process's CPU time: less disturbed by other processes than wall-clock time. */
   cpu: number;
   /** Evaluations per second of wall-clock time. */
   wall: number;
@@ -79,19 +79,26 @@ function median(values: number[]): number {
   return sorted[Math.floor(sorted.length / 2)];
 }
 
-function measure({ pass, inputs: { first, second } }: Case): Rates {
-  sink += pass(first, second); // warm-up: lets the JIT settle before timing
-  const cpu: number[] = [];
-  const wall: number[] = [];
+/**
+ * Warms every case up, then times them in interleaved rounds (each round runs
+ * every case once), so a change in machine load during the run falls on all
+ * of them alike; the median round of each is reported.
+ */
+function measureAll(cases: Case[]): Rates[] {
+  for (const { pass, inputs } of cases) sink += pass(inputs.first, inputs.second);
+  const cpu: number[][] = cases.map(() => []);
+  const wall: number[][] = cases.map(() => []);
   for (let round = 0; round < ROUNDS; round++) {
-    const startWall = process.hrtime.bigint();
-    const startCpu = process.cpuUsage();
-    sink += pass(first, second);
-    const used = process.cpuUsage(startCpu);
-    wall.push(INPUTS / (Number(process.hrtime.bigint() - startWall) / 1e9));
-    cpu.push(INPUTS / ((used.user + used.system) / 1e6));
+    cases.forEach(({ pass, inputs }, index) => {
+      const startWall = process.hrtime.bigint();
+      const startCpu = process.cpuUsage();
+      sink += pass(inputs.first, inputs.second);
+      const used = process.cpuUsage(startCpu);
+      wall[index].push(INPUTS / (Number(process.hrtime.bigint() - startWall) / 1e9));
+      cpu[index].push(INPUTS / ((used.user + used.system) / 1e6));
+    });
   }
-  return { cpu: median(cpu), wall: median(wall) };
+  return cases.map((_, index) => ({ cpu: median(cpu[index]), wall: median(wall[index]) }));
 }
 
 function main(): void {
@@ -149,12 +156,13 @@ function main(): void {
 
   const only = process.argv.indexOf('--only');
   const chosen = only >= 0 ? cases.filter((item) => item.name === process.argv[only + 1]) : cases;
-  const results = chosen.map((item) => ({ name: item.name, rates: measure(item) }));
+  const rates = measureAll(chosen);
+  const results = chosen.map((item, index) => ({ name: item.name, rates: rates[index] }));
   if (json) {
     for (const { name, rates } of results) console.log(JSON.stringify({ name, evals_per_s: Number(rates.cpu.toPrecision(3)) }));
   } else {
     console.log(`IAPWS-IF97 hot paths: ${INPUTS.toLocaleString('en-US')} inputs, median of ${ROUNDS} rounds, one thread`);
-    console.log('Rates are per second of CPU time (the per-core figure); wall-clock rates are lower on a busy machine.');
+    console.log('Rates are per second of CPU time; on a busy machine wall-clock rates are lower, and both vary from run to run.');
     console.log('');
     console.log(`${'function'.padEnd(14)}${'evals/s (cpu)'.padStart(16)}${'ns/eval'.padStart(10)}${'evals/s (wall)'.padStart(17)}`);
     for (const { name, rates } of results) {
