@@ -94,6 +94,7 @@ const idealScratch = emptyDerivatives();
 const residualScratch = emptyDerivatives();
 const idealSlopeScratch = emptyValueAndSlope();
 const residualSlopeScratch = emptyValueAndSlope();
+const scratchGibbs = emptyReducedGibbs();
 
 /** Reduced Gibbs function of region 2 (ideal + residual) and its derivatives. */
 export function gibbsRegion2(p: number, T: number, out: ReducedGibbs = emptyReducedGibbs()): ReducedGibbs {
@@ -122,8 +123,6 @@ export function enthalpyRegion2(p: number, T: number): number {
   const gammaTau = seriesValue(idealSlope, 1, tau) + seriesValue(residualSlopeOnly, p / REDUCING_PRESSURE, tau - 0.5);
   return GAS_CONSTANT * REDUCING_TEMPERATURE * gammaTau;
 }
-
-const scratchGibbs = emptyReducedGibbs();
 
 /** Specific entropy in region 2, kJ/(kg K). */
 export function entropyRegion2(p: number, T: number): number {
