@@ -24,8 +24,76 @@ export interface CaseFile {
   machines?: MachineEntry[];
   objective?: 'minimum_cost' | 'minimum_fuel' | 'maximum_power' | 'minimum_co2';
   solver?: SolverEntry;
-  scenarios?: unknown[];
-  projects?: unknown[];
+  scenarios?: ScenarioEntry[];
+  projects?: ProjectEntry[];
+  sweeps?: SweepEntry[];
+}
+
+/** Changes to one listed item, matched by id; its other keys are checked after merging. */
+export interface ChangedItemEntry {
+  id: string;
+  [key: string]: unknown;
+}
+
+export interface ChangesEntry {
+  fuels?: ChangedItemEntry[];
+  headers?: ChangedItemEntry[];
+  boilers?: ChangedItemEntry[];
+  heat_recovery_boilers?: ChangedItemEntry[];
+  steam_imports?: ChangedItemEntry[];
+  turbines?: ChangedItemEntry[];
+  letdowns?: ChangedItemEntry[];
+  users?: ChangedItemEntry[];
+  flash_tanks?: ChangedItemEntry[];
+  machines?: ChangedItemEntry[];
+  site?: Record<string, unknown>;
+  power?: Record<string, unknown>;
+  deaerator?: Record<string, unknown>;
+  solver?: Record<string, unknown>;
+  objective?: CaseFile['objective'];
+  disable?: string[];
+  add?: AddEntry;
+}
+
+export interface AddEntry {
+  fuels?: FuelEntry[];
+  headers?: HeaderEntry[];
+  boilers?: BoilerEntry[];
+  heat_recovery_boilers?: HeatRecoveryBoilerEntry[];
+  steam_imports?: SteamImportEntry[];
+  turbines?: TurbineEntry[];
+  letdowns?: LetdownEntry[];
+  users?: UserEntry[];
+  flash_tanks?: FlashTankEntry[];
+  machines?: MachineEntry[];
+}
+
+export interface ScenarioEntry {
+  id: string;
+  name?: string;
+  hours: number;
+  base?: string;
+  changes?: ChangesEntry;
+}
+
+export interface ProjectEntry {
+  id: string;
+  name?: string;
+  capital_cost: string;
+  life: number | string;
+  discount_rate: QuantityText;
+  fixed_om?: string;
+  changes: ChangesEntry;
+}
+
+export interface SweepEntry {
+  id: string;
+  name?: string;
+  scenario?: string;
+  target: string;
+  from: string;
+  to: string;
+  steps: number;
 }
 
 export interface SiteEntry {

@@ -3,75 +3,19 @@
 import { readFile } from 'node:fs/promises';
 import type { Issue } from './issue.js';
 import { sortIssues } from './issue.js';
-import { checkSources, checkVenting, linkDrives, linkFlashTanks } from './plantChecks.js';
 import type { Plant } from './plantTypes.js';
-import { ResolveContext, type IdKind } from './resolveContext.js';
-import { resolveHeaders } from './resolveHeaders.js';
-import { resolveDeaerator, resolveFlashTanks, resolveLetdowns, resolveMachines, resolveUsers } from './resolveNetwork.js';
-import { resolveFuels, resolveObjective, resolvePower, resolveSite, resolveSolver } from './resolveSite.js';
-import { resolveBoilers, resolveHeatRecoveryBoilers, resolveSteamImports } from './resolveSupply.js';
-import { resolveTurbines } from './resolveTurbines.js';
+import { ResolveContext } from './resolveContext.js';
+import { resolvePlant } from './resolvePlant.js';
+import { resolveVariants } from './resolveVariants.js';
+import type { CaseVariants } from './variantTypes.js';
 import { validateAgainstSchema } from './validateSchema.js';
 import { parseYaml } from './yamlSource.js';
 
-export type LoadResult = { ok: true; plant: Plant; warnings: Issue[] } | { ok: false; issues: Issue[] };
-
-const ID_LISTS: [string, IdKind][] = [
-  ['fuels', 'fuel'], ['headers', 'header'], ['boilers', 'boiler'], ['heat_recovery_boilers', 'heatRecoveryBoiler'],
-  ['steam_imports', 'steamImport'], ['turbines', 'turbine'], ['letdowns', 'letdown'], ['users', 'user'],
-  ['flash_tanks', 'flashTank'], ['machines', 'machine'],
-];
-
-/** Words with a fixed meaning in references; a unit may not take one as its id. */
-const RESERVED_IDS = ['deaerator', 'drain', 'atmosphere', 'generator', 'none', 'saturated'];
-
-function declareIds(context: ResolveContext): void {
-  const lists: [(string | number)[], IdKind][] = [...ID_LISTS.map(([key, kind]) => [[key], kind] as [(string | number)[], IdKind]), [['deaerator', 'feedwater_pumps'], 'feedwaterPump']];
-  for (const [listPath, kind] of lists) {
-    for (const { item, path } of context.entries(listPath)) {
-      if (typeof item.id === 'string' && RESERVED_IDS.includes(item.id)) {
-        context.error('reserved-id', [...path, 'id'], `"${item.id}" is a reserved word in references (${RESERVED_IDS.join(', ')}); choose another id`);
-        continue;
-      }
-      context.declareId(item.id, kind, path);
-    }
-  }
-}
-
-function resolvePlant(context: ResolveContext): Plant | null {
-  declareIds(context);
-  const site = resolveSite(context);
-  const fuels = resolveFuels(context);
-  const power = resolvePower(context);
-  const headers = resolveHeaders(context);
-  const byId = new Map(headers.map((header) => [header.id, header]));
-  const parts = {
-    name: String(context.raw(['name']) ?? ''),
-    description: typeof context.raw(['description']) === 'string' ? String(context.raw(['description'])) : '',
-    fuels,
-    headers,
-    boilers: resolveBoilers(context, byId),
-    heatRecoveryBoilers: resolveHeatRecoveryBoilers(context, byId),
-    steamImports: resolveSteamImports(context, byId),
-    turbines: resolveTurbines(context, byId),
-    letdowns: resolveLetdowns(context, byId),
-    users: resolveUsers(context, byId),
-    flashTanks: resolveFlashTanks(context, byId),
-    machines: resolveMachines(context),
-    objective: resolveObjective(context),
-    solver: resolveSolver(context),
-    scenarios: Array.isArray(context.raw(['scenarios'])) ? (context.raw(['scenarios']) as unknown[]) : [],
-    projects: Array.isArray(context.raw(['projects'])) ? (context.raw(['projects']) as unknown[]) : [],
-  };
-  const deaerator = resolveDeaerator(context, byId);
-  if (!site || !power || !deaerator) return null;
-  const plant = { ...parts, site, power, deaerator };
-  linkDrives(context, plant);
-  linkFlashTanks(context, plant);
-  checkSources(context, plant);
-  checkVenting(context, plant);
-  return { ...plant, defaults: context.defaults };
-}
+/**
+ * `variants` holds every scenario, project and sweep resolved to its own
+ * plant (a case without scenarios has one, "base", of 8760 h).
+ */
+export type LoadResult = { ok: true; plant: Plant; warnings: Issue[]; variants: CaseVariants } | { ok: false; issues: Issue[] };
 
 /** Loads a case from its text; `fileName` only labels issues. Never throws for bad input. */
 export function loadCaseText(text: string, fileName: string): LoadResult {
@@ -96,9 +40,14 @@ export function loadCaseText(text: string, fileName: string): LoadResult {
       context.error('internal', [], `steamwright could not finish checking this file (internal error: ${detail}); please report it with the file`);
     }
   }
-  const issues = sortIssues([...schemaIssues, ...context.issues]);
-  if (!plant || issues.some((issue) => issue.severity === 'error')) return { ok: false, issues };
-  return { ok: true, plant, warnings: issues };
+  const baseIssues = sortIssues([...schemaIssues, ...context.issues]);
+  if (!plant || baseIssues.some((issue) => issue.severity === 'error')) return { ok: false, issues: baseIssues };
+  // Scenarios, projects and sweeps are resolved only on a sound base, so that
+  // every issue they raise is one their own changes caused.
+  const variants = resolveVariants(source, plant, context);
+  const issues = sortIssues([...baseIssues, ...variants.issues]);
+  if (issues.some((issue) => issue.severity === 'error')) return { ok: false, issues };
+  return { ok: true, plant: { ...plant, scenarios: variants.definitions.scenarios, projects: variants.definitions.projects }, warnings: issues, variants: variants.variants };
 }
 
 /** Reads and loads a case file; an unreadable file is one issue, not an exception. */

@@ -336,6 +336,8 @@ export interface SolverOptions {
   enthalpyTolerance: number;
 }
 
+import type { ProjectDefinition, ScenarioDefinition } from './variantTypes.js';
+
 export interface Plant {
   /** plant name from the case */
   name: string;
@@ -356,10 +358,10 @@ export interface Plant {
   machines: DrivenMachine[];
   objective: Objective;
   solver: SolverOptions;
-  /** left as written for the scenarios layer */
-  scenarios: unknown[];
-  /** left as written for the scenarios layer */
-  projects: unknown[];
+  /** the case's scenarios as declared (each resolved plant is in LoadResult.variants); [] on a variant */
+  scenarios: ScenarioDefinition[];
+  /** the case's projects as declared; [] on a variant */
+  projects: ProjectDefinition[];
   /** every default that changes physics or cost, for `check --verbose` */
   defaults: DefaultApplied[];
 }

@@ -27,6 +27,11 @@ export class ResolveContext {
 
   constructor(readonly source: YamlSource) {}
 
+  /** Whether the schema already reported the value at this path (paths of merged data map to the file). */
+  flagged(path: CasePath): boolean {
+    return this.schemaFlagged.has(displayPath(this.source.locatePath ? this.source.locatePath(path) : path));
+  }
+
   get data(): unknown {
     return this.source.data;
   }
@@ -72,7 +77,7 @@ export class ResolveContext {
   /** A quantity in SI; undefined when absent or wrong (wrong is reported here, absent by the schema). */
   quantity(path: CasePath, kind: QuantityKind): number | undefined {
     const value = this.raw(path);
-    if (typeof value !== 'string' || this.schemaFlagged.has(displayPath(path))) return undefined;
+    if (typeof value !== 'string' || this.flagged(path)) return undefined;
     const parsed = parseQuantity(value, kind, { atmosphericPressure_MPa: this.atmosphericPressure });
     if (!parsed.ok) {
       this.error('bad-quantity', path, parsed.message);
@@ -158,7 +163,7 @@ export class ResolveContext {
    */
   reference(path: CasePath, kinds: IdKind[], words: string[] = []): string | undefined {
     const value = this.raw(path);
-    if (typeof value !== 'string' || this.schemaFlagged.has(displayPath(path))) return undefined;
+    if (typeof value !== 'string' || this.flagged(path)) return undefined;
     if (words.includes(value)) return value;
     const known = this.ids.get(value);
     const wanted = kinds.map((kind) => ID_KIND_WORDS[kind]).join(' or ');

@@ -16,6 +16,8 @@ export interface YamlSource {
   lineCounter: LineCounter;
   /** the plain data, aliases expanded */
   data: unknown;
+  /** for a scenario's merged data: where in the file a path's value was written */
+  locatePath?: (path: CasePath) => CasePath;
 }
 
 export type YamlResult = { ok: true; source: YamlSource } | { ok: false; issues: Issue[] };
@@ -134,7 +136,7 @@ function findNode(source: YamlSource, path: CasePath, pointAtKey: boolean): Node
 
 /** Line and column (1-based) of the node at a path; the key itself when pointAtKey. */
 export function locate(source: YamlSource, path: CasePath, pointAtKey = false): { line: number; column: number } {
-  const node = findNode(source, path, pointAtKey);
+  const node = findNode(source, source.locatePath ? source.locatePath(path) : path, pointAtKey);
   if (!node?.range) return { line: 1, column: 1 };
   const { line, col } = source.lineCounter.linePos(node.range[0]);
   return { line, column: col };
@@ -142,5 +144,5 @@ export function locate(source: YamlSource, path: CasePath, pointAtKey = false): 
 
 export function makeIssue(source: YamlSource, severity: Issue['severity'], code: string, path: CasePath, message: string, pointAtKey = false): Issue {
   const { line, column } = locate(source, path, pointAtKey);
-  return { severity, code, path: displayPath(path), line, column, message };
+  return { severity, code, path: displayPath(source.locatePath ? source.locatePath(path) : path), line, column, message };
 }
