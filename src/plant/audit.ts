@@ -3,6 +3,8 @@
 import { ATMOSPHERE, DRAIN, MAKEUP, PROCESS } from './network.js';
 import type { Pass } from './buildPass.js';
 import type { PassSolution } from './passSolution.js';
+import type { UnitReport } from './contribution.js';
+import { siteBalance, type SiteEnergyBalance } from './siteBalance.js';
 
 export interface BalanceResidual {
   /** node or unit id */
@@ -23,13 +25,15 @@ export interface Audit {
   maxEnergyResidual: number;
   worstRelative: number;
   worstDescription: string;
+  /** fuel and energy in against useful heat, work and losses out */
+  site: SiteEnergyBalance;
 }
 
 const TERMINALS = new Set([ATMOSPHERE, DRAIN, MAKEUP, PROCESS]);
 /** Units that neither do work nor exchange heat: their energy must close too. */
 const ADIABATIC_STREAMS = new Set(['letdown', 'spray']);
 
-export function auditPass(pass: Pass, solution: PassSolution): Audit {
+export function auditPass(pass: Pass, solution: PassSolution, reports: readonly UnitReport[]): Audit {
   const context = pass.context;
   const endpoints = new Set<string>();
   for (const stream of context.streams) {
@@ -90,5 +94,10 @@ export function auditPass(pass: Pass, solution: PassSolution): Audit {
       worstDescription = `${balance.id} energy residual ${balance.energy!.toPrecision(3)} kW (${energyRelative.toExponential(2)} of its throughput)`;
     }
   }
-  return { balances, maxMassResidual: maxMass, maxEnergyResidual: maxEnergy, worstRelative: worst, worstDescription };
+  const site = siteBalance(pass, solution, reports);
+  if (site.relative > worst) {
+    worst = site.relative;
+    worstDescription = `site energy balance residual ${site.residual_kW.toPrecision(3)} kW (${site.relative.toExponential(2)} of the energy in)`;
+  }
+  return { balances, maxMassResidual: maxMass, maxEnergyResidual: maxEnergy, worstRelative: worst, worstDescription, site };
 }

@@ -101,14 +101,16 @@ export class BuildContext {
     this.cost.set(component, ledger);
   }
 
-  /** Fuel fired, kW of the fuel's heating value; its cost and CO2 follow from the fuel. */
-  addFuel(fuelId: string, firedKW: LinearExpression): void {
+  /** Fuel fired, kW of the fuel's heating value; its cost and CO2 follow from the fuel. Returns its cost per hour. */
+  addFuel(fuelId: string, firedKW: LinearExpression): LinearExpression {
     const fuel = this.plant.fuels.find((candidate) => candidate.id === fuelId);
     if (!fuel) throw new Error(`unknown fuel "${fuelId}". The loader should have caught this reference.`);
     const ledger = this.fuel.get(fuelId) ?? expr();
     ledger.addExpression(firedKW);
     this.fuel.set(fuelId, ledger);
-    this.addCost('fuel', expr().addExpression(firedKW, GJ_PER_KWH * fuel.price));
+    const cost = expr().addExpression(firedKW, GJ_PER_KWH * fuel.price);
+    this.addCost('fuel', cost);
     this.co2.addExpression(firedKW, GJ_PER_KWH * fuel.co2);
+    return cost;
   }
 }

@@ -11,3 +11,4 @@ export { boilerFuel, blowdownFromCycles, blowdownFromFraction } from './physics/
 export { expandIsentropic, expandToEnthalpy, impliedEfficiency, theoreticalSteamRate, type StageExpansion } from './physics/turbineStage.js';
 export { willansPower } from './physics/willans.js';
 export { PlantPhysicsError } from './units/user.js';
+export type { SiteEnergyBalance } from './siteBalance.js';

@@ -88,6 +88,7 @@ export interface PlantResult {
     worst_relative: number;
     worst: string;
     balances: Audit['balances'];
+    site_energy_balance: Audit['site'];
   };
   passes: PassRecord[];
   marginal_power_value_per_kWh: number | null;
@@ -208,6 +209,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       worst_relative: audit.worstRelative,
       worst: audit.worstDescription,
       balances: audit.balances,
+      site_energy_balance: audit.site,
     },
     passes: outcome.passes,
     marginal_power_value_per_kWh: solution.shadowPrice('site.power'),

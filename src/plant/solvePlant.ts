@@ -66,7 +66,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       // last pass's points were close enough for balances to close.
       if (largestEnthalpy < tolerance && passNumber > 1) converged = true;
       if (converged) {
-        const audit = auditPass(pass, solution);
+        const audit = auditPass(pass, solution, contributions.map((unit) => unit.report(solution)));
         if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
           if (audit.worstRelative > AUDIT_TOLERANCE) {
             return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes };

@@ -65,11 +65,13 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   lines.push('', 'Sources');
   lines.push(
     table(
-      ['unit', 'steam', 'fuel', 'efficiency', 'limits'],
+      ['unit', 'steam', 'load', 'fuel', 'fuel cost', 'efficiency', 'limits'],
       sources.map((unit) => [
         unit.id,
         flow(Number(unit.values.steam_kg_s ?? 0)),
+        typeof unit.values.load === 'number' ? `${(unit.values.load * 100).toFixed(0)} %` : '-',
         unit.values.fuel_kW !== undefined ? fuelRate(Number(unit.values.fuel_kW)) : '-',
+        typeof unit.values.fuel_cost_per_h === 'number' ? `${money(unit.values.fuel_cost_per_h)}/h` : typeof unit.values.cost_per_h === 'number' ? `${money(unit.values.cost_per_h)}/h` : '-',
         typeof unit.values.efficiency === 'number' ? `${(unit.values.efficiency * 100).toFixed(1)} %` : '-',
         unit.binding.join(', ') || '-',
       ]),

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { readdirSync, readFileSync } from 'node:fs';
 import { jslpBackend } from '../../src/lp/index.js';
 import { plantResult, solvePlant, type PlantOutcome } from '../../src/plant/index.js';
-import { saturatedLiquid, saturatedVapour, statePT } from '../../src/properties/index.js';
+import { saturatedLiquid, saturatedVapour, saturationTemperature, statePT } from '../../src/properties/index.js';
 import { expectClose } from '../helpers/expectClose.js';
 import { loadPlant, smallCase } from './helpers/cases.js';
 
@@ -119,4 +119,133 @@ describe('solvePlant on the demo cases', () => {
       expectClose(second.result.objective!, highs.result.objective!, 1e-6, `${name} objective`);
     });
   }
+});
+
+describe('solvePlant: a flash tank in the plant', () => {
+  it('flashes 10.3 % of saturated 150 psig condensate at 30 psig (US DOE Steam Tip Sheet #12)', async () => {
+    // A 150 psig header feeds a user whose condensate (saturated at 150 psig) all goes to a
+    // 30 psig flash tank; the vapour joins the 30 psig header through its balance.
+    // Condensate 1 mK below saturation at 150 psig (164.696 psia): saturated for all purposes.
+    const condensateC = saturationTemperature((150 * 6.894757293168 + 101.325) / 1000) - 273.15 - 0.001;
+    const text = smallCase({ returnPercent: 100 })
+      .replace('pressure: 10 barg', 'pressure: 150 psig')
+      .replace(/condensate: \{ return: 100 %, temperature: 90 degC, to: deaerator \}/, `condensate: { return: 100 %, temperature: ${condensateC.toFixed(4)} degC, to: flash }`)
+      .replace('deaerator:\n', `flash_tanks:
+  - { id: flash, pressure: 30 psig, vapour_to: low, liquid_to: deaerator }
+deaerator:
+`)
+      .replace('headers:\n', 'headers:\n  - { id: low, pressure: 30 psig, state: floating, venting: allowed }\n');
+    const outcome = await solved(text);
+    const tank = unit(outcome, 'flash');
+    const fraction = Number(tank.values.vapour_kg_s) / Number(tank.values.inflow_kg_s);
+    // The tip sheet prints one decimal from older steam tables: +-0.1 point.
+    expect(Math.abs(fraction * 100 - 10.3)).toBeLessThan(0.1);
+    expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+  });
+});
+
+describe('solvePlant: data that contradict each other', () => {
+  it('a turbine exhaust enthalpy above its inlet names the turbine and the numbers', async () => {
+    const text = smallCase({ letdown: true }).replace(
+      'users:\n',
+      `turbines:
+  - id: st1
+    inlet: main
+    stages:
+      - { to: low, exhaust_enthalpy: 3400 kJ/kg, section_flow: { max: 20 t/h } }
+    mechanical_efficiency: 98 %
+    generator_efficiency: 96 %
+    power: { max: 2 MW }
+    can_switch_off: true
+    drives: generator
+users:
+`,
+    );
+    const outcome = await solvePlant(loadPlant(text));
+    expect(outcome.ok).toBe(false);
+    if (outcome.ok) return;
+    expect(outcome.reason).toBe('physics');
+    expect(outcome.message).toMatch(/^turbine st1 stage 1: exhaust enthalpy 3400\.0 kJ\/kg is not below its inlet's 32\d\d\.\d kJ\/kg/);
+  });
+});
+
+describe('solvePlant: generated two-header plants', () => {
+  const plantText = (p: { hpUser: number; lpUser: number; returned: number; efficiency: number; turbine: boolean; venting: boolean; hpFloating: boolean }) => `format_version: 1
+name: Generated plant
+site:
+  atmospheric_pressure: 101.325 kPa
+  ambient_temperature: 15 degC
+  makeup_water: { temperature: 15 degC, cost: 0.5 USD/t }
+  currency: USD
+  units: si
+fuels:
+  - { id: gas, price: 8 USD/GJ, basis: HHV, co2: 50 kg/GJ }
+power:
+  site_demand: 500 kW
+  import: { price: 90 USD/MWh, max: 10 MW }
+  export: { price: 30 USD/MWh, max: 5 MW }
+headers:
+  - id: hp
+    pressure: 40 barg
+    state: ${p.hpFloating ? 'floating' : 'controlled\n    temperature: 400 degC'}
+    venting: forbidden
+    heat_loss: 50 kW
+  - { id: lp, pressure: 4 barg, state: floating, venting: ${p.venting ? 'allowed' : 'forbidden'}, heat_loss: 20 kW }
+boilers:
+  - id: b1
+    header: hp
+    fuels: [gas]
+    steam: { min: 5 t/h, max: ${Math.ceil((p.hpUser + p.lpUser) * 2 + 10)} t/h }
+    outlet_temperature: 420 degC
+    efficiency: [{ load: 30 %, efficiency: 80 % }, { load: 100 %, efficiency: 85 % }]
+    blowdown: 2 %
+    can_switch_off: false
+letdowns:
+  - id: prv
+    from: hp
+    to: lp
+    capacity: 200 t/h
+    desuperheater: { target_temperature: 170 degC, spray_water: feedwater }
+${p.turbine ? `turbines:
+  - id: bpt
+    inlet: hp
+    stages:
+      - { to: lp, isentropic_efficiency: ${(p.efficiency * 100).toFixed(1)} %, section_flow: { max: 30 t/h } }
+    mechanical_efficiency: 98 %
+    generator_efficiency: 96 %
+    power: { max: 5 MW }
+    can_switch_off: true
+    drives: generator
+` : ''}users:
+  - { id: hp_user, header: hp, steam: ${p.hpUser} t/h, condensate: { return: ${p.returned} %, temperature: 180 degC, to: deaerator } }
+  - { id: lp_user, header: lp, heat: ${(p.lpUser * 0.6).toFixed(2)} MW, condensate: { return: ${p.returned} %, temperature: 120 degC, to: deaerator } }
+deaerator:
+  pressure: 0.2 barg
+  heating_steam: lp
+  vent: 0.1 %
+objective: minimum_cost
+`;
+
+  it('property: every generated plant converges and closes its audit, site energy balance included', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.record({
+          hpUser: fc.integer({ min: 1, max: 40 }),
+          lpUser: fc.integer({ min: 1, max: 40 }),
+          returned: fc.integer({ min: 0, max: 95 }),
+          efficiency: fc.double({ min: 0.5, max: 0.85, noNaN: true }),
+          turbine: fc.boolean(),
+          venting: fc.boolean(),
+          hpFloating: fc.boolean(),
+        }),
+        async (parameters) => {
+          const outcome = await solvePlant(loadPlant(plantText(parameters)));
+          if (!outcome.ok) throw new Error(`${JSON.stringify(parameters)}: ${outcome.message}`);
+          expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+          expect(outcome.audit.site.relative).toBeLessThan(1e-6);
+        },
+      ),
+      { numRuns: 30 },
+    );
+  });
 });

@@ -12,6 +12,7 @@ export class BoilerContribution implements UnitContribution {
   readonly kind = 'boiler';
   private steam!: LinearExpression;
   private fuel!: LinearExpression;
+  private fuelCost: LinearExpression = expr();
   private on: Variable | null = null;
   private fuelShares: { fuel: string; variable: Variable }[] = [];
   private heatPerKg = 0;
@@ -72,15 +73,16 @@ export class BoilerContribution implements UnitContribution {
     this.fuel = fuel;
     declareSteamRaising(context, id, boiler.header, steam, boiler.outlet, probe, boiler.blowdownTo);
 
+    this.fuelCost = expr();
     if (boiler.fuels.length === 1) {
-      context.addFuel(boiler.fuels[0], fuel);
+      this.fuelCost.addExpression(context.addFuel(boiler.fuels[0], fuel));
       this.fuelShares = [];
     } else {
       const split = expr();
       this.fuelShares = boiler.fuels.map((fuelId) => {
         const variable = context.variable(`${id}.fuel.${fuelId}`);
         split.add(variable, 1);
-        context.addFuel(fuelId, term(variable));
+        this.fuelCost.addExpression(context.addFuel(fuelId, term(variable)));
         return { fuel: fuelId, variable };
       });
       context.row(id, `${id}.fuel`, split.addExpression(fuel, -1), '=', 0);
@@ -106,6 +108,7 @@ export class BoilerContribution implements UnitContribution {
         steam_kg_s: steam,
         load: steam / this.boiler.steam.max,
         fuel_kW: fuel,
+        fuel_cost_per_h: solution.evaluate(this.fuelCost),
         heat_absorbed_kW: steam * this.heatPerKg,
         efficiency: fuel > 0 ? (steam * this.heatPerKg) / fuel : null,
         convex_fuel_curve: this.convex,

@@ -13,6 +13,7 @@ export class DeaeratorContribution implements UnitContribution {
   readonly id = 'deaerator';
   private steam!: Variable;
   private makeup!: Variable;
+  private excessVent!: Variable;
   private feedwater: LinearExpression = expr();
   private motors: { id: string; variable: Variable; efficiency: number }[] = [];
   private pumpShaft: LinearExpression = expr();
@@ -25,6 +26,9 @@ export class DeaeratorContribution implements UnitContribution {
     context.node({ id: 'deaerator', energyRow: true, heatLoss: 0 });
     this.steam = context.variable('deaerator.steam');
     this.makeup = context.variable('deaerator.makeup');
+    // Returns hotter than the deaerator's saturation flash inside it: what the
+    // feedwater cannot absorb leaves through the vent, above its design share.
+    this.excessVent = context.variable('deaerator.excess_vent');
     context.stream({ from: deaerator.heatingSteam, to: 'deaerator', kind: 'heatingSteam', flow: term(this.steam), h: context.h(deaerator.heatingSteam), p: context.pressure(deaerator.heatingSteam) });
     context.stream({ from: MAKEUP, to: 'deaerator', kind: 'makeup', flow: term(this.makeup), h: plant.site.makeupWater.h, p: plant.site.atmosphericPressure });
   }
@@ -34,7 +38,8 @@ export class DeaeratorContribution implements UnitContribution {
     // Vent: a fixed share of the feedwater leaving, as saturated vapour.
     this.feedwater = expr();
     for (const stream of context.streamsOutOf('deaerator')) this.feedwater.addExpression(stream.flow);
-    context.stream({ from: 'deaerator', to: ATMOSPHERE, kind: 'vent', flow: expr().addExpression(this.feedwater, deaerator.ventFraction), h: saturatedVapour(deaerator.pressure).h, p: deaerator.pressure });
+    const vent = expr().addExpression(this.feedwater, deaerator.ventFraction).add(this.excessVent, 1);
+    context.stream({ from: 'deaerator', to: ATMOSPHERE, kind: 'vent', flow: vent, h: saturatedVapour(deaerator.pressure).h, p: deaerator.pressure });
 
     // Feedwater pumps: motors and turbine drives share the pumping power.
     this.pumpShaft = context.pumpShaft.clone();
@@ -60,6 +65,7 @@ export class DeaeratorContribution implements UnitContribution {
 
   report(solution: PassSolution): UnitReport {
     const feedwater = solution.evaluate(this.feedwater);
+    const excess = solution.value(this.excessVent);
     return {
       id: this.id,
       kind: this.kind,
@@ -67,11 +73,12 @@ export class DeaeratorContribution implements UnitContribution {
         heating_steam_kg_s: solution.value(this.steam),
         makeup_kg_s: solution.value(this.makeup),
         feedwater_kg_s: feedwater,
-        vent_kg_s: feedwater * this.deaerator.ventFraction,
+        vent_kg_s: feedwater * this.deaerator.ventFraction + excess,
+        excess_vent_kg_s: excess,
         pump_shaft_kW: solution.evaluate(this.pumpShaft),
         pump_motor_kW: this.motors.reduce((total, motor) => total + solution.value(motor.variable) / motor.efficiency, 0),
       },
-      binding: [],
+      binding: excess > 1e-7 ? ['venting above its design share: the returns bring more heat than the feedwater can take'] : [],
     };
   }
 }

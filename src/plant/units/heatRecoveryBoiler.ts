@@ -13,6 +13,7 @@ export class HeatRecoveryBoilerContribution implements UnitContribution {
   private fired: Variable | null = null;
   private steam!: LinearExpression;
   private heatPerKg = 0;
+  private fuelCost: LinearExpression = expr();
 
   constructor(private readonly boiler: HeatRecoveryBoiler) {}
 
@@ -30,9 +31,10 @@ export class HeatRecoveryBoilerContribution implements UnitContribution {
     if (firing && firing.maxSteam > 0) {
       this.fired = context.variable(`${boiler.id}.fired`, { upper: firing.maxSteam });
       this.steam.add(this.fired, 1);
-      context.addFuel(firing.fuel, term(this.fired, point.heatPerKg / firing.efficiency));
+      this.fuelCost = context.addFuel(firing.fuel, term(this.fired, point.heatPerKg / firing.efficiency));
     } else {
       this.fired = null;
+      this.fuelCost = expr();
     }
     declareSteamRaising(context, boiler.id, boiler.header, this.steam, boiler.outlet, point, boiler.blowdownTo);
   }
@@ -54,7 +56,9 @@ export class HeatRecoveryBoilerContribution implements UnitContribution {
         unfired_steam_kg_s: unfired,
         fired_steam_kg_s: fired,
         waste_heat_kW: unfired * this.heatPerKg,
+        fired_heat_kW: fired * this.heatPerKg,
         fuel_kW: firing ? (fired * this.heatPerKg) / firing.efficiency : 0,
+        fuel_cost_per_h: solution.evaluate(this.fuelCost),
       },
       binding,
     };

@@ -142,6 +142,8 @@ export class TurbineContribution implements UnitContribution {
       if (stage.exhaust.kind === 'condenser') condenserKW += outflow * (this.exhaustH[k] - saturatedLiquid(stage.exhaust.pressure).h);
     });
     values.condenser_kW = condenserKW;
+    // Work taken from the steam, before mechanical and generator losses.
+    values.steam_work_kW = flows.reduce((total, flow, k) => total + flow * this.drops[k], 0);
     values.steam_rate_kg_kWh = power > 0 ? ((flows[0] ?? 0) * 3600) / power : null;
     const binding: string[] = [];
     const near = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-6 * Math.max(1, Math.abs(b));
