@@ -2,8 +2,9 @@
 import type { CommandModule } from 'yargs';
 import { checkCommand } from './check.js';
 import { initCommand } from './init.js';
+import { reportCommand } from './report.js';
 import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, checkCommand, initCommand, stateCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, reportCommand, checkCommand, initCommand, stateCommand];

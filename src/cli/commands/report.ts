@@ -1,0 +1,90 @@
+// `steamwright report CASE`: the balance diagram and a self-contained HTML
+// report, plus the same tables as Markdown or CSV.
+import { basename, extname } from 'node:path';
+import type { Argv, CommandModule } from 'yargs';
+import { getBackend, type BackendName } from '../../lp/index.js';
+import { formatIssue, loadCase } from '../../model/index.js';
+import { plantResult, solvePlant } from '../../plant/index.js';
+import { balanceDiagram, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, writeFileAtomic } from '../../report/index.js';
+import { CliError, EXIT_PROBLEMS } from '../errors.js';
+import { OBJECTIVE_WORDS } from './solve.js';
+
+interface ReportArgs {
+  case: string;
+  out?: string;
+  svg?: string;
+  md?: string;
+  csv?: string;
+  objective?: string;
+  solver: BackendName;
+}
+
+/** "cases/mill.yaml" -> "mill.report.html" (in the current directory). */
+export function defaultReportName(casePath: string): string {
+  return `${basename(casePath, extname(casePath))}.report.html`;
+}
+
+const toStdout = (target: string | undefined): boolean => target === '' || target === '-';
+
+export const reportCommand: CommandModule<object, ReportArgs> = {
+  command: 'report <case>',
+  describe: 'Write the steam balance diagram and a self-contained HTML report of a plant case',
+  builder: (yargs: Argv<object>) =>
+    yargs
+      .positional('case', { type: 'string', demandOption: true, describe: 'the plant case file (YAML)' })
+      .option('out', { alias: 'o', type: 'string', describe: 'the HTML file to write (default: CASE-NAME.report.html in the current directory)' })
+      .option('svg', { type: 'string', describe: 'also write the balance diagram alone as SVG to FILE' })
+      .option('md', { type: 'string', describe: 'write the tables as Markdown to FILE (no FILE or "-": standard output)' })
+      .option('csv', { type: 'string', describe: 'write the tables as CSV to FILE (no FILE or "-": standard output)' })
+      .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
+      .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
+      .example('$0 report cases/mill.yaml', 'write mill.report.html here')
+      .example('$0 report cases/mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
+      .example('$0 report cases/mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
+  handler: async (args) => {
+    for (const option of ['out', 'svg'] as const) {
+      if (args[option] !== undefined && args[option].trim() === '') throw new CliError(`--${option} needs a file name`);
+    }
+    const loaded = await loadCase(args.case);
+    if (!loaded.ok) {
+      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
+      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
+      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; no report was written`, EXIT_PROBLEMS);
+    }
+    const plant = loaded.plant;
+    const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
+    const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
+    if (!outcome.ok) throw new CliError(`${args.case}: ${outcome.message}`, EXIT_PROBLEMS);
+    const result = plantResult(outcome);
+    const format = plantDisplayFormat(plant);
+
+    // Everything is rendered before anything is written.
+    const tables = reportTables(result, format);
+    const outputs: { path: string; text: string }[] = [];
+    const printed: string[] = [];
+    const wantsHtml = args.out !== undefined || (args.svg === undefined && args.md === undefined && args.csv === undefined);
+    if (wantsHtml) outputs.push({ path: args.out ?? defaultReportName(args.case), text: htmlReport(plant, result) });
+    if (args.svg !== undefined) outputs.push({ path: args.svg, text: `${balanceDiagram(result, format)}\n` });
+    if (args.md !== undefined) {
+      const text = tablesMarkdown(result.plant, tables);
+      if (toStdout(args.md)) printed.push(text);
+      else outputs.push({ path: args.md, text });
+    }
+    if (args.csv !== undefined) {
+      const text = tablesCsv(tables);
+      if (toStdout(args.csv)) printed.push(text);
+      else outputs.push({ path: args.csv, text });
+    }
+    for (const output of outputs) {
+      try {
+        await writeFileAtomic(output.path, output.text);
+      } catch (error) {
+        throw new CliError(`cannot write "${output.path}": ${(error as Error).message}`, EXIT_PROBLEMS);
+      }
+    }
+    for (const text of printed) process.stdout.write(text.endsWith('\n') ? text : `${text}\n`);
+    const notice = outputs.map((output) => `wrote ${output.path}\n`).join('');
+    if (printed.length > 0) process.stderr.write(notice);
+    else process.stdout.write(notice);
+  },
+};

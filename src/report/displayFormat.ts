@@ -1,0 +1,57 @@
+// How report figures are shown in the case's unit system: one set of
+// formatters for the diagram, the HTML, Markdown and CSV tables.
+import { formatQuantity, type UnitSystem } from '../units/index.js';
+
+/** 1 kW = 3412.1416 Btu/h (Btu, International Table). */
+const BTU_PER_H_PER_KW = 3412.1416;
+const KG_PER_LB = 0.45359237;
+
+export interface DisplayFormat {
+  system: UnitSystem;
+  currency: string;
+  /** "t" or "klb": the mass that prices and marginal values are quoted per */
+  perMass: string;
+  flow(kg_s: number): string;
+  power(kW: number): string;
+  /** fuel as a heat rate: MW in SI, MMBtu/h in US units */
+  fuelRate(kW: number): string;
+  pressure(MPa: number): string;
+  temperature(K: number): string;
+  enthalpy(kJ_kg: number): string;
+  money(amount: number): string;
+  /** a value per tonne shown per t (SI) or per klb (US); null as "n/a" */
+  valuePerMass(perT: number | null): string;
+  percent(fraction: number | null): string;
+}
+
+/** Values within solver round-off of zero show as zero. */
+export function clean(value: number): number {
+  return Math.abs(value) < 1e-7 ? 0 : value;
+}
+
+export function displayFormat(system: UnitSystem, currency: string, atmosphericPressure_MPa: number): DisplayFormat {
+  const atmosphere = { atmosphericPressure_MPa };
+  return {
+    system,
+    currency,
+    perMass: system === 'si' ? 't' : 'klb',
+    flow: (kg_s) => formatQuantity(clean(kg_s), 'massFlow', system),
+    power: (kW) => formatQuantity(clean(kW), 'power', system),
+    fuelRate: (kW) => (system === 'si' ? `${(clean(kW) / 1000).toFixed(2)} MW` : `${((clean(kW) * BTU_PER_H_PER_KW) / 1e6).toFixed(2)} MMBtu/h`),
+    pressure: (MPa) => formatQuantity(MPa, 'pressure', system, atmosphere),
+    temperature: (K) => formatQuantity(K, 'temperature', system),
+    enthalpy: (kJ_kg) => formatQuantity(kJ_kg, 'specificEnthalpy', system),
+    money: (amount) => `${clean(amount).toLocaleString('en-US', { maximumFractionDigits: 0 })} ${currency}`,
+    valuePerMass: (perT) => {
+      if (perT === null) return 'n/a';
+      const value = system === 'si' ? perT : perT * KG_PER_LB;
+      return `${value.toFixed(2)} ${currency}/${system === 'si' ? 't' : 'klb'}`;
+    },
+    percent: (fraction) => (fraction === null ? 'n/a' : `${(fraction * 100).toFixed(1)} %`),
+  };
+}
+
+/** A value per t converted to per klb in US units (for charts that need the number). */
+export function perMassValue(perT: number, system: UnitSystem): number {
+  return system === 'si' ? perT : perT * KG_PER_LB;
+}

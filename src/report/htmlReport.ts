@@ -1,0 +1,122 @@
+// The self-contained HTML report: diagram, tables, charts, audit,
+// assumptions and cautions in one file that fetches nothing. Every text from
+// the case goes through escapeMarkup.
+import type { Plant } from '../model/index.js';
+import type { PlantResult } from '../plant/index.js';
+import { barChartSvg } from './barChart.js';
+import { balanceDiagram } from './balanceDiagram.js';
+import { displayFormat, perMassValue, type DisplayFormat } from './displayFormat.js';
+import { escapeMarkup } from './escape.js';
+import { reportTables, type ReportTable } from './reportTables.js';
+import { reportAssumptions } from './assumptions.js';
+import { REPORT_SCRIPT, REPORT_STYLE } from './htmlAssets.js';
+import { SAFETY_CAUTION } from './safety.js';
+
+export interface ReportOptions {
+  /** e.g. the scenario shown; printed under the title */
+  subtitle?: string;
+  /** when the report was made (ISO text); left out for reproducible files */
+  generatedAt?: string;
+}
+
+/** The display format of a plant's own unit system, currency and atmosphere. */
+export function plantDisplayFormat(plant: Plant): DisplayFormat {
+  return displayFormat(plant.site.unitSystem, plant.site.currency, plant.site.atmosphericPressure);
+}
+
+export function htmlReport(plant: Plant, result: PlantResult, options: ReportOptions = {}): string {
+  const format = plantDisplayFormat(plant);
+  const tables = reportTables(result, format);
+  const e = escapeMarkup;
+  const body: string[] = [];
+  body.push(`<header><h1>${e(result.plant)}</h1>`);
+  if (options.subtitle) body.push(`<p class="subtitle">${e(options.subtitle)}</p>`);
+  if (plant.description) body.push(`<p class="description">${e(plant.description)}</p>`);
+  body.push(
+    `<p class="facts">${e(objectiveWords(result.objective))} balance · ${format.money(result.totals.cost_per_h)} per hour · ${e(format.fuelRate(result.totals.fuel_kW))} fuel · ${result.passes.length} passes (${e(result.backend)})${options.generatedAt ? ` · made ${e(options.generatedAt)}` : ''}</p>`,
+    '</header>',
+  );
+  body.push('<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a> <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>');
+  body.push(
+    '<section id="diagram"><h2>Steam balance</h2>',
+    '<p class="hint">Headers from the highest pressure at the top; sources feed them from above, users hang below, turbines and letdowns join them. Click a unit to find its row in the tables. <button type="button" id="fit-toggle">Actual size</button></p>',
+    `<div class="diagram-wrap fit">${balanceDiagram(result, format)}</div></section>`,
+  );
+  body.push('<section id="tables"><h2>Tables</h2>');
+  for (const table of tables.filter((candidate) => candidate.id !== 'audit')) body.push(tableHtml(table));
+  body.push('</section>');
+  body.push('<section id="charts"><h2>Charts</h2><div class="charts">', costChart(result, format), valueChart(result, format), '</div></section>');
+  const audit = result.audit;
+  body.push(
+    '<section id="audit"><h2>Audit</h2>',
+    `<p>Every balance recomputed from the final flows and states. Largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, largest energy residual ${audit.max_energy_residual_kW.toExponential(2)} kW; worst: ${e(audit.worst)}.</p>`,
+    tableHtml(tables.find((table) => table.id === 'audit') as ReportTable),
+    '</section>',
+  );
+  const assumptions = reportAssumptions(plant);
+  body.push('<section id="assumptions"><h2>Assumptions</h2><ul>', ...assumptions.general.map((line) => `<li>${e(line)}</li>`), '</ul>');
+  if (assumptions.defaults.length > 0) {
+    body.push('<h3>Defaults applied (keys the case left out)</h3>', tableHtml({ id: 'defaults', title: '', headings: ['where', 'value used', 'why'], rows: assumptions.defaults }));
+  } else {
+    body.push('<p>No defaults were applied: the case states every key that changes the physics or the cost.</p>');
+  }
+  body.push('</section>');
+  body.push(`<section id="safety"><h2>Safety</h2><p class="caution">${e(SAFETY_CAUTION.replace(/\n/g, ' '))}</p></section>`);
+
+  return [
+    '<!doctype html>',
+    '<html lang="en">',
+    '<head>',
+    '<meta charset="utf-8">',
+    // Nothing may be fetched: inline style and script only.
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; script-src 'unsafe-inline'; img-src data:">`,
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    `<title>${e(result.plant)}: steam balance report</title>`,
+    `<style>${REPORT_STYLE}</style>`,
+    '</head>',
+    '<body>',
+    ...body,
+    `<script>${REPORT_SCRIPT}</script>`,
+    '</body>',
+    '</html>',
+    '',
+  ].join('\n');
+}
+
+function tableHtml(table: ReportTable): string {
+  const e = escapeMarkup;
+  const parts: string[] = [];
+  if (table.title) parts.push(`<h3 id="table-${e(table.id)}">${e(table.title)}</h3>`);
+  if (table.rows.length === 0) return `${parts.join('')}<p class="none">none</p>`;
+  const numeric = table.headings.map((_, column) => column > 0 && table.rows.every((row) => /^[-+]?[\d.]/.test(row[column] ?? '') || row[column] === '-'));
+  parts.push(`<table class="data" data-table="${e(table.id)}"><thead><tr>${table.headings.map((heading) => `<th>${e(heading)}</th>`).join('')}</tr></thead><tbody>`);
+  table.rows.forEach((row, index) => {
+    const alarm = table.alarmRows?.includes(index) ? ' class="vent"' : '';
+    parts.push(`<tr data-id="${e(row[0] ?? '')}"${alarm}>${row.map((cell, column) => `<td${numeric[column] ? ' class="num"' : ''}>${e(cell)}</td>`).join('')}</tr>`);
+  });
+  parts.push('</tbody></table>');
+  return parts.join('');
+}
+
+function costChart(result: PlantResult, format: DisplayFormat): string {
+  const cost = result.totals.cost_by_component_per_h;
+  const bars = (['fuel', 'power', 'steam', 'water', 'carbon'] as const).map((key) => ({ label: key, value: cost[key], text: `${format.money(cost[key])}/h` }));
+  return barChartSvg('chart-cost', `Hourly cost by component (${format.currency} per hour)`, bars);
+}
+
+function valueChart(result: PlantResult, format: DisplayFormat): string {
+  const headers = [...result.headers].sort((a, b) => b.pressure_MPa - a.pressure_MPa);
+  const bars = headers.map((header) => ({
+    label: header.id,
+    value: header.marginal_value_per_t === null ? 0 : perMassValue(header.marginal_value_per_t, format.system),
+    text: format.valuePerMass(header.marginal_value_per_t),
+  }));
+  return barChartSvg('chart-value', `Marginal steam value per header (${format.currency}/${format.perMass})`, bars);
+}
+
+export function objectiveWords(objective: string): string {
+  if (objective === 'minimumCost') return 'Minimum-cost';
+  if (objective === 'minimumFuel') return 'Minimum-fuel';
+  if (objective === 'minimumCo2') return 'Minimum-CO2';
+  return 'Maximum-power';
+}
