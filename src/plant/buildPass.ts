@@ -1,23 +1,20 @@
 // One pass of the successive linearisation: with every property point fixed,
 // the plant becomes a linear model.
-import { expr, type LinearExpression, type Variable } from '../lp/index.js';
+import { expr, type LinearExpression } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
-import { BuildContext, GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
+import { BuildContext, GJ_PER_KWH, T_PER_H_PER_KG_S, type BalanceSlack, type CostComponent } from './context.js';
 import type { UnitContribution } from './contribution.js';
 import { MAKEUP } from './network.js';
 
-/** Penalty per kg/s (or per kW) of balance slack when diagnosing a case that cannot be met. */
-export const SLACK_PENALTY = 1e7;
+/**
+ * Penalty of balance slack when diagnosing a case that cannot be met: per kg/s
+ * for mass, per kW for heat and power. A kg/s of steam carries some 2,500 kW, so
+ * kW slack costs less per unit, and the diagnosis does not trade a missing
+ * tonne of steam for a few kW of pumping power.
+ */
+export const SLACK_PENALTY = { mass: 1e7, energy: 1e4, power: 1e4 } as const;
 
-export interface BalanceSlack {
-  row: string;
-  node: string;
-  quantity: 'mass' | 'energy';
-  /** supplied from nowhere: the node is short */
-  short: Variable;
-  /** taken to nowhere: the node has a surplus it cannot shed */
-  surplus: Variable;
-}
+export type { BalanceSlack };
 
 export interface Pass {
   context: BuildContext;
@@ -53,7 +50,6 @@ export function buildPass(
   // Carbon is priced on every tonne emitted.
   if (plant.site.carbonPrice > 0) context.addCost('carbon', expr().addExpression(context.co2, plant.site.carbonPrice / 1000));
 
-  const slacks: BalanceSlack[] = [];
   for (const node of context.nodes.values()) {
     const mass = expr();
     const energy = expr();
@@ -66,25 +62,24 @@ export function buildPass(
       energy.addExpression(stream.flow, -stream.h);
     }
     energy.addConstant(-node.heatLoss);
-    if (withSlack) slacks.push(addSlack(context, node.id, 'mass', mass));
+    context.relax(massRowName(node.id), node.id, 'mass', mass);
     context.model.addRow(massRowName(node.id), mass, '=', 0);
     if (node.energyRow) {
-      if (withSlack) slacks.push(addSlack(context, node.id, 'energy', energy));
+      context.relax(energyRowName(node.id), node.id, 'energy', energy);
       context.model.addRow(energyRowName(node.id), energy, '=', 0);
     }
   }
 
   const goal = objectiveExpression(context, objective);
-  if (withSlack) for (const slack of slacks) goal.expression.add(slack.short, SLACK_PENALTY * goal.sign).add(slack.surplus, SLACK_PENALTY * goal.sign);
+  const slacks = context.slacks;
+  if (withSlack) {
+    for (const slack of slacks) {
+      const penalty = SLACK_PENALTY[slack.quantity] * goal.sign;
+      goal.expression.add(slack.short, penalty).add(slack.surplus, penalty);
+    }
+  }
   context.model.setObjective(goal.sense, goal.expression);
   return { context, slacks, costs: context.cost };
-}
-
-function addSlack(context: BuildContext, node: string, quantity: 'mass' | 'energy', balance: LinearExpression): BalanceSlack {
-  const short = context.variable(`${node}.${quantity}.short`);
-  const surplus = context.variable(`${node}.${quantity}.surplus`);
-  balance.add(short, 1).add(surplus, -1);
-  return { row: quantity === 'mass' ? massRowName(node) : energyRowName(node), node, quantity, short, surplus };
 }
 
 /** Total cost per hour over every component. */

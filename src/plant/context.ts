@@ -11,7 +11,20 @@ export const GJ_PER_KWH = 0.0036;
 /** tonnes per hour in one kg/s. */
 export const T_PER_H_PER_KG_S = 3.6;
 
+/** Slack on one balance row, present only when diagnosing a case that cannot be met. */
+export interface BalanceSlack {
+  row: string;
+  node: string;
+  quantity: 'mass' | 'energy' | 'power';
+  /** supplied from nowhere: the node is short */
+  short: Variable;
+  /** taken to nowhere: the node has a surplus it cannot shed */
+  surplus: Variable;
+}
+
 export class BuildContext {
+  /** slack variables added by `relax`, when diagnosing */
+  readonly slacks: BalanceSlack[] = [];
   readonly model: LinearModel;
   readonly streams: Stream[] = [];
   readonly nodes = new Map<string, BalanceNode>();
@@ -56,6 +69,15 @@ export class BuildContext {
     const rows = this.unitRows.get(owner) ?? [];
     rows.push(name);
     this.unitRows.set(owner, rows);
+  }
+
+  /** When diagnosing, lets a balance row be missed at a penalty: adds short - surplus to it. */
+  relax(row: string, node: string, quantity: BalanceSlack['quantity'], balance: LinearExpression): void {
+    if (!this.withSlack) return;
+    const short = this.variable(`${node}.${quantity}.short`);
+    const surplus = this.variable(`${node}.${quantity}.surplus`);
+    balance.add(short, 1).add(surplus, -1);
+    this.slacks.push({ row, node, quantity, short, surplus });
   }
 
   h(headerId: string): number {

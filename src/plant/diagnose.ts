@@ -8,8 +8,8 @@ import { passSolution } from './passSolution.js';
 
 export interface Shortfall {
   node: string;
-  quantity: 'mass' | 'energy';
-  /** positive: the node is short by this much (kg/s or kW); negative: it has this much it cannot get rid of */
+  quantity: 'mass' | 'energy' | 'power';
+  /** positive: the node is short by this much (kg/s, or kW of heat or power); negative: it has this much it cannot get rid of */
   amount: number;
 }
 
@@ -45,9 +45,11 @@ export async function diagnose(
   const phrases = shortfalls.map((item) => {
     const unit = item.quantity === 'mass' ? 'kg/s' : 'kW';
     const size = Math.abs(item.amount);
-    const shown = item.quantity === 'mass' ? `${size.toPrecision(3)} ${unit} (${(size * 3.6).toPrecision(3)} t/h)` : `${size.toPrecision(3)} ${unit}`;
-    if (item.amount > 0) return item.quantity === 'mass' ? `${item.node} is short of ${shown} of steam or water` : `${item.node} is short of ${shown} of heat`;
-    return item.quantity === 'mass' ? `${item.node} has ${shown} it cannot send anywhere` : `${item.node} has ${shown} of surplus heat it cannot shed`;
+    const figure = size >= 100 ? Math.round(size).toLocaleString('en-US') : size.toPrecision(3);
+    const shown = item.quantity === 'mass' ? `${size.toPrecision(3)} ${unit} (${(size * 3.6).toPrecision(3)} t/h)` : `${figure} ${unit}`;
+    const what = item.quantity === 'mass' ? 'steam or water' : item.quantity === 'energy' ? 'heat' : 'electricity';
+    if (item.amount > 0) return `${item.node} is short of ${shown} of ${what}`;
+    return item.quantity === 'mass' ? `${item.node} has ${shown} it cannot send anywhere` : `${item.node} has ${shown} of surplus ${what} it cannot shed`;
   });
   const limits = binding.map((entry) => `${entry.id} ${entry.limits.join(', ')}`);
   const summary =

@@ -249,3 +249,14 @@ objective: minimum_cost
     );
   });
 });
+
+describe('solvePlant: electricity that cannot be met', () => {
+  it('names the site power balance, the shortfall and the import limit', async () => {
+    const outcome = await solvePlant(loadPlant(smallCase().replace('site_demand: 0 kW', 'site_demand: 12 MW')));
+    expect(outcome.ok).toBe(false);
+    if (outcome.ok) return;
+    // 12 MW asked, 10 MW of import allowed, a few kW of feedwater pumping on top.
+    expect(outcome.message).toMatch(/cannot be met: site power is short of 2,0\d\d kW of electricity\. /);
+    expect(outcome.message).toMatch(/grid import at its limit/);
+  });
+});

@@ -40,6 +40,7 @@ export class GridContribution implements UnitContribution {
     this.load = context.electricLoad.clone();
     // made + bought - sold - modelled loads = site demand
     const balance = expr().addExpression(this.generation).add(this.bought, 1).add(this.sold, -1).addExpression(this.load, -1);
+    context.relax(SITE_POWER_ROW, 'site power', 'power', balance);
     context.row('grid', SITE_POWER_ROW, balance, '=', this.power.siteDemand);
   }
 
