@@ -7,3 +7,6 @@ export type * from './caseFileTypes.js';
 export { starterCase } from './starterCase.js';
 export { summarisePlant } from './summary.js';
 export { schemaFilePath } from './schemaLocation.js';
+export type * from './variantTypes.js';
+export { HOURS_PER_YEAR } from './variantTypes.js';
+export { parseMoney, parseYears } from './money.js';

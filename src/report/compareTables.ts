@@ -62,6 +62,7 @@ function rowsOf(runs: ScenarioRun[], currency: string): FigureRow[] {
 
 function cell(value: number | null, digits: number): string {
   if (value === null) return '-';
+  if (Math.abs(value) < 0.5 * 10 ** -digits) value = 0; // no "-0"
   return value.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 }
 

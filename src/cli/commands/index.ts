@@ -1,10 +1,12 @@
 // Every command of the steamwright CLI, in the order `--help` lists them.
 import type { CommandModule } from 'yargs';
 import { checkCommand } from './check.js';
+import { compareCommand } from './compare.js';
+import { evaluateCommand } from './evaluate.js';
 import { initCommand } from './init.js';
 import { reportCommand } from './report.js';
 import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, reportCommand, checkCommand, initCommand, stateCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, reportCommand, checkCommand, initCommand, stateCommand];

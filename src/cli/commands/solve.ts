@@ -5,7 +5,7 @@ import { getBackend, toLpFormat, type BackendName } from '../../lp/index.js';
 import { formatIssue, loadCase, type Objective } from '../../model/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
 import { solveSummary, writeFileAtomic } from '../../report/index.js';
-import { CliError, EXIT_PROBLEMS } from '../errors.js';
+import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 
 interface SolveArgs {
   case: string;
@@ -13,6 +13,7 @@ interface SolveArgs {
   json: boolean;
   'export-lp'?: string;
   solver: BackendName;
+  scenario?: string;
 }
 
 /** Command-line words for the objectives. */
@@ -32,6 +33,7 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('json', { type: 'boolean', default: false, describe: 'print the whole result as JSON (SI units)' })
       .option('export-lp', { type: 'string', describe: 'also write the final linear model in CPLEX LP format to FILE' })
+      .option('scenario', { type: 'string', describe: 'solve this scenario of the case instead of the plant as written' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
       .example('$0 solve cases/mill.yaml', 'solve the demo plant')
       .example('$0 solve cases/mill.yaml --objective max-power --json', 'most on-site power, as JSON') as Argv<SolveArgs>,
@@ -43,8 +45,17 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; nothing was solved`, EXIT_PROBLEMS);
     }
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
-    const outcome = await solvePlant(loaded.plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw new CliError(`${args.case}: ${outcome.message}`, EXIT_PROBLEMS);
+    let plant = loaded.plant;
+    if (args.scenario !== undefined) {
+      const scenario = loaded.variants.scenarios.find((entry) => entry.id === args.scenario && !loaded.variants.implicitBase);
+      if (!scenario) {
+        const known = loaded.variants.implicitBase ? 'the case has no scenarios' : `known: ${loaded.variants.scenarios.map((entry) => entry.id).join(', ')}`;
+        throw new CliError(`--scenario: no scenario "${args.scenario}" in ${args.case}; ${known}`, EXIT_USAGE);
+      }
+      plant = scenario.plant;
+    }
+    const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
+    if (!outcome.ok) throw new CliError(`${args.case}${args.scenario ? ` scenario "${args.scenario}"` : ''}: ${outcome.message}`, EXIT_PROBLEMS);
     const result = plantResult(outcome);
     if (args['export-lp']) {
       try {

@@ -1,0 +1,89 @@
+// `steamwright compare CASE`: scenarios (or a sweep's steps) solved side by
+// side, with differences against the first column and the annual total.
+import type { Argv, CommandModule } from 'yargs';
+import type { BackendName } from '../../lp/index.js';
+import { formatIssue, loadCase } from '../../model/index.js';
+import { compareCsv, compareMarkdown, compareText } from '../../report/compareTables.js';
+import { compareScenarios, progressLine, runSweep, ScenarioLookupError, type Comparison } from '../../scenarios/index.js';
+import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { OBJECTIVE_WORDS } from './solve.js';
+
+interface CompareArgs {
+  case: string;
+  scenarios?: string;
+  sweep?: string;
+  json: boolean;
+  csv: boolean;
+  md: boolean;
+  objective?: string;
+  solver: BackendName;
+  workers?: number;
+}
+
+export const compareCommand: CommandModule<object, CompareArgs> = {
+  command: 'compare <case>',
+  describe: 'Solve the scenarios of a case (or the steps of a sweep) and print them side by side',
+  builder: (yargs: Argv<object>) =>
+    yargs
+      .positional('case', { type: 'string', demandOption: true, describe: 'the plant case file (YAML)' })
+      .option('scenarios', { type: 'string', describe: 'comma-separated scenario ids, in column order (default: all)' })
+      .option('sweep', { type: 'string', describe: 'solve the steps of this sweep instead of the scenarios' })
+      .option('json', { type: 'boolean', default: false, describe: 'print scenarios[] as JSON (SI units)' })
+      .option('csv', { type: 'boolean', default: false, describe: 'print the table as CSV' })
+      .option('md', { type: 'boolean', default: false, describe: 'print the table as Markdown' })
+      .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
+      .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
+      .option('workers', { type: 'number', describe: 'most worker threads (default: one per core; 1 solves in process)' })
+      .conflicts('scenarios', 'sweep')
+      .check((args) => {
+        if ([args.json, args.csv, args.md].filter(Boolean).length > 1) throw new Error('choose one of --json, --csv, --md');
+        if (args.workers !== undefined && !(Number.isInteger(args.workers) && args.workers >= 1)) throw new Error(`--workers expects a whole number of 1 or more, found ${args.workers}`);
+        return true;
+      })
+      .example('$0 compare cases/mill.yaml', 'every scenario side by side')
+      .example('$0 compare cases/mill.yaml --sweep import_price --csv', 'a sweep as CSV') as Argv<CompareArgs>,
+  handler: async (args) => {
+    const loaded = await loadCase(args.case);
+    if (!loaded.ok) {
+      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
+      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
+      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; nothing was solved`, EXIT_PROBLEMS);
+    }
+    const progress = progressLine('compare', process.stderr, args.json);
+    const options = { objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, workers: args.workers, onProgress: progress.onProgress };
+    let comparison: Comparison;
+    let title: string;
+    try {
+      if (args.sweep) {
+        const sweep = await runSweep(loaded.variants, args.sweep, options);
+        comparison = sweep;
+        title = `${loaded.plant.name}: sweep "${args.sweep}" of ${sweep.target}`;
+      } else {
+        const ids = args.scenarios ? args.scenarios.split(',').map((id) => id.trim()).filter((id) => id !== '') : [];
+        comparison = await compareScenarios(loaded.variants, ids, options);
+        title = `${loaded.plant.name}: scenarios side by side, differences against ${comparison.runs[0]?.id ?? 'the first'}`;
+      }
+    } catch (error) {
+      if (error instanceof ScenarioLookupError) throw new CliError(`${args.case}: ${error.message}`, EXIT_USAGE);
+      throw error;
+    } finally {
+      progress.finish();
+    }
+    const currency = loaded.plant.site.currency;
+    const { runs, annual } = comparison;
+    if (args.json) {
+      const scenarios = runs.map((run) => (run.ok ? { ...run, result: undefined } : run));
+      process.stdout.write(`${JSON.stringify({ plant: loaded.plant.name, currency, annual, scenarios }, null, 2)}\n`);
+    } else if (args.csv) {
+      process.stdout.write(compareCsv(runs, currency));
+    } else if (args.md) {
+      process.stdout.write(compareMarkdown(runs, currency));
+    } else {
+      process.stdout.write(compareText(title, runs, currency, annual));
+    }
+    const failed = runs.filter((run) => !run.ok);
+    if (failed.length > 0) {
+      throw new CliError(`${args.case}: ${failed.length} of ${runs.length} could not be solved: ${failed.map((run) => run.id).join(', ')}`, EXIT_PROBLEMS);
+    }
+  },
+};

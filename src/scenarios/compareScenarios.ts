@@ -1,0 +1,35 @@
+// Solving scenarios (or a sweep's steps) side by side.
+import type { CaseVariants } from '../model/index.js';
+import { annualTotals, scenarioRun, type AnnualTotals, type ScenarioRun } from './annual.js';
+import { solvePlants, type PoolOptions } from './solvePool.js';
+
+export interface Comparison {
+  runs: ScenarioRun[];
+  annual: AnnualTotals;
+}
+
+/** The named scenarios (all when ids is empty), in the order asked; unknown ids throw a ScenarioLookupError. */
+export async function compareScenarios(variants: CaseVariants, ids: string[] = [], options: PoolOptions = {}): Promise<Comparison> {
+  const chosen = ids.length === 0 ? variants.scenarios : ids.map((id) => findScenario(variants, id));
+  const outcomes = await solvePlants(chosen.map((scenario) => scenario.plant), options);
+  const runs = chosen.map((scenario, index) => scenarioRun(scenario.id, scenario.name, scenario.hours, outcomes[index]));
+  return { runs, annual: annualTotals(runs) };
+}
+
+/** Every step of a sweep as a column; the sweep's scenario lends its hours. */
+export async function runSweep(variants: CaseVariants, sweepId: string, options: PoolOptions = {}): Promise<Comparison & { target: string }> {
+  const sweep = variants.sweeps.find((entry) => entry.id === sweepId);
+  if (!sweep) throw new ScenarioLookupError(`no sweep "${sweepId}" in the case; known: ${variants.sweeps.map((entry) => entry.id).join(', ') || 'none'}`);
+  const hours = variants.scenarios.find((entry) => entry.id === sweep.scenario)?.hours ?? 0;
+  const outcomes = await solvePlants(sweep.steps.map((step) => step.plant), options);
+  const runs = sweep.steps.map((step, index) => scenarioRun(step.value, `${sweep.target} = ${step.value}`, hours, outcomes[index]));
+  return { runs, annual: annualTotals(runs), target: sweep.target };
+}
+
+export class ScenarioLookupError extends Error {}
+
+export function findScenario(variants: CaseVariants, id: string): CaseVariants['scenarios'][number] {
+  const scenario = variants.scenarios.find((entry) => entry.id === id);
+  if (!scenario) throw new ScenarioLookupError(`no scenario "${id}" in the case; known: ${variants.scenarios.map((entry) => entry.id).join(', ')}`);
+  return scenario;
+}
