@@ -70,7 +70,7 @@ function itemSvg(placed: PlacedItem): string {
   const pieces: string[] = [`<g class="unit unit-${item.glyph}" data-id="${escapeMarkup(item.id)}">`];
   // Gaps where the line passes a header it does not join.
   for (const pass of placed.passes) {
-    const width = Math.max(...placed.segments.map((segment) => segment.width)) + 8;
+    const width = Math.max(...placed.segments.map((segment) => segment.width)) + 5;
     pieces.push(`<rect class="pass" x="${f(placed.x - width / 2)}" y="${f(pass.y - 7)}" width="${f(width)}" height="14" fill="${PAPER}"/>`);
   }
   for (const segment of placed.segments) {

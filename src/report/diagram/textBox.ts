@@ -12,14 +12,14 @@ export interface Box {
 
 /** Advance widths in em, grouped by shape; measured from DejaVu Sans Book at 1 em and rounded up. */
 const NARROW = new Set([...'iljtfrI!|.,:;\'()[]` ']);
-const WIDE = new Set([...'mwMW@%']);
+const WIDE = new Set([...'mwMW@%→']);
 
 /** Estimated width in px of `text` at `fontSize` px. */
 export function textWidth(text: string, fontSize: number, bold = false): number {
   let ems = 0;
   for (const character of text) {
     if (NARROW.has(character)) ems += 0.36;
-    else if (WIDE.has(character)) ems += 0.98;
+    else if (WIDE.has(character)) ems += 1.0;
     else if (character >= 'A' && character <= 'Z') ems += 0.76;
     else ems += 0.66;
   }
