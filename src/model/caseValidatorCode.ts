@@ -6,8 +6,7 @@ import Ajv2020 from 'ajv/dist/2020.js';
 import standaloneCode from 'ajv/dist/standalone/index.js';
 import { caseSchema, SCHEMA_ID } from './caseSchema.js';
 
-/** File name of the generated validator, beside the compiled validateSchema.js. */
-export const GENERATED_VALIDATOR = 'caseValidator.generated.cjs';
+export { GENERATED_VALIDATOR } from './generatedValidator.js';
 
 /** CommonJS source of a validator equivalent to the case schema. */
 export function caseValidatorCode(): string {

@@ -1,9 +1,13 @@
 // Schema validation of the parsed case with ajv (draft 2020-12).
 import { createRequire } from 'node:module';
-import Ajv2020 from 'ajv/dist/2020.js';
+import type Ajv2020 from 'ajv/dist/2020.js';
 import type { ValidateFunction } from 'ajv';
 import { caseSchema, SCHEMA_ID } from './caseSchema.js';
-import { GENERATED_VALIDATOR } from './caseValidatorCode.js';
+import { GENERATED_VALIDATOR } from './generatedValidator.js';
+
+// ajv is loaded only when a case fails the precompiled check (or there is none):
+// a valid case never pays for loading and compiling it.
+const require = createRequire(import.meta.url);
 import type { Issue } from './issue.js';
 import { schemaIssues } from './schemaErrors.js';
 import type { YamlSource } from './yamlSource.js';
@@ -16,7 +20,8 @@ function compiler(): InstanceType<typeof Ajv2020.default> {
   if (!ajv) {
     // allErrors: every problem at once; verbose: errors carry their schema node,
     // which holds the example and the plain-words message.
-    ajv = new Ajv2020.default({ allErrors: true, verbose: true, strict: true, strictTypes: false, strictRequired: false });
+    const { default: Ajv } = require('ajv/dist/2020.js') as typeof Ajv2020;
+    ajv = new Ajv({ allErrors: true, verbose: true, strict: true, strictTypes: false, strictRequired: false });
     ajv.addKeyword({ keyword: 'x-quantity', schemaType: 'string' });
     ajv.addKeyword({ keyword: 'x-message', schemaType: 'string' });
     ajv.addSchema(caseSchema);
@@ -40,7 +45,7 @@ let precompiled: ((data: unknown) => boolean) | null | undefined;
 function precompiledValidator(): ((data: unknown) => boolean) | null {
   if (precompiled === undefined) {
     try {
-      precompiled = createRequire(import.meta.url)(`./${GENERATED_VALIDATOR}`) as (data: unknown) => boolean;
+      precompiled = require(`./${GENERATED_VALIDATOR}`) as (data: unknown) => boolean;
     } catch {
       precompiled = null;
     }
