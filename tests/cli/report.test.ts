@@ -1,0 +1,97 @@
+import { describe, expect, it } from 'vitest';
+import { existsSync, mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { projectRoot, runCli } from '../helpers/cli.js';
+import { smallCase } from '../plant/helpers/cases.js';
+
+const DEMO = join(projectRoot, 'cases', 'kestrel-bay-board-mill.yaml');
+const folder = (): string => mkdtempSync(join(tmpdir(), 'steamwright-report-'));
+
+describe('steamwright report', () => {
+  it('writes CASE-NAME.report.html in the current directory by default', async () => {
+    const cwd = folder();
+    const run = await runCli(['report', DEMO], { cwd });
+    expect(run.stderr).toBe('');
+    expect(run.code).toBe(0);
+    expect(run.stdout).toBe('wrote kestrel-bay-board-mill.report.html\n');
+    const html = readFileSync(join(cwd, 'kestrel-bay-board-mill.report.html'), 'utf8');
+    expect(html).toMatch(/^<!doctype html>/);
+    expect(html).toContain('Kestrel Bay Board Mill');
+    expect(readdirSync(cwd)).toEqual(['kestrel-bay-board-mill.report.html']);
+  });
+
+  it('--out and --svg write the report and the diagram alone; an existing file is replaced', async () => {
+    const dir = folder();
+    const out = join(dir, 'mill.html');
+    writeFileSync(out, 'old report');
+    const svg = join(dir, 'mill.svg');
+    const run = await runCli(['report', DEMO, '--out', out, '--svg', svg]);
+    expect(run.code).toBe(0);
+    expect(readFileSync(out, 'utf8')).toMatch(/^<!doctype html>/);
+    const diagram = readFileSync(svg, 'utf8');
+    expect(diagram).toMatch(/^<svg xmlns="http:\/\/www\.w3\.org\/2000\/svg" class="balance-diagram"/);
+    expect(diagram).toContain('data-id="tg1"');
+    expect(readdirSync(dir).sort()).toEqual(['mill.html', 'mill.svg']);
+  });
+
+  it('--md alone prints the tables as Markdown and writes no HTML; --csv FILE writes CSV', async () => {
+    const cwd = folder();
+    const csv = join(cwd, 'tables.csv');
+    const run = await runCli(['report', DEMO, '--md', '--csv', csv], { cwd });
+    expect(run.code).toBe(0);
+    expect(run.stdout).toMatch(/^# Kestrel Bay Board Mill\n\n## Headers\n\n\| header \| name \| pressure/);
+    expect(run.stdout).toContain('| hp | High-pressure header | 42.0 barg |');
+    expect(run.stderr).toBe(`wrote ${csv}\n`);
+    expect(readFileSync(csv, 'utf8')).toMatch(/^table,header,name,pressure/);
+    expect(readdirSync(cwd)).toEqual(['tables.csv']);
+  });
+
+  it('a case with errors gives the same located messages as solve, exit code 1, and no file', async () => {
+    const dir = folder();
+    const casePath = join(dir, 'bad.yaml');
+    writeFileSync(casePath, smallCase({ boilerMax: 'fifty' }));
+    const out = join(dir, 'bad.html');
+    writeFileSync(out, 'old report');
+    const report = await runCli(['report', casePath, '--out', out, '--svg', join(dir, 'bad.svg')]);
+    const solve = await runCli(['solve', casePath]);
+    expect(report.code).toBe(1);
+    expect(report.stderr).toMatch(/bad\.yaml:\d+:\d+/);
+    const located = (text: string): string[] => text.split('\n').filter((line) => /bad\.yaml:\d+:\d+/.test(line));
+    expect(located(report.stderr)).toEqual(located(solve.stderr));
+    expect(report.stderr).toMatch(/no report was written/);
+    expect(readFileSync(out, 'utf8')).toBe('old report');
+    expect(readdirSync(dir).sort()).toEqual(['bad.html', 'bad.yaml']);
+  });
+
+  it('a case that cannot be met gives the same diagnosis as solve, exit code 1, and no file', async () => {
+    const dir = folder();
+    const casePath = join(dir, 'short.yaml');
+    writeFileSync(casePath, smallCase({ boilerMax: '10 t/h', userSteam: '30 t/h' }));
+    const report = await runCli(['report', casePath], { cwd: dir });
+    const solve = await runCli(['solve', casePath], { cwd: dir });
+    expect(report.code).toBe(1);
+    expect(report.stdout).toBe('');
+    expect(report.stderr).toBe(solve.stderr);
+    expect(report.stderr).toMatch(/the case cannot be met: main is short of/);
+    expect(readdirSync(dir)).toEqual(['short.yaml']);
+  });
+
+  it('a file that cannot be written is exit code 1 and leaves no temporary file', async () => {
+    const dir = folder();
+    const run = await runCli(['report', DEMO, '--out', join(dir, 'missing', 'r.html')], { cwd: dir });
+    expect(run.code).toBe(1);
+    expect(run.stderr).toMatch(/cannot write ".*r\.html"/);
+    expect(readdirSync(dir)).toEqual([]);
+  });
+
+  it('bad usage is exit code 2: no case, an empty --out, an unknown objective', async () => {
+    const dir = folder();
+    for (const args of [['report'], ['report', DEMO, '--out', ''], ['report', DEMO, '--objective', 'cheapest']]) {
+      const run = await runCli(args, { cwd: dir });
+      expect(run.code, args.join(' ')).toBe(2);
+      expect(run.stderr.length, args.join(' ')).toBeGreaterThan(0);
+    }
+    expect(existsSync(join(dir, 'kestrel-bay-board-mill.report.html'))).toBe(false);
+  });
+});
