@@ -37,8 +37,9 @@ export function buildPass(
   headerEnthalpy: ReadonlyMap<string, number>,
   objective: Objective,
   withSlack = false,
+  fixedIntegers: ReadonlyMap<string, number> | null = null,
 ): Pass {
-  const context = new BuildContext(plant, headerEnthalpy, withSlack);
+  const context = new BuildContext(plant, headerEnthalpy, withSlack, fixedIntegers);
   for (const unit of contributions) unit.build(context);
   for (const unit of contributions) unit.finish?.(context);
 

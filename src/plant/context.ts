@@ -45,23 +45,30 @@ export class BuildContext {
   /** rows named per unit, so reports can find a unit's limits */
   readonly unitRows = new Map<string, string[]>();
 
+  /** enthalpy of each header for this pass, kJ/kg (a copy: the loop moves its own points on) */
+  readonly headerEnthalpy: ReadonlyMap<string, number>;
+
   constructor(
     readonly plant: Plant,
-    /** enthalpy of each header for this pass, kJ/kg */
-    readonly headerEnthalpy: ReadonlyMap<string, number>,
+    headerEnthalpy: ReadonlyMap<string, number>,
     /** slack on every balance, for diagnosing a case that cannot be met */
     readonly withSlack: boolean,
+    /** integer variables held at these values (by name): the pass is then a linear program */
+    readonly fixedIntegers: ReadonlyMap<string, number> | null = null,
   ) {
     this.model = new LinearModel(plant.name);
+    this.headerEnthalpy = new Map(headerEnthalpy);
   }
 
   variable(name: string, options: VariableOptions = {}): Variable {
+    const fixed = options.type && options.type !== 'continuous' ? this.fixedIntegers?.get(name) : undefined;
+    if (fixed !== undefined) return this.model.addVariable(name, { lower: fixed, upper: fixed, type: 'continuous' });
     return this.model.addVariable(name, options);
   }
 
   /** A binary, or the constant 1 when the unit may not switch off. */
   onOff(name: string, canSwitchOff: boolean): Variable | null {
-    return canSwitchOff ? this.model.addVariable(name, { type: 'binary' }) : null;
+    return canSwitchOff ? this.variable(name, { type: 'binary' }) : null;
   }
 
   row(owner: string, name: string, expression: LinearExpression, sense: '<=' | '>=' | '=', rhs: number): void {

@@ -67,8 +67,10 @@ export interface Kpis {
   power_per_throttle_t_kWh: number | null;
   /** fuel beyond what the process heat alone would need at the boilers' efficiency, per kWh generated: kJ/kWh */
   fuel_chargeable_to_power_kJ_per_kWh: number | null;
-  /** (useful process heat + net power) / fuel energy */
+  /** (useful process heat + net power) / fuel energy; waste heat is not fuel, so this can pass 100 % */
   site_useful_energy_efficiency: number | null;
+  /** (useful process heat + net power) / (fuel + recovered waste heat + imported steam energy) */
+  site_useful_energy_efficiency_all_inputs: number | null;
 }
 
 export interface PlantResult {
@@ -190,6 +192,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
     fuel_chargeable_to_power_kJ_per_kWh:
       boilerEfficiency && generated > 0 ? ((fuel - processHeat / boilerEfficiency) * 3600) / generated : null,
     site_useful_energy_efficiency: ratio(processHeat + generated - loads, fuel),
+    site_useful_energy_efficiency_all_inputs: ratio(processHeat + generated - loads, fuel + audit.site.waste_heat_kW + audit.site.imported_steam_kW),
   };
 
   return {

@@ -25,6 +25,8 @@ export interface PassRecord {
   /** the largest change of any property point after this pass */
   largestChange: PointChange | null;
   solveMs: number;
+  /** on/off decisions held from earlier passes, so this pass was a linear program */
+  integersHeld: boolean;
 }
 
 export type PlantOutcome =
@@ -45,34 +47,61 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   const solveOptions = { timeLimitSeconds: plant.solver.timeLimit, mipRelativeGap: plant.solver.mipGap };
 
   try {
+    // On/off decisions usually settle in the first passes. Once two passes agree
+    // on every integer, later passes hold them fixed and solve a linear program;
+    // at convergence one mixed-integer solve at the final points confirms them.
+    let fixed: Map<string, number> | null = null;
+    let previousIntegers: Map<string, number> | null = null;
     let converged = false;
     for (let passNumber = 1; passNumber <= maxPasses; passNumber += 1) {
-      const pass = buildPass(plant, contributions, headerEnthalpy, objective);
+      const pass = buildPass(plant, contributions, headerEnthalpy, objective, false, fixed);
       const result = await backend.solve(pass.context.model, solveOptions);
       if (result.status !== 'optimal') {
+        if (fixed) {
+          // The held decisions no longer fit the moved points: decide them again.
+          fixed = null;
+          previousIntegers = null;
+          converged = false;
+          continue;
+        }
         if (result.status === 'infeasible' || result.status === 'unbounded') {
           const diagnosis = await diagnose(plant, contributions, headerEnthalpy, objective, backend, solveOptions);
           return { ok: false, plant, reason: 'infeasible', message: diagnosis.summary, diagnosis, passes };
         }
         return { ok: false, plant, reason: 'solver', message: `the solver (${result.backend}) ended "${result.status}"${result.message ? `: ${result.message}` : ''}`, passes };
       }
+      const integers: Map<string, number> = fixed ?? integerValues(pass, result);
       const solution = passSolution(result);
       const changes = updatePoints(plant, pass, solution, contributions, headerEnthalpy);
       const enthalpyChanges = changes.filter((change) => change.unit === 'kJ/kg');
       const largest = changes.reduce<PointChange | null>((worst, change) => (worst === null || change.change > worst.change ? change : worst), null);
       const largestEnthalpy = enthalpyChanges.reduce((worst, change) => Math.max(worst, change.change), 0);
-      passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs });
+      passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs, integersHeld: fixed !== null });
+      if (!fixed && integers.size > 0 && previousIntegers && sameValues(integers, previousIntegers)) fixed = integers;
+      previousIntegers = integers;
       // Converged once the points hold still; the audit then decides whether the
       // last pass's points were close enough for balances to close.
       if (largestEnthalpy < tolerance && passNumber > 1) converged = true;
-      if (converged) {
-        const audit = auditPass(pass, solution, contributions.map((unit) => unit.report(solution)));
-        if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
-          if (audit.worstRelative > AUDIT_TOLERANCE) {
-            return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes };
-          }
-          return { ok: true, plant, objective, pass, solution, result, headerEnthalpy: pointsOf(pass), contributions, passes, audit, backend: result.backend };
+      if (!converged) continue;
+      if (pass.context.fixedIntegers) {
+        const check = buildPass(plant, contributions, pass.context.headerEnthalpy, objective);
+        const confirmed = await backend.solve(check.context.model, solveOptions);
+        const confirmedIntegers = confirmed.status === 'optimal' ? integerValues(check, confirmed) : null;
+        const better = confirmed.status === 'optimal' && result.objective !== null && confirmed.objective !== null && improves(confirmed.objective, result.objective, pass);
+        if (!confirmedIntegers || (better && !sameValues(confirmedIntegers, pass.context.fixedIntegers))) {
+          // A different commitment pays at the final points: iterate on with it.
+          fixed = null;
+          previousIntegers = confirmedIntegers;
+          converged = false;
+          continue;
         }
+      }
+      const audit = auditPass(pass, solution, contributions.map((unit) => unit.report(solution)));
+      if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
+        if (audit.worstRelative > AUDIT_TOLERANCE) {
+          return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes };
+        }
+        return { ok: true, plant, objective, pass, solution, result, headerEnthalpy: pointsOf(pass), contributions, passes, audit, backend: result.backend };
       }
     }
     const last = passes[passes.length - 1]?.largestChange;
@@ -87,6 +116,26 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
     if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
     throw error;
   }
+}
+
+/** Values of the pass's integer variables, rounded, by name. */
+function integerValues(pass: Pass, result: SolveResult): Map<string, number> {
+  const values = new Map<string, number>();
+  for (const variable of pass.context.model.variables) if (variable.isInteger) values.set(variable.name, Math.round(result.value(variable)));
+  return values;
+}
+
+function sameValues(a: ReadonlyMap<string, number>, b: ReadonlyMap<string, number>): boolean {
+  if (a.size !== b.size) return false;
+  for (const [name, value] of a) if (b.get(name) !== value) return false;
+  return true;
+}
+
+/** Whether the unrestricted optimum beats the held one by more than the MIP gap. */
+function improves(free: number, held: number, pass: Pass): boolean {
+  const gap = pass.context.plant.solver.mipGap;
+  const margin = Math.max(1e-9, gap) * Math.max(1, Math.abs(held));
+  return pass.context.model.objective?.sense === 'maximize' ? free > held + margin : free < held - margin;
 }
 
 function pointsOf(pass: Pass): Map<string, number> {

@@ -155,7 +155,8 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
               ? `${(kpis.fuel_chargeable_to_power_kJ_per_kWh / 1000).toFixed(2)} MJ/kWh`
               : `${((kpis.fuel_chargeable_to_power_kJ_per_kWh / 1.05505585262)).toFixed(0)} Btu/kWh`,
         ],
-        ['site useful-energy efficiency', percent(kpis.site_useful_energy_efficiency)],
+        ['site useful-energy efficiency (on fuel)', percent(kpis.site_useful_energy_efficiency)],
+        ['  on fuel, waste heat and imported steam', percent(kpis.site_useful_energy_efficiency_all_inputs)],
       ],
       false,
     ),

@@ -260,3 +260,30 @@ describe('solvePlant: electricity that cannot be met', () => {
     expect(outcome.message).toMatch(/grid import at its limit/);
   });
 });
+
+describe('solvePlant: limits a case leaves open', () => {
+  it('a switchable turbine with no flow or power maximum still solves', async () => {
+    const text = smallCase({ letdown: true }).replace(
+      'users:\n',
+      `turbines:
+  - id: st1
+    inlet: main
+    stages:
+      - { to: low, isentropic_efficiency: 70 % }
+    mechanical_efficiency: 98 %
+    generator_efficiency: 96 %
+    can_switch_off: true
+    drives: generator
+users:
+`,
+    );
+    const outcome = await solved(text);
+    expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+    // Power is bought at 100 USD/MWh and cannot be sold: the turbine runs to cover the
+    // plant's own pumping load and no more.
+    const grid = unit(outcome, 'grid');
+    expect(Number(unit(outcome, 'st1').values.power_kW)).toBeGreaterThan(0);
+    expectClose(Number(unit(outcome, 'st1').values.power_kW), Number(grid.values.modelled_loads_kW), 1e-6, 'turbine power');
+    expect(Number(grid.values.import_kW)).toBeLessThan(1e-6);
+  });
+});

@@ -51,7 +51,7 @@ export class TurbineContribution implements UnitContribution {
       // outflow at this point = section flow - next section flow
       const outflow = expr().add(flow, 1);
       if (next) outflow.add(next, -1);
-      context.row(id, `${id}.out${k + 1}.max`, outflow.clone(), '<=', stage.outflow.max);
+      if (Number.isFinite(stage.outflow.max)) context.row(id, `${id}.out${k + 1}.max`, outflow.clone(), '<=', stage.outflow.max);
       context.row(id, `${id}.out${k + 1}.min`, outflow.clone().addExpression(onTimes(stage.outflow.min), -1), '>=', 0);
       this.declareOutflow(context, stage, k, outflow);
 
@@ -64,9 +64,12 @@ export class TurbineContribution implements UnitContribution {
 
     const inflow = this.sections[0];
     context.stream({ from: turbine.inlet, to: id, kind: 'steam', flow: expr().add(inflow, 1), h: this.inletH, p: context.pressure(turbine.inlet) });
-    context.row(id, `${id}.inlet.max`, expr().add(inflow, 1).addExpression(onTimes(turbine.inletFlow.max), -1), '<=', 0);
+    // A stopped turbine passes nothing. With no stated maximum, the steam the whole
+    // plant can raise bounds the flow.
+    const inletMax = Number.isFinite(turbine.inletFlow.max) ? turbine.inletFlow.max : plantSteamCapacity(context);
+    if (this.on || Number.isFinite(inletMax)) context.row(id, `${id}.inlet.max`, expr().add(inflow, 1).addExpression(onTimes(inletMax), -1), '<=', 0);
     if (turbine.inletFlow.min > 0) context.row(id, `${id}.inlet.min`, expr().add(inflow, 1).addExpression(onTimes(turbine.inletFlow.min), -1), '>=', 0);
-    context.row(id, `${id}.power.max`, this.power.clone().addExpression(onTimes(turbine.power.max), -1), '<=', 0);
+    if (Number.isFinite(turbine.power.max)) context.row(id, `${id}.power.max`, this.power.clone().addExpression(onTimes(turbine.power.max), -1), '<=', 0);
     if (turbine.power.min > 0) context.row(id, `${id}.power.min`, this.power.clone().addExpression(onTimes(turbine.power.min), -1), '>=', 0);
 
     if (turbine.drives.kind === 'generator') context.generation.addExpression(this.power);
@@ -74,6 +77,7 @@ export class TurbineContribution implements UnitContribution {
   }
 
   /** Exhaust states of every section for this pass, in series from the inlet. */
+
   private expand(inlet: SteamState): void {
     let state = inlet;
     this.exhaustH = [];
@@ -159,4 +163,15 @@ export class TurbineContribution implements UnitContribution {
     });
     return { id: turbine.id, kind: this.kind, values, binding };
   }
+}
+
+/** Most steam the plant's sources can raise, kg/s: a bound for flows the case leaves open. */
+function plantSteamCapacity(context: BuildContext): number {
+  const plant = context.plant;
+  let total = 0;
+  for (const boiler of plant.boilers) total += boiler.steam.max;
+  for (const boiler of plant.heatRecoveryBoilers) total += boiler.steam.max + (boiler.supplementaryFiring?.maxSteam ?? 0);
+  for (const supply of plant.steamImports) total += supply.flow.max;
+  // Letdown spray and turbine-to-turbine cascades cannot multiply steam: twice the sources is safe.
+  return Number.isFinite(total) ? 2 * total + 1 : 1e4;
 }
