@@ -40,11 +40,12 @@ button { font: inherit; font-size: 12px; }
 
 export const REPORT_SCRIPT = `
 (function () {
-  var wrap = document.querySelector('.diagram-wrap');
   var toggle = document.getElementById('fit-toggle');
-  if (wrap && toggle) {
+  if (toggle) {
     toggle.addEventListener('click', function () {
-      var fit = wrap.classList.toggle('fit');
+      var wraps = document.querySelectorAll('.diagram-wrap');
+      var fit = !(wraps.length > 0 && wraps[0].classList.contains('fit'));
+      wraps.forEach(function (wrap) { wrap.classList.toggle('fit', fit); });
       toggle.textContent = fit ? 'Actual size' : 'Fit to width';
     });
   }

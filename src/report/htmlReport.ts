@@ -11,12 +11,15 @@ import { reportTables, type ReportTable } from './reportTables.js';
 import { reportAssumptions } from './assumptions.js';
 import { REPORT_SCRIPT, REPORT_STYLE } from './htmlAssets.js';
 import { SAFETY_CAUTION } from './safety.js';
+import { annualCostChart, comparisonTable, scenarioCostChart, scenarioSectionHtml, type ScenarioSection } from './scenarioSections.js';
 
 export interface ReportOptions {
   /** e.g. the scenario shown; printed under the title */
   subtitle?: string;
   /** when the report was made (ISO text); left out for reproducible files */
   generatedAt?: string;
+  /** the case's scenarios, solved: compared side by side, each with its own diagram */
+  scenarios?: ScenarioSection[];
 }
 
 /** The display format of a plant's own unit system, currency and atmosphere. */
@@ -36,9 +39,12 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     `<p class="facts">${e(objectiveWords(result.objective))} balance · ${format.money(result.totals.cost_per_h)} per hour · ${e(format.fuelRate(result.totals.fuel_kW))} fuel · ${result.passes.length} passes (${e(result.backend)})${options.generatedAt ? ` · made ${e(options.generatedAt)}` : ''}</p>`,
     '</header>',
   );
-  body.push('<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a> <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>');
+  const scenarios = options.scenarios ?? [];
   body.push(
-    '<section id="diagram"><h2>Steam balance</h2>',
+    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
+  );
+  body.push(
+    `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
     '<p class="hint">Headers from the highest pressure at the top; sources feed them from above, users hang below, turbines and letdowns join them. Click a unit to find its row in the tables. <button type="button" id="fit-toggle">Actual size</button></p>',
     `<div class="diagram-wrap fit">${balanceDiagram(result, format)}</div></section>`,
   );
@@ -46,6 +52,15 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   for (const table of tables.filter((candidate) => candidate.id !== 'audit')) body.push(tableHtml(table));
   body.push('</section>');
   body.push('<section id="charts"><h2>Charts</h2><div class="charts">', costChart(result, format), valueChart(result, format), '</div></section>');
+  if (scenarios.length > 0) {
+    body.push(
+      '<section id="scenarios"><h2>Scenarios</h2>',
+      tableHtml(comparisonTable(scenarios)),
+      `<div class="charts">${annualCostChart(scenarios)}${scenarioCostChart(scenarios)}</div>`,
+      '</section>',
+      ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml)),
+    );
+  }
   const audit = result.audit;
   body.push(
     '<section id="audit"><h2>Audit</h2>',
@@ -83,10 +98,10 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   ].join('\n');
 }
 
-function tableHtml(table: ReportTable): string {
+function tableHtml(table: ReportTable, prefix = 'table'): string {
   const e = escapeMarkup;
   const parts: string[] = [];
-  if (table.title) parts.push(`<h3 id="table-${e(table.id)}">${e(table.title)}</h3>`);
+  if (table.title) parts.push(`<h3 id="${e(prefix)}-${e(table.id)}">${e(table.title)}</h3>`);
   if (table.rows.length === 0) return `${parts.join('')}<p class="none">none</p>`;
   const numeric = table.headings.map((_, column) => column > 0 && table.rows.every((row) => /^[-+]?[\d.]/.test(row[column] ?? '') || row[column] === '-'));
   parts.push(`<table class="data" data-table="${e(table.id)}"><thead><tr>${table.headings.map((heading) => `<th>${e(heading)}</th>`).join('')}</tr></thead><tbody>`);

@@ -85,6 +85,29 @@ describe('steamwright report', () => {
     expect(readdirSync(dir)).toEqual([]);
   });
 
+  it('reports every scenario of the case side by side, and --scenario ID one alone', async () => {
+    const cwd = folder();
+    const all = await runCli(['report', DEMO], { cwd });
+    expect(all.code).toBe(0);
+    const html = readFileSync(join(cwd, 'kestrel-bay-board-mill.report.html'), 'utf8');
+    expect(html).toContain('<section id="scenarios">');
+    for (const id of ['winter', 'summer', 'reduced']) expect(html).toContain(`<section id="scenario-${id}" class="scenario">`);
+    expect(html.match(/class="balance-diagram"/g)).toHaveLength(4);
+    const one = await runCli(['report', DEMO, '--scenario', 'winter'], { cwd });
+    expect(one.stdout).toBe('wrote kestrel-bay-board-mill.winter.report.html\n');
+    const winter = readFileSync(join(cwd, 'kestrel-bay-board-mill.winter.report.html'), 'utf8');
+    expect(winter).toContain('Scenario winter: Winter, full production (3600 h a year)');
+    expect(winter.match(/class="balance-diagram"/g)).toHaveLength(1);
+  });
+
+  it('an unknown --scenario is exit code 2 naming the known ones, and writes nothing', async () => {
+    const cwd = folder();
+    const run = await runCli(['report', DEMO, '--scenario', 'spring'], { cwd });
+    expect(run.code).toBe(2);
+    expect(run.stderr).toMatch(/no scenario "spring" .*known: winter, summer, reduced/);
+    expect(readdirSync(cwd)).toEqual([]);
+  });
+
   it('bad usage is exit code 2: no case, an empty --out, an unknown objective', async () => {
     const dir = folder();
     for (const args of [['report'], ['report', DEMO, '--out', ''], ['report', DEMO, '--objective', 'cheapest']]) {

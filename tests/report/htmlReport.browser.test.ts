@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { htmlReport, layoutDiagram, renderDiagramSvg } from '../../src/report/index.js';
 import { projectRoot } from '../helpers/cli.js';
 import { generatedDiagram } from './helpers/generatedDiagram.js';
-import { DEMO_CASES, HOSTILE_NAME, hostileCaseText, solveDemo, solveText, type Solved } from './helpers/solvedCases.js';
+import { DEMO_CASES, HOSTILE_NAME, hostileCaseText, scenarioSections, solveDemo, solveText, type Solved } from './helpers/solvedCases.js';
 
 export const CHROMIUM = '/usr/bin/chromium';
 const OUTPUT = join(projectRoot, 'tests', 'output');
@@ -42,24 +42,32 @@ async function open(file: string): Promise<PageRun> {
   return run;
 }
 
-/** Pairs of diagram texts whose boxes, as the browser measures them, overlap by more than half a pixel. */
-function overlappingTexts(page: Page, selector: string): Promise<string[]> {
-  return page.evaluate((svgSelector) => {
-    const texts = [...document.querySelectorAll(`${svgSelector} text`)] as SVGTextElement[];
+/**
+ * Pairs of texts within one SVG whose boxes, as the browser measures them
+ * (getBBox), overlap by more than half a pixel. The function runs in the page,
+ * so it is written as page source: the project compiles without DOM types.
+ */
+const OVERLAPPING_TEXTS = `(selector) => {
+  const found = [];
+  for (const svg of document.querySelectorAll(selector)) {
+    const texts = [...svg.querySelectorAll('text')];
     const boxes = texts.map((text) => text.getBBox());
-    const found: string[] = [];
     for (let first = 0; first < boxes.length; first++) {
       for (let second = first + 1; second < boxes.length; second++) {
         const a = boxes[first];
         const b = boxes[second];
         const tolerance = 0.5;
         if (a.x + tolerance < b.x + b.width && b.x + tolerance < a.x + a.width && a.y + tolerance < b.y + b.height && b.y + tolerance < a.y + a.height) {
-          found.push(`"${texts[first].textContent}" / "${texts[second].textContent}"`);
+          found.push('"' + texts[first].textContent + '" / "' + texts[second].textContent + '"');
         }
       }
     }
-    return found;
-  }, selector);
+  }
+  return found;
+}`;
+
+function overlappingTexts(page: Page, selector: string): Promise<string[]> {
+  return page.evaluate(`(${OVERLAPPING_TEXTS})(${JSON.stringify(selector)})`) as Promise<string[]>;
 }
 
 function caseIds(solved: Solved): string[] {
@@ -87,13 +95,16 @@ afterAll(async () => {
 });
 
 describe.each(DEMO_CASES)('the report of %s in chromium', (name) => {
-  let solved: Solved;
+  let solved: Solved & { scenarioCount: number };
   let run: PageRun;
   const file = join(OUTPUT, `${name}.report.html`);
 
   beforeAll(async () => {
-    solved = await solveDemo(name);
-    writeFileSync(file, htmlReport(solved.plant, solved.result));
+    solved = { ...(await solveDemo(name)), scenarioCount: 0 };
+    // The board mill's report carries its three scenarios side by side.
+    const scenarios = await scenarioSections(name);
+    solved.scenarioCount = scenarios.length;
+    writeFileSync(file, htmlReport(solved.plant, solved.result, { scenarios }));
     run = await open(file);
   });
 
@@ -111,27 +122,31 @@ describe.each(DEMO_CASES)('the report of %s in chromium', (name) => {
     for (const id of caseIds(solved)) expect(ids, id).toContain(id);
   });
 
+  it('draws one diagram for the plant and one for each scenario', async () => {
+    expect(await run.page.locator('svg.balance-diagram').count()).toBe(1 + solved.scenarioCount);
+  });
+
   it('has no two diagram labels overlapping as drawn', async () => {
     expect(await overlappingTexts(run.page, 'svg.balance-diagram')).toEqual([]);
     expect(await run.page.locator('svg.balance-diagram text').count()).toBeGreaterThan(10);
   });
 
   it('has no overlapping text in its charts', async () => {
-    for (const chart of ['#chart-cost', '#chart-value']) expect(await overlappingTexts(run.page, chart), chart).toEqual([]);
+    for (const chart of ['#chart-cost', '#chart-value', ...(solved.scenarioCount > 0 ? ['#chart-annual-cost', '#chart-scenario-cost'] : [])]) expect(await overlappingTexts(run.page, chart), chart).toEqual([]);
   });
 
   it('finds a unit\'s table row when the unit is clicked in the diagram', async () => {
     const user = solved.plant.users[0].id;
     await run.page.locator(`svg.balance-diagram [data-id="${user}"] text`).first().click();
-    await expect.poll(() => run.page.locator(`table[data-table="users"] tr[data-id="${user}"]`).getAttribute('class')).toBe('picked');
+    await expect.poll(() => run.page.locator(`table[data-table="users"] tr[data-id="${user}"]`).first().getAttribute('class')).toBe('picked');
   });
 
   it('saves screenshots of the whole report and of the diagram', async () => {
-    await run.page.evaluate(() => window.scrollTo(0, 0));
+    await run.page.evaluate('window.scrollTo(0, 0)');
     const whole = join(OUTPUT, `${name}.report.png`);
     const diagram = join(OUTPUT, `${name}.diagram.png`);
     await run.page.screenshot({ path: whole, fullPage: true });
-    await run.page.locator('.diagram-wrap').screenshot({ path: diagram });
+    await run.page.locator('.diagram-wrap').first().screenshot({ path: diagram });
     expect(existsSync(whole) && existsSync(diagram)).toBe(true);
   });
 });

@@ -5,12 +5,14 @@ import type { Argv, CommandModule } from 'yargs';
 import { getBackend, type BackendName } from '../../lp/index.js';
 import { formatIssue, loadCase } from '../../model/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
-import { balanceDiagram, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, writeFileAtomic } from '../../report/index.js';
-import { CliError, EXIT_PROBLEMS } from '../errors.js';
+import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, writeFileAtomic, type ScenarioSection } from '../../report/index.js';
+import { compareScenarios } from '../../scenarios/index.js';
+import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
 interface ReportArgs {
   case: string;
+  scenario?: string;
   out?: string;
   svg?: string;
   md?: string;
@@ -19,9 +21,9 @@ interface ReportArgs {
   solver: BackendName;
 }
 
-/** "cases/mill.yaml" -> "mill.report.html" (in the current directory). */
-export function defaultReportName(casePath: string): string {
-  return `${basename(casePath, extname(casePath))}.report.html`;
+/** "cases/mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
+export function defaultReportName(casePath: string, scenario?: string): string {
+  return `${basename(casePath, extname(casePath))}${scenario ? `.${scenario}` : ''}.report.html`;
 }
 
 const toStdout = (target: string | undefined): boolean => target === '' || target === '-';
@@ -32,6 +34,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
   builder: (yargs: Argv<object>) =>
     yargs
       .positional('case', { type: 'string', demandOption: true, describe: 'the plant case file (YAML)' })
+      .option('scenario', { type: 'string', describe: 'report this scenario of the case instead of the plant as written and all scenarios' })
       .option('out', { alias: 'o', type: 'string', describe: 'the HTML file to write (default: CASE-NAME.report.html in the current directory)' })
       .option('svg', { type: 'string', describe: 'also write the balance diagram alone as SVG to FILE' })
       .option('md', { type: 'string', describe: 'write the tables as Markdown to FILE (no FILE or "-": standard output)' })
@@ -40,6 +43,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
       .example('$0 report cases/mill.yaml', 'write mill.report.html here')
       .example('$0 report cases/mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
+      .example('$0 report cases/mill.yaml --scenario winter', 'one scenario: mill.winter.report.html')
       .example('$0 report cases/mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
   handler: async (args) => {
     for (const option of ['out', 'svg'] as const) {
@@ -51,19 +55,41 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
       throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; no report was written`, EXIT_PROBLEMS);
     }
-    const plant = loaded.plant;
+    const variants = loaded.variants;
+    let plant = loaded.plant;
+    let subtitle: string | undefined;
+    if (args.scenario !== undefined) {
+      const scenario = variants.implicitBase ? undefined : variants.scenarios.find((entry) => entry.id === args.scenario);
+      if (!scenario) {
+        const known = variants.implicitBase ? 'the case has no scenarios' : `known: ${variants.scenarios.map((entry) => entry.id).join(', ')}`;
+        throw new CliError(`--scenario: no scenario "${args.scenario}" in ${args.case}; ${known}`, EXIT_USAGE);
+      }
+      plant = scenario.plant;
+      subtitle = `Scenario ${scenario.id}: ${scenario.name} (${scenario.hours} h a year)`;
+    }
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
     const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw new CliError(`${args.case}: ${outcome.message}`, EXIT_PROBLEMS);
+    if (!outcome.ok) throw new CliError(`${args.case}${args.scenario ? ` scenario "${args.scenario}"` : ''}: ${outcome.message}`, EXIT_PROBLEMS);
     const result = plantResult(outcome);
     const format = plantDisplayFormat(plant);
 
+    // Without --scenario, a case with scenarios reports them all side by side.
+    const sections: ScenarioSection[] = [];
+    if (args.scenario === undefined && !variants.implicitBase) {
+      const comparison = await compareScenarios(variants, [], { objective, backend: args.solver });
+      for (const [index, run] of comparison.runs.entries()) {
+        if (!run.ok) throw new CliError(`${args.case} scenario "${run.id}": ${run.message}`, EXIT_PROBLEMS);
+        sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
+      }
+    }
+
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
+    if (sections.length > 0) tables.push(comparisonTable(sections));
     const outputs: { path: string; text: string }[] = [];
     const printed: string[] = [];
     const wantsHtml = args.out !== undefined || (args.svg === undefined && args.md === undefined && args.csv === undefined);
-    if (wantsHtml) outputs.push({ path: args.out ?? defaultReportName(args.case), text: htmlReport(plant, result) });
+    if (wantsHtml) outputs.push({ path: args.out ?? defaultReportName(args.case, args.scenario), text: htmlReport(plant, result, { subtitle, scenarios: sections }) });
     if (args.svg !== undefined) outputs.push({ path: args.svg, text: `${balanceDiagram(result, format)}\n` });
     if (args.md !== undefined) {
       const text = tablesMarkdown(result.plant, tables);

@@ -79,6 +79,8 @@ export interface PlacedItem {
 export interface PlacedNode {
   node: BottomNode;
   box: Box;
+  /** centre of a vent mark beside the box, when the node vents */
+  ventMark?: { x: number; y: number };
   label: PlacedLabel;
 }
 
@@ -232,19 +234,23 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
   for (const node of model.bottom) {
     const width = labelWidth(node.lines) + 2 * NODE_PAD;
     const height = blockHeight(node.lines) + 2 * NODE_PAD;
-    if (x + width > rowLimit && x > MARGIN) {
+    const mark = node.alarmLines.length > 0 ? GLYPH + 10 : 0;
+    if (x + width + mark > rowLimit && x > MARGIN) {
       x = MARGIN;
       rowTop += rowHeight + 18;
       rowHeight = 0;
     }
     const box = { x, y: rowTop, width, height };
-    nodes.push({ node, box, label: labelAt(node.id, node.lines, x + NODE_PAD, rowTop + NODE_PAD + fontSize * 0.95, fontSize, true, node.alarmLines) });
-    x += width + COLUMN_GAP;
+    const placed: PlacedNode = { node, box, label: labelAt(node.id, node.lines, x + NODE_PAD, rowTop + NODE_PAD + fontSize * 0.95, fontSize, true, node.alarmLines) };
+    // The mark sits level with the first vent line, just right of the box.
+    if (mark > 0) placed.ventMark = { x: x + width + 6 + GLYPH / 2, y: placed.label.baseline + node.alarmLines[0] * lineStep - fontSize * 0.35 };
+    nodes.push(placed);
+    x += width + mark + COLUMN_GAP;
     rowHeight = Math.max(rowHeight, height);
   }
   const legendY = rowTop + rowHeight + 26;
   const legendWidth = LEGEND.reduce((total, [, text]) => total + LEGEND_SAMPLE + 6 + textWidth(text, fontSize) + COLUMN_GAP, MARGIN);
-  const width = Math.max(rowLimit, legendWidth, textWidth(model.title, TITLE_FONT, true) + MARGIN, ...nodes.map((node) => node.box.x + node.box.width)) + MARGIN;
+  const width = Math.max(rowLimit, legendWidth, textWidth(model.title, TITLE_FONT, true) + MARGIN, ...nodes.map((node) => node.box.x + node.box.width + (node.ventMark ? GLYPH + 10 : 0))) + MARGIN;
   const height = legendY + 20 + MARGIN;
 
   const legend: DiagramLayout['legend'] = [];

@@ -48,7 +48,7 @@ export function renderDiagramSvg(layout: DiagramLayout, description: string): st
       parts.push(`<line x1="${f(box.x + 14)}" x2="${f(box.x + 14)}" y1="${f(collector.y)}" y2="${f(box.y)}" stroke="${WATER_INK}" stroke-width="2" stroke-dasharray="${WATER_DASH}"/>`);
     }
     parts.push(
-      `<g class="node node-${kind}" data-id="${escapeMarkup(placed.node.id)}"><rect x="${f(box.x)}" y="${f(box.y)}" width="${f(box.width)}" height="${f(box.height)}" rx="${kind === 'flashTank' ? 10 : 4}" fill="#ffffff" stroke="${HEADER_INK}" stroke-width="${kind === 'deaerator' ? 2 : 1.3}"${dashed ? ' stroke-dasharray="4 3"' : ''}/>${textSvg(placed.label, 'node-label')}</g>`,
+      `<g class="node node-${kind}" data-id="${escapeMarkup(placed.node.id)}"><rect x="${f(box.x)}" y="${f(box.y)}" width="${f(box.width)}" height="${f(box.height)}" rx="${kind === 'flashTank' ? 10 : 4}" fill="#ffffff" stroke="${HEADER_INK}" stroke-width="${kind === 'deaerator' ? 2 : 1.3}"${dashed ? ' stroke-dasharray="4 3"' : ''}/>${textSvg(placed.label, 'node-label')}${placed.ventMark ? glyphSvg('vent', placed.ventMark.x, placed.ventMark.y, GLYPH) : ''}</g>`,
     );
   }
   parts.push('</g>');

@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { expect } from 'vitest';
 import { loadCaseText, type Plant } from '../../../src/model/index.js';
 import { plantResult, solvePlant, type PlantResult } from '../../../src/plant/index.js';
+import type { ScenarioSection } from '../../../src/report/index.js';
 import { projectRoot } from '../../helpers/cli.js';
 
 export const DEMO_CASES = ['kestrel-bay-board-mill', 'millbrook-creamery'] as const;
@@ -35,6 +36,19 @@ export async function solveText(text: string, fileName = 'case.yaml'): Promise<S
   expect(outcome.ok, outcome.ok ? '' : outcome.message).toBe(true);
   if (!outcome.ok) throw new Error(outcome.message);
   return { plant: loaded.plant, result: plantResult(outcome) };
+}
+
+/** Every scenario of a demo case, solved in process (none when the case has no scenarios). */
+export async function scenarioSections(name: string): Promise<ScenarioSection[]> {
+  const loaded = loadCaseText(demoCaseText(name), `${name}.yaml`);
+  if (!loaded.ok || loaded.variants.implicitBase) return [];
+  const sections: ScenarioSection[] = [];
+  for (const scenario of loaded.variants.scenarios) {
+    const solved = await solvePlant(scenario.plant);
+    if (!solved.ok) throw new Error(`scenario ${scenario.id}: ${solved.message}`);
+    sections.push({ id: scenario.id, name: scenario.name, hours: scenario.hours, plant: scenario.plant, result: plantResult(solved) });
+  }
+  return sections;
 }
 
 export function solveDemo(name: string): Promise<Solved> {
