@@ -26,6 +26,8 @@ table.data tr.picked td { outline: 2px solid var(--ink); background: #fff6d8; }
 .caution { border: 2px solid var(--ink); padding: 10px 14px; background: var(--paper); max-width: 70em; }
 .none { color: var(--muted); }
 button { font: inherit; font-size: 12px; }
+details { margin: 8px 0; }
+summary { cursor: pointer; font-weight: bold; }
 @media print {
   body { background: #ffffff; padding: 0; font-size: 10pt; }
   nav, .hint button { display: none; }
@@ -35,6 +37,7 @@ button { font: inherit; font-size: 12px; }
   section#diagram { break-before: avoid; }
   table.data { break-inside: auto; }
   tr { break-inside: avoid; }
+  details > * { display: block; }
 }
 `;
 

@@ -82,7 +82,9 @@ export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table:
     `<section id="${e(prefix)}" class="scenario"><h2>Scenario ${e(section.id)}: ${e(section.name)}</h2>`,
     `<p class="facts">${section.hours} h a year · ${format.money(section.result.totals.cost_per_h)} per hour · audit: largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, energy ${audit.max_energy_residual_kW.toExponential(2)} kW</p>`,
     `<div class="diagram-wrap fit">${balanceDiagram(section.result, format)}</div>`,
+    `<details><summary>Tables of scenario ${e(section.id)}</summary>`,
     ...tables.map((table) => tableHtml(table, prefix)),
+    '</details>',
     '</section>',
   ].join('\n');
 }
