@@ -59,13 +59,13 @@ export interface Kpis {
   boiler_fuel_to_steam_efficiency: number | null;
   /** condensate returned over process steam used */
   condensate_return_fraction: number | null;
-  /** steam through letdowns over steam raised */
+  /** of the steam stepped down in pressure, the share through letdown valves rather than turbines */
   let_down_fraction: number | null;
   /** steam vented (headers, flash tanks, deaerator) over steam raised */
   vented_fraction: number | null;
   /** turbine power per tonne of throttle steam, kWh/t */
   power_per_throttle_t_kWh: number | null;
-  /** fuel beyond what the process heat alone would need at the boilers' efficiency, per kWh generated: kJ/kWh */
+  /** fuel to replace the heat the turbines take from the steam (work and condenser), at boiler efficiency, per kWh generated: kJ/kWh */
   fuel_chargeable_to_power_kJ_per_kWh: number | null;
   /** (useful process heat + net power) / fuel energy; waste heat is not fuel, so this can pass 100 % */
   site_useful_energy_efficiency: number | null;
@@ -186,11 +186,13 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
   const kpis: Kpis = {
     boiler_fuel_to_steam_efficiency: boilerEfficiency,
     condensate_return_fraction: ratio(sum('user', 'condensate_returned_kg_s'), processSteam),
-    let_down_fraction: ratio(totals.let_down_kg_s, steamRaised),
+    let_down_fraction: ratio(totals.let_down_kg_s, totals.let_down_kg_s + throttle),
     vented_fraction: ratio(vented, steamRaised),
     power_per_throttle_t_kWh: ratio(turbinePower, throttle * T_PER_H_PER_KG_S),
+    // Common practice, no single source: the heat the turbines take out of the steam
+    // (shaft work plus condenser duty) must be raised again by the boilers.
     fuel_chargeable_to_power_kJ_per_kWh:
-      boilerEfficiency && generated > 0 ? ((fuel - processHeat / boilerEfficiency) * 3600) / generated : null,
+      boilerEfficiency && generated > 0 ? (((audit.site.turbine_work_kW + audit.site.condenser_kW) / boilerEfficiency) * 3600) / generated : null,
     site_useful_energy_efficiency: ratio(processHeat + generated - loads, fuel),
     site_useful_energy_efficiency_all_inputs: ratio(processHeat + generated - loads, fuel + audit.site.waste_heat_kW + audit.site.imported_steam_kW),
   };

@@ -140,7 +140,8 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
       [
         ['boiler fuel-to-steam efficiency', percent(kpis.boiler_fuel_to_steam_efficiency)],
         ['condensate return', percent(kpis.condensate_return_fraction)],
-        ['steam let down / vented', `${percent(kpis.let_down_fraction)} / ${percent(kpis.vented_fraction)}`],
+        ['steam stepped down through letdowns', percent(kpis.let_down_fraction)],
+        ['steam vented / raised', percent(kpis.vented_fraction)],
         [
           `power per ${perMass} of throttle steam`,
           kpis.power_per_throttle_t_kWh === null
