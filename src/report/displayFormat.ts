@@ -1,10 +1,12 @@
 // How report figures are shown in the case's unit system: one set of
 // formatters for the diagram, the HTML, Markdown and CSV tables.
-import { formatQuantity, type UnitSystem } from '../units/index.js';
+import { displayUnit, formatQuantity, fromSI, type UnitSystem } from '../units/index.js';
 
 /** 1 kW = 3412.1416 Btu/h (Btu, International Table). */
 const BTU_PER_H_PER_KW = 3412.1416;
 const KG_PER_LB = 0.45359237;
+/** 1 Btu(IT) = 1.05505585262 kJ. */
+const KJ_PER_BTU = 1.05505585262;
 
 export interface DisplayFormat {
   system: UnitSystem;
@@ -22,6 +24,20 @@ export interface DisplayFormat {
   /** a value per tonne shown per t (SI) or per klb (US); null as "n/a" */
   valuePerMass(perT: number | null): string;
   percent(fraction: number | null): string;
+  /** For tables whose cells are bare numbers under a heading with the unit. */
+  flowUnit: string;
+  flowValue(kg_s: number): number;
+  fuelRateUnit: string;
+  fuelRateValue(kW: number): number;
+  enthalpyUnit: string;
+  /** an enthalpy or an enthalpy difference (the scales share their zero) */
+  enthalpyValue(kJ_kg: number): number;
+  /** turbine steam rate: kg/kWh (SI) or lb/kWh (US) */
+  steamRate(kg_kWh: number): string;
+  /** power per tonne of steam, shown per t or per klb; null as "n/a" */
+  powerPerMass(kWh_t: number | null): string;
+  /** fuel per unit of power: MJ/kWh (SI) or Btu/kWh (US); null as "n/a" */
+  fuelPerPower(kJ_kWh: number | null): string;
 }
 
 /** Values within solver round-off of zero show as zero. */
@@ -48,6 +64,21 @@ export function displayFormat(system: UnitSystem, currency: string, atmosphericP
       return `${value.toFixed(2)} ${currency}/${system === 'si' ? 't' : 'klb'}`;
     },
     percent: (fraction) => (fraction === null ? 'n/a' : `${(fraction * 100).toFixed(1)} %`),
+    flowUnit: displayUnit('massFlow', system),
+    flowValue: (kg_s) => fromSI(clean(kg_s), 'massFlow', displayUnit('massFlow', system)),
+    fuelRateUnit: system === 'si' ? 'MW' : 'MMBtu/h',
+    fuelRateValue: (kW) => (system === 'si' ? clean(kW) / 1000 : (clean(kW) * BTU_PER_H_PER_KW) / 1e6),
+    enthalpyUnit: displayUnit('specificEnthalpy', system),
+    enthalpyValue: (kJ_kg) => fromSI(kJ_kg, 'specificEnthalpy', displayUnit('specificEnthalpy', system)),
+    steamRate: (kg_kWh) => (system === 'si' ? `${kg_kWh.toFixed(2)} kg/kWh` : `${(kg_kWh / KG_PER_LB).toFixed(2)} lb/kWh`),
+    powerPerMass: (kWh_t) => {
+      if (kWh_t === null) return 'n/a';
+      return `${(system === 'si' ? kWh_t : kWh_t * KG_PER_LB).toFixed(1)} kWh/${system === 'si' ? 't' : 'klb'}`;
+    },
+    fuelPerPower: (kJ_kWh) => {
+      if (kJ_kWh === null) return 'n/a';
+      return system === 'si' ? `${(kJ_kWh / 1000).toFixed(2)} MJ/kWh` : `${(kJ_kWh / KJ_PER_BTU).toFixed(0)} Btu/kWh`;
+    },
   };
 }
 

@@ -1,6 +1,6 @@
 // The readable summary `steamwright solve` prints, in the case's unit system.
 import type { PlantResult } from '../plant/index.js';
-import { formatQuantity, type UnitSystem } from '../units/index.js';
+import { displayFormat } from './displayFormat.js';
 import { SAFETY_CAUTION } from './safety.js';
 import { table } from './table.js';
 
@@ -9,24 +9,8 @@ export interface SummaryOptions {
 }
 
 export function solveSummary(result: PlantResult, options: SummaryOptions): string {
-  const system: UnitSystem = result.unit_system;
-  const atm = { atmosphericPressure_MPa: options.atmosphericPressure_MPa };
-  // Values within solver round-off of zero print as zero.
-  const clean = (value: number): number => (Math.abs(value) < 1e-7 ? 0 : value);
-  const flow = (kgs: number): string => formatQuantity(clean(kgs), 'massFlow', system);
-  const power = (kw: number): string => formatQuantity(clean(kw), 'power', system);
-  // Fuel is a heat rate: MW in SI, MMBtu/h in US units (1 kW = 3412.1416 Btu/h, Btu(IT)).
-  const fuelRate = (kw: number): string =>
-    system === 'si' ? `${(clean(kw) / 1000).toFixed(2)} MW` : `${(clean(kw) * 0.0034121416).toFixed(2)} MMBtu/h`;
-  const steamRate = (kgPerKWh: number): string =>
-    system === 'si' ? `${kgPerKWh.toFixed(2)} kg/kWh` : `${(kgPerKWh / 0.45359237).toFixed(2)} lb/kWh`;
-  const money = (value: number): string => `${value.toLocaleString('en-US', { maximumFractionDigits: 0 })} ${result.currency}`;
-  const perMass = system === 'si' ? 't' : 'klb';
-  const valuePerMass = (perT: number | null): string => {
-    if (perT === null) return 'n/a';
-    const value = system === 'si' ? perT : perT * 0.45359237;
-    return `${value.toFixed(2)} ${result.currency}/${perMass}`;
-  };
+  const format = displayFormat(result.unit_system, result.currency, options.atmosphericPressure_MPa);
+  const { flow, power, fuelRate, money, valuePerMass, percent } = format;
   const lines: string[] = [];
   lines.push(`${result.plant}: ${objectiveWords(result.objective)} balance, ${result.passes.length} passes (${result.backend})`);
   lines.push('');
@@ -37,8 +21,8 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
       ['header', 'pressure', 'temperature', 'in', 'out', 'vent', 'marginal steam value'],
       result.headers.map((header) => [
         header.id,
-        formatQuantity(header.pressure_MPa, 'pressure', system, atm),
-        formatQuantity(header.T_K, 'temperature', system),
+        format.pressure(header.pressure_MPa),
+        format.temperature(header.T_K),
         flow(header.inflow_kg_s),
         flow(header.outflow_kg_s),
         header.vent_kg_s > 1e-9 ? flow(header.vent_kg_s) : '-',
@@ -87,7 +71,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
           unit.id,
           flow(Number(unit.values.inlet_kg_s ?? 0)),
           power(Number(unit.values.power_kW ?? 0)),
-          typeof unit.values.steam_rate_kg_kWh === 'number' ? steamRate(unit.values.steam_rate_kg_kWh) : '-',
+          typeof unit.values.steam_rate_kg_kWh === 'number' ? format.steamRate(unit.values.steam_rate_kg_kWh) : '-',
           unit.binding.join(', ') || '-',
         ]),
       ),
@@ -132,7 +116,6 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
     ),
   );
   const kpis = result.kpis;
-  const percent = (value: number | null): string => (value === null ? 'n/a' : `${(value * 100).toFixed(1)} %`);
   lines.push('', 'Key figures');
   lines.push(
     table(
@@ -142,20 +125,8 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         ['condensate return', percent(kpis.condensate_return_fraction)],
         ['steam stepped down through letdowns', percent(kpis.let_down_fraction)],
         ['steam vented / raised', percent(kpis.vented_fraction)],
-        [
-          `power per ${perMass} of throttle steam`,
-          kpis.power_per_throttle_t_kWh === null
-            ? 'n/a'
-            : `${(system === 'si' ? kpis.power_per_throttle_t_kWh : kpis.power_per_throttle_t_kWh * 0.45359237).toFixed(1)} kWh/${perMass}`,
-        ],
-        [
-          'fuel chargeable to power',
-          kpis.fuel_chargeable_to_power_kJ_per_kWh === null
-            ? 'n/a'
-            : system === 'si'
-              ? `${(kpis.fuel_chargeable_to_power_kJ_per_kWh / 1000).toFixed(2)} MJ/kWh`
-              : `${((kpis.fuel_chargeable_to_power_kJ_per_kWh / 1.05505585262)).toFixed(0)} Btu/kWh`,
-        ],
+        [`power per ${format.perMass} of throttle steam`, format.powerPerMass(kpis.power_per_throttle_t_kWh)],
+        ['fuel chargeable to power', format.fuelPerPower(kpis.fuel_chargeable_to_power_kJ_per_kWh)],
         ['site useful-energy efficiency (on fuel)', percent(kpis.site_useful_energy_efficiency)],
         ['  on fuel, waste heat and imported steam', percent(kpis.site_useful_energy_efficiency_all_inputs)],
       ],
