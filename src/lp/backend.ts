@@ -10,6 +10,8 @@ export interface SolveOptions {
   mipRelativeGap?: number;
   /** Tolerance of our own primal check of every returned point; default 1e-6 relative. */
   feasibilityTolerance?: number;
+  /** Whether a MIP's duals are computed, from the LP with its integers fixed (one more solve); default true. */
+  mipDuals?: boolean;
 }
 
 /** One solver behind one small interface; results are keyed by our own names. */

@@ -93,6 +93,8 @@ function solveOnce(
       outcome.rowDual = solution.rowDual;
       outcome.colDual = solution.colDual;
       outcome.dualSource = 'lp';
+    } else if (compiled.isMip && code === optimal && options.mipDuals === false) {
+      outcome.dualsMissingReason = 'MIP duals were not asked for (mipDuals: false)';
     } else if (compiled.isMip && code === optimal) {
       const fixed = fixedLpDuals(highs, model, options);
       if (fixed.rowDual) {

@@ -45,6 +45,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   const headerEnthalpy = initialHeaderEnthalpy(plant);
   const passes: PassRecord[] = [];
   const solveOptions = { timeLimitSeconds: plant.solver.timeLimit, mipRelativeGap: plant.solver.mipGap };
+  // Duals matter only for the pass that is kept; a kept MIP pass gets them from its LP with integers fixed.
+  const passOptions = { ...solveOptions, mipDuals: false };
 
   try {
     // On/off decisions usually settle in the first passes. Once two passes agree
@@ -54,8 +56,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
     let previousIntegers: Map<string, number> | null = null;
     let converged = false;
     for (let passNumber = 1; passNumber <= maxPasses; passNumber += 1) {
-      const pass = buildPass(plant, contributions, headerEnthalpy, objective, false, fixed);
-      const result = await backend.solve(pass.context.model, solveOptions);
+      let pass = buildPass(plant, contributions, headerEnthalpy, objective, false, fixed);
+      let result = await backend.solve(pass.context.model, passOptions);
       if (result.status !== 'optimal') {
         if (fixed) {
           // The held decisions no longer fit the moved points: decide them again.
@@ -71,7 +73,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
         return { ok: false, plant, reason: 'solver', message: `the solver (${result.backend}) ended "${result.status}"${result.message ? `: ${result.message}` : ''}`, passes };
       }
       const integers: Map<string, number> = fixed ?? integerValues(pass, result);
-      const solution = passSolution(result);
+      let solution = passSolution(result);
       const changes = updatePoints(plant, pass, solution, contributions, headerEnthalpy);
       const enthalpyChanges = changes.filter((change) => change.unit === 'kJ/kg');
       const largest = changes.reduce<PointChange | null>((worst, change) => (worst === null || change.change > worst.change ? change : worst), null);
@@ -85,7 +87,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       if (!converged) continue;
       if (pass.context.fixedIntegers) {
         const check = buildPass(plant, contributions, pass.context.headerEnthalpy, objective);
-        const confirmed = await backend.solve(check.context.model, solveOptions);
+        const confirmed = await backend.solve(check.context.model, passOptions);
         const confirmedIntegers = confirmed.status === 'optimal' ? integerValues(check, confirmed) : null;
         const better = confirmed.status === 'optimal' && result.objective !== null && confirmed.objective !== null && improves(confirmed.objective, result.objective, pass);
         if (!confirmedIntegers || (better && !sameValues(confirmedIntegers, pass.context.fixedIntegers))) {
@@ -94,6 +96,16 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
           previousIntegers = confirmedIntegers;
           converged = false;
           continue;
+        }
+      }
+      if (!result.dualsAvailable && pass.context.model.isMip) {
+        // The same pass with its integers held is a linear program with the same optimum, and its duals.
+        const held = buildPass(plant, contributions, pass.context.headerEnthalpy, objective, false, integers);
+        const heldResult = await backend.solve(held.context.model, solveOptions);
+        if (heldResult.status === 'optimal') {
+          pass = held;
+          result = heldResult;
+          solution = passSolution(heldResult);
         }
       }
       const audit = auditPass(pass, solution, contributions.map((unit) => unit.report(solution)));

@@ -69,5 +69,10 @@ describe('MIP', () => {
       expect(Math.abs(mip.shadowPrice(row) - fixed.shadowPrice(row)), row).toBeLessThan(1e-9);
     }
     expect(mip.mipNodes).not.toBeNull();
+    // Asked not to, the backend skips the fixed-LP solve and says why there are no duals.
+    const bare = await getBackend('highs').solve(build(), { mipDuals: false });
+    expect(bare.objective).toBe(mip.objective);
+    expect(bare.dualsAvailable).toBe(false);
+    expect(() => bare.shadowPrice('demand')).toThrow(/mipDuals: false/);
   });
 });
