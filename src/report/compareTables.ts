@@ -1,10 +1,11 @@
 // Scenarios side by side: one row per figure, one column per scenario, and
 // each later column's difference against the first. Text, CSV and Markdown
-// come from the same rows. Flows in t/h, power in kW, money in the currency.
+// come from the same rows, in the case's unit system (flows in t/h or klb/h,
+// fuel in MW or MMBtu/h, steam values per t or per klb); power in kW, money
+// in the currency.
 import type { ScenarioRun } from '../scenarios/index.js';
+import { perMassValue, type DisplayFormat } from './displayFormat.js';
 import { table } from './table.js';
-
-const T_PER_H = 3.6;
 
 interface FigureRow {
   label: string;
@@ -12,7 +13,8 @@ interface FigureRow {
   digits: number;
 }
 
-function rowsOf(runs: ScenarioRun[], currency: string): FigureRow[] {
+function rowsOf(runs: ScenarioRun[], format: DisplayFormat): FigureRow[] {
+  const { currency, flowUnit, flowValue } = format;
   const solved = runs.flatMap((run) => (run.ok ? [run] : []));
   const pick = (label: string, digits: number, value: (run: Extract<ScenarioRun, { ok: true }>) => number | null): FigureRow => ({
     label, digits, values: runs.map((run) => (run.ok ? value(run) : null)),
@@ -22,39 +24,50 @@ function rowsOf(runs: ScenarioRun[], currency: string): FigureRow[] {
     pick(`cost per hour, ${currency}`, 2, (run) => run.cost_per_h),
     pick(`cost per year, ${currency}`, 0, (run) => run.cost_per_year),
     ...(['fuel', 'power', 'steam', 'water', 'carbon'] as const).map((component) => pick(`  ${component}, ${currency}/h`, 2, (run) => run.totals.cost_by_component_per_h[component])),
-    pick('fuel, MW', 3, (run) => run.totals.fuel_kW / 1000),
+    pick(`fuel, ${format.fuelRateUnit}`, format.system === 'si' ? 3 : 2, (run) => format.fuelRateValue(run.totals.fuel_kW)),
     pick('power generated, kW', 0, (run) => run.totals.power_generated_kW),
     pick('power imported, kW', 0, (run) => run.totals.power_imported_kW),
     pick('power exported, kW', 0, (run) => run.totals.power_exported_kW),
-    pick('steam raised, t/h', 2, (run) => run.totals.steam_raised_kg_s * T_PER_H),
-    pick('let down, t/h', 2, (run) => run.totals.let_down_kg_s * T_PER_H),
-    pick('vented, t/h', 3, (run) => run.totals.vented_kg_s * T_PER_H),
-    pick('makeup, t/h', 2, (run) => run.totals.makeup_kg_s * T_PER_H),
+    pick(`steam raised, ${flowUnit}`, 2, (run) => flowValue(run.totals.steam_raised_kg_s)),
+    pick(`let down, ${flowUnit}`, 2, (run) => flowValue(run.totals.let_down_kg_s)),
+    pick(`vented, ${flowUnit}`, 3, (run) => flowValue(run.totals.vented_kg_s)),
+    pick(`makeup, ${flowUnit}`, 2, (run) => flowValue(run.totals.makeup_kg_s)),
     pick('CO2, t/h', 3, (run) => run.totals.co2_kg_per_h / 1000),
   ];
   const unitIds = [...new Set(solved.flatMap((run) => run.units.map((unit) => `${unit.kind}:${unit.id}`)))];
   for (const key of unitIds) {
     const [kind, id] = key.split(':');
-    const figure = kind === 'turbine' ? ['power_kW', 'kW', 0] : ['boiler', 'heatRecoveryBoiler', 'steamImport', 'letdown'].includes(kind) ? ['steam_kg_s', 't/h', 2] : null;
-    if (!figure) continue;
-    const [field, unit, digits] = figure as [string, string, number];
-    rows.push(pick(`${id} (${kind === 'turbine' ? 'power' : kind === 'letdown' ? 'letdown' : 'steam'}), ${unit}`, digits, (run) => {
+    const isTurbine = kind === 'turbine';
+    if (!isTurbine && !['boiler', 'heatRecoveryBoiler', 'steamImport', 'letdown'].includes(kind)) continue;
+    const field = isTurbine ? 'power_kW' : 'steam_kg_s';
+    rows.push(pick(`${id} (${isTurbine ? 'power' : kind === 'letdown' ? 'letdown' : 'steam'}), ${isTurbine ? 'kW' : flowUnit}`, isTurbine ? 0 : 2, (run) => {
       const value = run.units.find((entry) => entry.id === id)?.values[field];
       if (typeof value !== 'number') return 0;
-      return unit === 't/h' ? value * T_PER_H : value;
+      return isTurbine ? value : flowValue(value);
     }));
   }
   const headerIds = [...new Set(solved.flatMap((run) => run.headers.map((header) => header.id)))];
   for (const id of headerIds) {
-    rows.push(pick(`${id} marginal steam value, ${currency}/t`, 2, (run) => run.headers.find((header) => header.id === id)?.marginal_value_per_t ?? null));
-    rows.push(pick(`${id} vent, t/h`, 3, (run) => (run.headers.find((header) => header.id === id)?.vent_kg_s ?? 0) * T_PER_H));
+    rows.push(pick(`${id} marginal steam value, ${currency}/${format.perMass}`, 2, (run) => {
+      const value = run.headers.find((header) => header.id === id)?.marginal_value_per_t ?? null;
+      return value === null ? null : perMassValue(value, format.system);
+    }));
+    rows.push(pick(`${id} vent, ${flowUnit}`, 3, (run) => flowValue(run.headers.find((header) => header.id === id)?.vent_kg_s ?? 0)));
   }
   const percent = (value: number | null): number | null => (value === null ? null : value * 100);
   rows.push(
     pick('boiler efficiency, %', 1, (run) => percent(run.kpis.boiler_fuel_to_steam_efficiency)),
     pick('condensate return, %', 1, (run) => percent(run.kpis.condensate_return_fraction)),
-    pick('let down / raised, %', 1, (run) => percent(run.kpis.let_down_fraction)),
+    pick('stepped down through letdowns, %', 1, (run) => percent(run.kpis.let_down_fraction)),
     pick('vented / raised, %', 2, (run) => percent(run.kpis.vented_fraction)),
+    pick(`power per ${format.perMass} of throttle steam, kWh/${format.perMass}`, 1, (run) => {
+      const value = run.kpis.power_per_throttle_t_kWh;
+      return value === null ? null : perMassValue(value, format.system);
+    }),
+    pick(`fuel chargeable to power, ${format.fuelPerPowerUnit}`, format.system === 'si' ? 2 : 0, (run) => {
+      const value = run.kpis.fuel_chargeable_to_power_kJ_per_kWh;
+      return value === null ? null : format.fuelPerPowerValue(value);
+    }),
     pick('site useful-energy efficiency, %', 1, (run) => percent(run.kpis.site_useful_energy_efficiency)),
   );
   return rows;
@@ -74,9 +87,9 @@ function difference(value: number | null, first: number | null, digits: number):
 }
 
 /** Headings then rows of cells; columns after the first scenario carry their difference. */
-function grid(runs: ScenarioRun[], currency: string): { headings: string[]; rows: string[][] } {
+function grid(runs: ScenarioRun[], format: DisplayFormat): { headings: string[]; rows: string[][] } {
   const headings = ['figure', runs[0]?.id ?? '', ...runs.slice(1).flatMap((run) => [run.id, `vs ${runs[0].id}`])];
-  const rows = rowsOf(runs, currency).map((row) => [
+  const rows = rowsOf(runs, format).map((row) => [
     row.label,
     cell(row.values[0], row.digits),
     ...row.values.slice(1).flatMap((value) => [cell(value, row.digits), difference(value, row.values[0], row.digits)]),
@@ -89,24 +102,35 @@ function failures(runs: ScenarioRun[]): string {
   return failed.length === 0 ? '' : `\nScenarios that could not be solved\n${failed.join('\n')}\n`;
 }
 
-export function compareText(title: string, runs: ScenarioRun[], currency: string, annual: { cost_per_year: number | null; hours: number }): string {
-  const { headings, rows } = grid(runs, currency);
-  const total = annual.cost_per_year === null ? 'not available (a scenario failed)' : `${cell(annual.cost_per_year, 0)} ${currency}`;
-  return `${title}\n\n${table(headings, rows)}\n\nAnnual cost over ${cell(annual.hours, 0)} h: ${total}\n${failures(runs)}`;
+/**
+ * The side-by-side table with the annual total under it; `annual` is null for
+ * a sweep, whose steps are alternatives for the same hours and have no total.
+ */
+export function compareText(title: string, runs: ScenarioRun[], format: DisplayFormat, annual: { cost_per_year: number | null; hours: number } | null): string {
+  const { headings, rows } = grid(runs, format);
+  let footer: string;
+  if (annual === null) {
+    footer = `Each step is the same ${cell(runs[0]?.hours ?? 0, 0)} h a year; cost per year is per step (the steps are alternatives, not added up).`;
+  } else {
+    const total = annual.cost_per_year === null ? 'not available (a scenario failed)' : `${cell(annual.cost_per_year, 0)} ${format.currency}`;
+    footer = `Annual cost over ${cell(annual.hours, 0)} h: ${total}`;
+  }
+  return `${title}\n\n${table(headings, rows)}\n\n${footer}\n${failures(runs)}`;
 }
 
 function csvField(text: string): string {
   return /[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-export function compareCsv(runs: ScenarioRun[], currency: string): string {
-  const { headings, rows } = grid(runs, currency);
-  const plain = rows.map((row) => row.map((text) => text.replace(/,/g, '')));
+export function compareCsv(runs: ScenarioRun[], format: DisplayFormat): string {
+  const { headings, rows } = grid(runs, format);
+  // Thousands separators out of the numbers only; a label keeps its commas (quoted).
+  const plain = rows.map((row) => row.map((text, column) => (column === 0 ? text : text.replace(/,/g, ''))));
   return [headings, ...plain].map((row) => row.map(csvField).join(',')).join('\n') + '\n';
 }
 
-export function compareMarkdown(runs: ScenarioRun[], currency: string): string {
-  const { headings, rows } = grid(runs, currency);
+export function compareMarkdown(runs: ScenarioRun[], format: DisplayFormat): string {
+  const { headings, rows } = grid(runs, format);
   const line = (row: string[]): string => `| ${row.map((text) => text.replace(/\|/g, '\\|')).join(' | ')} |`;
   const rule = `|${headings.map((_, index) => (index === 0 ? ' --- ' : ' ---: ')).join('|')}|`;
   return [line(headings), rule, ...rows.map(line)].join('\n') + '\n' + failures(runs);

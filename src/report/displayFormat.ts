@@ -38,6 +38,8 @@ export interface DisplayFormat {
   powerPerMass(kWh_t: number | null): string;
   /** fuel per unit of power: MJ/kWh (SI) or Btu/kWh (US); null as "n/a" */
   fuelPerPower(kJ_kWh: number | null): string;
+  fuelPerPowerUnit: string;
+  fuelPerPowerValue(kJ_kWh: number): number;
 }
 
 /** Values within solver round-off of zero show as zero. */
@@ -79,6 +81,8 @@ export function displayFormat(system: UnitSystem, currency: string, atmosphericP
       if (kJ_kWh === null) return 'n/a';
       return system === 'si' ? `${(kJ_kWh / 1000).toFixed(2)} MJ/kWh` : `${(kJ_kWh / KJ_PER_BTU).toFixed(0)} Btu/kWh`;
     },
+    fuelPerPowerUnit: system === 'si' ? 'MJ/kWh' : 'Btu/kWh',
+    fuelPerPowerValue: (kJ_kWh) => (system === 'si' ? kJ_kWh / 1000 : kJ_kWh / KJ_PER_BTU),
   };
 }
 

@@ -1,5 +1,5 @@
 // Solving scenarios (or a sweep's steps) side by side.
-import type { CaseVariants } from '../model/index.js';
+import { HOURS_PER_YEAR, type CaseVariants } from '../model/index.js';
 import { annualTotals, scenarioRun, type AnnualTotals, type ScenarioRun } from './annual.js';
 import { solvePlants, type PoolOptions } from './solvePool.js';
 
@@ -16,14 +16,19 @@ export async function compareScenarios(variants: CaseVariants, ids: string[] = [
   return { runs, annual: annualTotals(runs) };
 }
 
-/** Every step of a sweep as a column; the sweep's scenario lends its hours. */
-export async function runSweep(variants: CaseVariants, sweepId: string, options: PoolOptions = {}): Promise<Comparison & { target: string }> {
+/**
+ * Every step of a sweep as a column; the sweep's scenario lends its hours (a
+ * sweep of the plant as written, a whole year). The steps are alternatives
+ * for the same hours, so their annual total adds up nothing real: callers
+ * show each step's cost per year, not the sum.
+ */
+export async function runSweep(variants: CaseVariants, sweepId: string, options: PoolOptions = {}): Promise<Comparison & { target: string; scenario: string }> {
   const sweep = variants.sweeps.find((entry) => entry.id === sweepId);
   if (!sweep) throw new ScenarioLookupError(`no sweep "${sweepId}" in the case; known: ${variants.sweeps.map((entry) => entry.id).join(', ') || 'none'}`);
-  const hours = variants.scenarios.find((entry) => entry.id === sweep.scenario)?.hours ?? 0;
+  const hours = sweep.scenario === 'plant' ? HOURS_PER_YEAR : variants.scenarios.find((entry) => entry.id === sweep.scenario)?.hours ?? HOURS_PER_YEAR;
   const outcomes = await solvePlants(sweep.steps.map((step) => step.plant), options);
   const runs = sweep.steps.map((step, index) => scenarioRun(step.value, `${sweep.target} = ${step.value}`, hours, outcomes[index]));
-  return { runs, annual: annualTotals(runs), target: sweep.target };
+  return { runs, annual: annualTotals(runs), target: sweep.target, scenario: sweep.scenario };
 }
 
 export class ScenarioLookupError extends Error {}

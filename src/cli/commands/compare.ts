@@ -4,6 +4,7 @@ import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
 import { formatIssue, loadCase } from '../../model/index.js';
 import { compareCsv, compareMarkdown, compareText } from '../../report/compareTables.js';
+import { plantDisplayFormat } from '../../report/index.js';
 import { compareScenarios, progressLine, runSweep, ScenarioLookupError, type Comparison } from '../../scenarios/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { OBJECTIVE_WORDS } from './solve.js';
@@ -53,11 +54,13 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
     const options = { objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, workers: args.workers, onProgress: progress.onProgress };
     let comparison: Comparison;
     let title: string;
+    let sweepOf: { id: string; target: string; scenario: string } | null = null;
     try {
       if (args.sweep) {
         const sweep = await runSweep(loaded.variants, args.sweep, options);
         comparison = sweep;
-        title = `${loaded.plant.name}: sweep "${args.sweep}" of ${sweep.target}`;
+        sweepOf = { id: args.sweep, target: sweep.target, scenario: sweep.scenario };
+        title = `${loaded.plant.name}: sweep "${args.sweep}" of ${sweep.target} on ${sweep.scenario === 'plant' ? 'the plant as written' : `scenario "${sweep.scenario}"`}, differences against the first step`;
       } else {
         const ids = args.scenarios ? args.scenarios.split(',').map((id) => id.trim()).filter((id) => id !== '') : [];
         comparison = await compareScenarios(loaded.variants, ids, options);
@@ -70,16 +73,19 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
       progress.finish();
     }
     const currency = loaded.plant.site.currency;
+    const format = plantDisplayFormat(loaded.plant);
     const { runs, annual } = comparison;
     if (args.json) {
       const scenarios = runs.map((run) => (run.ok ? { ...run, result: undefined } : run));
-      process.stdout.write(`${JSON.stringify({ plant: loaded.plant.name, currency, annual, scenarios }, null, 2)}\n`);
+      // A sweep's steps are alternatives: no annual total, and the sweep named instead.
+      const head = sweepOf ? { plant: loaded.plant.name, currency, sweep: sweepOf, annual: null } : { plant: loaded.plant.name, currency, annual };
+      process.stdout.write(`${JSON.stringify({ ...head, scenarios }, null, 2)}\n`);
     } else if (args.csv) {
-      process.stdout.write(compareCsv(runs, currency));
+      process.stdout.write(compareCsv(runs, format));
     } else if (args.md) {
-      process.stdout.write(compareMarkdown(runs, currency));
+      process.stdout.write(compareMarkdown(runs, format));
     } else {
-      process.stdout.write(compareText(title, runs, currency, annual));
+      process.stdout.write(compareText(title, runs, format, sweepOf ? null : annual));
     }
     const failed = runs.filter((run) => !run.ok);
     if (failed.length > 0) {

@@ -4,6 +4,7 @@ import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
 import { formatIssue, loadCase } from '../../model/index.js';
 import { projectsText, screenText } from '../../report/evaluateTables.js';
+import { plantDisplayFormat } from '../../report/index.js';
 import { evaluateProjects, ProjectLookupError, progressLine, SCREEN_DEFAULTS, screenLetdowns, type LetdownScreenRow } from '../../scenarios/index.js';
 import { parseQuantity } from '../../units/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
@@ -69,15 +70,16 @@ export const evaluateCommand: CommandModule<object, EvaluateArgs> = {
       }
     }
     const currency = loaded.plant.site.currency;
+    const format = plantDisplayFormat(loaded.plant);
     if (args.json) {
       const scenarios = outcome.base.map((run) => (run.ok ? { id: run.id, hours: run.hours, ok: true, cost_per_h: run.cost_per_h, cost_per_year: run.cost_per_year } : run));
       process.stdout.write(`${JSON.stringify({ plant: loaded.plant.name, currency, scenarios, projects: outcome.projects, screen: args.screen ? { isentropic_efficiency: efficiency, generator_efficiency: generator, rows: screen } : null }, null, 2)}\n`);
     } else {
       const failedBase = outcome.base.filter((run) => !run.ok).map((run) => `  ${run.id}: NOT SOLVED: ${run.ok ? '' : run.message}`);
       const parts = [
-        outcome.projects.length > 0 ? projectsText(outcome.projects, currency) : 'The case has no projects.\n',
+        outcome.projects.length > 0 ? projectsText(outcome.projects, format) : 'The case has no projects.\n',
         ...(failedBase.length > 0 ? [`Scenarios that could not be solved\n${failedBase.join('\n')}\n`] : []),
-        ...(args.screen ? [screenText(screen, currency, efficiency, generator)] : []),
+        ...(args.screen ? [screenText(screen, format, efficiency, generator)] : []),
       ];
       process.stdout.write(parts.join('\n'));
     }
