@@ -1,5 +1,9 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { runCli } from '../helpers/cli.js';
+import { SWITCH_CASE_WITH_SHORTFALL } from './helpers/switchCase.js';
 
 interface JsonRun { id: string; hours: number; ok: boolean; cost_per_h: number; cost_per_year: number; totals: Record<string, unknown>; headers: unknown[] }
 
@@ -25,4 +29,45 @@ describe('steamwright compare (the built binary, on worker threads)', () => {
     expect(run.code).toBe(0);
     expect(JSON.parse(run.stdout).units.find((unit: { id: string }) => unit.id === 'boiler_1')).toBeUndefined();
   }, 60_000);
+  test('a US-units case is compared in klb/h, MMBtu/h and USD/klb; --json stays in SI', async () => {
+    const text = await runCli(['compare', 'cases/millbrook-creamery.yaml']);
+    expect(text.code).toBe(0);
+    expect(text.stdout).toMatch(/steam raised, klb\/h/);
+    expect(text.stdout).toMatch(/fuel, MMBtu\/h/);
+    expect(text.stdout).toMatch(/hp marginal steam value, USD\/klb/);
+    expect(text.stdout).not.toMatch(/raised, t\/h|steam value, USD\/t\b/);
+    const csv = await runCli(['compare', 'cases/millbrook-creamery.yaml', '--csv']);
+    expect(csv.stdout).toMatch(/^"cost per hour, USD",/m);
+    expect(csv.stdout).toMatch(/^"steam raised, klb\/h",/m);
+    const json = JSON.parse((await runCli(['compare', 'cases/millbrook-creamery.yaml', '--json'])).stdout);
+    expect(typeof json.scenarios[0].totals.steam_raised_kg_s).toBe('number');
+  }, 120_000);
+  test('evaluate on a US-units case prints its projects and screen in US units', async () => {
+    const run = await runCli(['evaluate', 'cases/millbrook-creamery.yaml']);
+    expect(run.code).toBe(0);
+    expect(run.stdout).toMatch(/^blowdown_flash: /m);
+    expect(run.stdout).toMatch(/vented less klb\/h/);
+    expect(run.stdout).toMatch(/fuel less MMBtu\/h/);
+  }, 120_000);
+  test('a scenario that cannot be met is NOT SOLVED with its short header, the others print, and the exit code is 1', async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'steamwright-compare-'));
+    const file = join(folder, 'shortfall.yaml');
+    writeFileSync(file, SWITCH_CASE_WITH_SHORTFALL);
+    const run = await runCli(['compare', file, '--workers', '1']);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toMatch(/overload: NOT SOLVED: the case cannot be met: lp is short of/);
+    expect(run.stdout).toMatch(/cost per hour, USD\s+[\d,]+\.\d\d/);
+    expect(run.stdout).toMatch(/Annual cost over 8,000 h: not available/);
+    expect(run.stderr).toMatch(/1 of 2 could not be solved: overload/);
+  }, 60_000);
+  test('a sweep prints per-step costs and no annual total, and --json names the sweep', async () => {
+    const text = await runCli(['compare', 'cases/kestrel-bay-board-mill.yaml', '--sweep', 'import_price']);
+    expect(text.code).toBe(0);
+    expect(text.stdout).toMatch(/on scenario "summer"/);
+    expect(text.stdout).not.toMatch(/Annual cost over/);
+    const json = JSON.parse((await runCli(['compare', 'cases/kestrel-bay-board-mill.yaml', '--sweep', 'import_price', '--json'])).stdout);
+    expect(json.annual).toBeNull();
+    expect(json.sweep).toEqual({ id: 'import_price', target: 'power.import.price', scenario: 'summer' });
+    expect(json.scenarios).toHaveLength(9);
+  }, 120_000);
 });

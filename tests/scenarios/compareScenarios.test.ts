@@ -2,77 +2,9 @@ import { describe, expect, test } from 'vitest';
 import { loadCaseText } from '../../src/model/index.js';
 import { expandIsentropic } from '../../src/plant/index.js';
 import { enthalpyPT, saturatedLiquid, statePT } from '../../src/properties/index.js';
-import { runSweep } from '../../src/scenarios/index.js';
+import { compareScenarios, runSweep } from '../../src/scenarios/index.js';
 import { expectClose } from '../helpers/expectClose.js';
-
-// An invented two-header plant where one choice is open: HP steam reaches the
-// LP header through a back-pressure turbine generator or through a plain
-// throttling letdown. The LP header is held at 230 degC by its own spray of
-// deaerator water, so both paths deliver the same LP steam; all condensate
-// returns, nothing is vented or blown down, so no makeup is needed either way.
-// The HP header is held at 420 degC (the boiler makes 425 degC steam, trimmed
-// by spray) so the first pass starts from the right state: a floating HP
-// header would start saturated, below the LP set point, and spray only cools.
-const SWITCH_CASE = `format_version: 1
-name: Switching-point plant
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.5 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 12 USD/GJ, basis: HHV, co2: 50 kg/GJ }
-power:
-  site_demand: 5 MW
-  import: { price: 100 USD/MWh, max: 20 MW }
-  export: { price: 0 USD/MWh, max: 0 MW }
-headers:
-  - { id: hp, pressure: 40 barg, state: controlled, temperature: 420 degC, venting: forbidden }
-  - { id: lp, pressure: 10 barg, state: controlled, temperature: 230 degC, venting: forbidden }
-boilers:
-  - id: b1
-    header: hp
-    fuels: [gas]
-    steam: { min: 0 t/h, max: 60 t/h }
-    outlet_temperature: 425 degC
-    efficiency: [{ load: 100 %, efficiency: 80 % }]
-    blowdown: 0 %
-    can_switch_off: false
-turbines:
-  - id: bptg
-    inlet: hp
-    stages:
-      - { to: lp, isentropic_efficiency: 65 %, section_flow: { min: 0 t/h, max: 15 t/h } }
-    mechanical_efficiency: 97 %
-    generator_efficiency: 95 %
-    can_switch_off: false
-letdowns:
-  - { id: prv, from: hp, to: lp, capacity: 100 t/h, desuperheater: none }
-users:
-  - id: u1
-    header: lp
-    steam: 20 t/h
-    condensate: { return: 100 %, temperature: 90 degC, to: deaerator }
-deaerator:
-  pressure: 0.2 barg
-  heating_steam: lp
-  vent: 0 %
-objective: minimum_cost
-sweeps:
-  - id: import_price
-    scenario: plant
-    target: power.import.price
-    from: 20 USD/MWh
-    to: 200 USD/MWh
-    steps: 19
-  - id: near_switch
-    scenario: plant
-    target: power.import.price
-    from: 57.9 USD/MWh
-    to: 59.3 USD/MWh
-    steps: 8
-`;
+import { SWITCH_CASE, SWITCH_CASE_WITH_SHORTFALL } from './helpers/switchCase.js';
 
 const ATMOSPHERE_MPa = 0.101325;
 const hpPressure = 4.0 + ATMOSPHERE_MPa;
@@ -164,5 +96,19 @@ describe('runSweep', () => {
     expect(below.price).toBeLessThan(expected.pricePerMWh);
     expect(above.price).toBeGreaterThan(expected.pricePerMWh);
     expectClose(above.price - below.price, 0.2, 1e-9, 'bracket width, USD/MWh');
+  }, 60_000);
+});
+
+describe('compareScenarios', () => {
+  test('a scenario that cannot be met is reported by id with the short header; the others solve; no annual total', async () => {
+    const loaded = loadCaseText(SWITCH_CASE_WITH_SHORTFALL, 'switch.yaml');
+    if (!loaded.ok) throw new Error(loaded.issues.map((issue) => `${issue.line}:${issue.column} ${issue.message}`).join('\n'));
+    const comparison = await compareScenarios(loaded.variants, [], { workers: 1 });
+    const [normal, overload] = comparison.runs;
+    expect(normal.ok).toBe(true);
+    expect(overload.ok).toBe(false);
+    if (!overload.ok) expect(overload.message).toMatch(/cannot be met: lp is short of/);
+    expect(comparison.annual.failed).toEqual(['overload']);
+    expect(comparison.annual.cost_per_year).toBeNull();
   }, 60_000);
 });
