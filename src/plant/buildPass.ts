@@ -8,11 +8,12 @@ import { MAKEUP } from './network.js';
 
 /**
  * Penalty of balance slack when diagnosing a case that cannot be met: per kg/s
- * for mass, per kW for heat and power. A kg/s of steam carries some 2,500 kW, so
- * kW slack costs less per unit, and the diagnosis does not trade a missing
- * tonne of steam for a few kW of pumping power.
+ * for mass, per MW for heat (energy rows are in MW), per kW for power. A kg/s of
+ * steam carries some 2.5 MW, so heat and power slack cost less per unit of
+ * steam, and the diagnosis does not trade a missing tonne of steam for a few kW
+ * of pumping power.
  */
-export const SLACK_PENALTY = { mass: 1e7, energy: 1e4, power: 1e4 } as const;
+export const SLACK_PENALTY = { mass: 1e7, energy: 1e7, power: 1e4 } as const;
 
 export type { BalanceSlack };
 
@@ -26,6 +27,13 @@ export interface Pass {
 export function massRowName(node: string): string {
   return `${node}.mass`;
 }
+
+/**
+ * Energy rows are written in MW (kW x this scale): their coefficients are then
+ * enthalpies in MJ/kg, of the order of the mass rows' ones, which keeps both
+ * solvers well conditioned. A dual of an energy row is per MW.
+ */
+export const ENERGY_ROW_SCALE = 1e-3;
 
 export function energyRowName(node: string): string {
   return `${node}.energy`;
@@ -56,18 +64,21 @@ export function buildPass(
     const energy = expr();
     for (const stream of context.streamsInto(node.id)) {
       mass.addExpression(stream.flow);
-      energy.addExpression(stream.flow, stream.h);
+      if (stream.energy) energy.addExpression(stream.energy);
+      else energy.addExpression(stream.flow, stream.h);
     }
     for (const stream of context.streamsOutOf(node.id)) {
       mass.addExpression(stream.flow, -1);
-      energy.addExpression(stream.flow, -stream.h);
+      if (stream.energy) energy.addExpression(stream.energy, -1);
+      else energy.addExpression(stream.flow, -stream.h);
     }
     energy.addConstant(-node.heatLoss);
+    const energyMW = expr().addExpression(energy, ENERGY_ROW_SCALE);
     context.relax(massRowName(node.id), node.id, 'mass', mass);
     context.model.addRow(massRowName(node.id), mass, '=', 0);
     if (node.energyRow) {
-      context.relax(energyRowName(node.id), node.id, 'energy', energy);
-      context.model.addRow(energyRowName(node.id), energy, '=', 0);
+      context.relax(energyRowName(node.id), node.id, 'energy', energyMW);
+      context.model.addRow(energyRowName(node.id), energyMW, '=', 0);
     }
   }
 

@@ -42,6 +42,12 @@ export class BuildContext {
   readonly pumpShaft = expr();
   /** shaft power supplied to a driven machine or pump by turbines, kW, by machine id */
   readonly shaftSupply = new Map<string, LinearExpression>();
+  /**
+   * For a floating header with heat-duty users: one scale on all their steam
+   * flows (1 at the pass's point), free so that the header's energy row can
+   * charge a colder or hotter inflow to the users who need its heat.
+   */
+  readonly dutyScale = new Map<string, Variable>();
   /** rows named per unit, so reports can find a unit's limits */
   readonly unitRows = new Map<string, string[]>();
 

@@ -2,7 +2,7 @@
 // name the headers that are short or cannot shed steam, and by how much.
 import type { SolveOptions, SolverBackend } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
-import { buildPass } from './buildPass.js';
+import { buildPass, ENERGY_ROW_SCALE } from './buildPass.js';
 import type { UnitContribution } from './contribution.js';
 import { passSolution } from './passSolution.js';
 
@@ -36,7 +36,9 @@ export async function diagnose(
   const solution = passSolution(result);
   const shortfalls: Shortfall[] = [];
   for (const slack of pass.slacks) {
-    const amount = solution.value(slack.short) - solution.value(slack.surplus);
+    // Energy slack is in MW, like the energy rows; shortfalls are reported in kW.
+    const scale = slack.quantity === 'energy' ? 1 / ENERGY_ROW_SCALE : 1;
+    const amount = (solution.value(slack.short) - solution.value(slack.surplus)) * scale;
     if (Math.abs(amount) > 1e-6) shortfalls.push({ node: slack.node, quantity: slack.quantity, amount });
   }
   const binding = contributions

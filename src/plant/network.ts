@@ -37,6 +37,12 @@ export interface Stream {
   h: number;
   /** pressure the stream is at, MPa (for reporting its state) */
   p: number;
+  /**
+   * Energy the stream carries in its nodes' energy rows, kW, when that is not
+   * flow x h: a heat-duty user on a floating header draws its duty plus its
+   * condensate's enthalpy, whatever the header's enthalpy turns out to be.
+   */
+  energy?: LinearExpression;
 }
 
 /** A node whose balance the model enforces. */

@@ -4,7 +4,7 @@ import { statePH } from '../properties/index.js';
 import type { Audit } from './audit.js';
 import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
 import type { UnitReport } from './contribution.js';
-import { energyRowName, massRowName } from './buildPass.js';
+import { ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
 import { ATMOSPHERE } from './network.js';
 import type { PassRecord, PlantOutcome } from './solvePlant.js';
 
@@ -120,11 +120,11 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
     const h = context.h(header.id);
     const inflows = streams.filter((stream) => stream.to === header.id);
     const outflows = streams.filter((stream) => stream.from === header.id);
-    // One more kg/s drawn at h moves the mass row by 1 and, on a controlled
-    // header, the energy row by h: its value is the sum of both prices.
+    // One more kg/s drawn at h moves the mass row by 1 and, where the header has
+    // an energy row, that row by h: its value is the sum of both prices.
     const massPrice = solution.shadowPrice(massRowName(header.id));
-    const energyPrice = header.state.kind === 'controlled' ? solution.shadowPrice(energyRowName(header.id)) : 0;
-    const dual = massPrice === null || energyPrice === null ? null : massPrice + h * energyPrice;
+    const energyPrice = context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
+    const dual = massPrice === null || energyPrice === null ? null : massPrice + h * ENERGY_ROW_SCALE * energyPrice;
     const result: HeaderResult = {
       id: header.id,
       name: header.name,

@@ -154,11 +154,23 @@ function pointsOf(pass: Pass): Map<string, number> {
   return new Map(pass.context.headerEnthalpy);
 }
 
-/** First guess: controlled headers at their set point, floating ones as dry saturated steam. */
+/**
+ * First guess: controlled headers at their set point; a floating header at the
+ * hottest steam a boiler or import delivers straight into it, or else dry
+ * saturated steam (mixing then moves it).
+ */
 export function initialHeaderEnthalpy(plant: Plant): Map<string, number> {
   const points = new Map<string, number>();
+  const direct = new Map<string, number>();
+  const offer = (header: string, h: number): void => {
+    direct.set(header, Math.max(direct.get(header) ?? -Infinity, h));
+  };
+  for (const boiler of plant.boilers) offer(boiler.header, boiler.outlet.h);
+  for (const boiler of plant.heatRecoveryBoilers) offer(boiler.header, boiler.outlet.h);
+  for (const supply of plant.steamImports) offer(supply.header, supply.delivered.h);
   for (const header of plant.headers) {
-    points.set(header.id, header.state.kind === 'controlled' ? header.state.h : saturatedVapour(header.pressure).h);
+    if (header.state.kind === 'controlled') points.set(header.id, header.state.h);
+    else points.set(header.id, direct.get(header.id) ?? saturatedVapour(header.pressure).h);
   }
   return points;
 }

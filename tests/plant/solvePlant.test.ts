@@ -287,3 +287,70 @@ users:
     expect(Number(grid.values.import_kW)).toBeLessThan(1e-6);
   });
 });
+
+describe('solvePlant: heat-duty users on a floating header', () => {
+  // A back-pressure turbine beside a plain letdown into a floating LP header whose
+  // only user asks for heat. The turbine's exhaust is colder than throttled steam,
+  // so the user needs more of it: power is not free. Per kWh the turbine costs
+  // about 1 / (eta_m eta_g (h_HP - h_c)) kg more HP steam (the user's extra flow);
+  // at 8 USD/GJ and 80 % boiler efficiency that is worth some 40 to 50 USD/MWh.
+  const text = (price: number) => `format_version: 1
+name: Duty user plant
+site:
+  atmospheric_pressure: 101.325 kPa
+  ambient_temperature: 15 degC
+  makeup_water: { temperature: 15 degC, cost: 0 USD/t }
+  currency: USD
+  units: si
+fuels:
+  - { id: gas, price: 8 USD/GJ, basis: HHV, co2: 0 kg/GJ }
+power:
+  site_demand: 3 MW
+  import: { price: ${price} USD/MWh, max: 10 MW }
+  export: { price: 0 USD/MWh, max: 0 MW }
+headers:
+  - { id: hp, pressure: 40 barg, state: floating, venting: forbidden }
+  - { id: lp, pressure: 4 barg, state: floating, venting: forbidden }
+boilers:
+  - id: b1
+    header: hp
+    fuels: [gas]
+    steam: { min: 0 t/h, max: 80 t/h }
+    outlet_temperature: 420 degC
+    efficiency: [{ load: 100 %, efficiency: 80 % }]
+    blowdown: 0 %
+    can_switch_off: false
+letdowns:
+  - { id: prv, from: hp, to: lp, capacity: 80 t/h, desuperheater: none }
+turbines:
+  - id: bpt
+    inlet: hp
+    stages:
+      - { to: lp, isentropic_efficiency: 70 %, section_flow: { max: 30 t/h } }
+    mechanical_efficiency: 98 %
+    generator_efficiency: 96 %
+    can_switch_off: true
+    drives: generator
+users:
+  - { id: process, header: lp, heat: 15 MW, condensate: { return: 100 %, temperature: 130 degC, to: deaerator } }
+deaerator:
+  pressure: 0.2 barg
+  heating_steam: lp
+  vent: 0 %
+objective: minimum_cost
+`;
+
+  it('the turbine stays idle when power is cheap and runs when it is dear', async () => {
+    const cheap = await solved(text(20));
+    const dear = await solved(text(200));
+    expect(Number(unit(cheap, 'bpt').values.inlet_kg_s)).toBeLessThan(1e-6);
+    // Dear power: all the LP steam goes through the turbine, none through the letdown.
+    expect(Number(unit(dear, 'bpt').values.inlet_kg_s)).toBeGreaterThan(5);
+    expect(Number(unit(dear, 'prv').values.steam_kg_s)).toBeLessThan(1e-6);
+    for (const outcome of [cheap, dear]) {
+      expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
+      // The duty is met at the converged header enthalpy.
+      expectClose(Number(unit(outcome, 'process').values.heat_kW), 15000, 1e-5, 'process heat');
+    }
+  });
+});

@@ -22,7 +22,12 @@ export class HeaderContribution implements UnitContribution {
   build(context: BuildContext): void {
     const header = this.header;
     const controlled = header.state.kind === 'controlled';
-    context.node({ id: header.id, energyRow: controlled, heatLoss: header.heatLoss });
+    // A floating header's enthalpy is set by mixing, which the loop settles; but
+    // heat-duty users need energy, not mass, so with any of them the header gets
+    // an energy row too, and their flows one free scale (see BuildContext.dutyScale).
+    const dutyUsers = !controlled && context.plant.users.some((user) => user.header === header.id && user.demand.kind === 'duty');
+    context.node({ id: header.id, energyRow: controlled || dutyUsers, heatLoss: header.heatLoss });
+    if (dutyUsers) context.dutyScale.set(header.id, context.variable(`${header.id}.duty_scale`));
     const h = context.h(header.id);
     if (header.venting) {
       this.vent = context.variable(`${header.id}.vent`);
