@@ -44,6 +44,12 @@ export async function main(argv: string[]): Promise<number> {
   return (process.exitCode as number | undefined) ?? 0;
 }
 
+// A reader that closes early (`steamwright solve x.yaml | head`) is not an error.
+process.stdout.on('error', (error: NodeJS.ErrnoException) => {
+  if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+  throw error;
+});
+
 main(hideBin(process.argv)).then(
   (code) => {
     process.exitCode = code;

@@ -12,3 +12,5 @@ export { htmlReport, plantDisplayFormat, objectiveWords, type ReportOptions } fr
 export { comparisonTable, annualCostChart, scenarioCostChart, scenarioSectionHtml, type ScenarioSection } from './scenarioSections.js';
 export { reportAssumptions, type Assumptions } from './assumptions.js';
 export * from './diagram/index.js';
+export { compareText, compareCsv, compareMarkdown } from './compareTables.js';
+export { projectsText, screenText } from './evaluateTables.js';

@@ -2,10 +2,9 @@
 // side, with differences against the first column and the annual total.
 import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
-import { formatIssue, loadCase } from '../../model/index.js';
-import { compareCsv, compareMarkdown, compareText } from '../../report/compareTables.js';
-import { plantDisplayFormat } from '../../report/index.js';
+import { compareCsv, compareMarkdown, compareText, plantDisplayFormat } from '../../report/index.js';
 import { compareScenarios, progressLine, runSweep, ScenarioLookupError, type Comparison } from '../../scenarios/index.js';
+import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
@@ -44,12 +43,7 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
       .example('$0 compare cases/mill.yaml', 'every scenario side by side')
       .example('$0 compare cases/mill.yaml --sweep import_price --csv', 'a sweep as CSV') as Argv<CompareArgs>,
   handler: async (args) => {
-    const loaded = await loadCase(args.case);
-    if (!loaded.ok) {
-      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
-      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
-      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; nothing was solved`, EXIT_PROBLEMS);
-    }
+    const loaded = await loadCaseOrFail(args.case);
     const progress = progressLine('compare', process.stderr, args.json);
     const options = { objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, workers: args.workers, onProgress: progress.onProgress };
     let comparison: Comparison;

@@ -2,11 +2,10 @@
 // every scenario, and the letdown-to-power screen of the base scenarios.
 import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
-import { formatIssue, loadCase } from '../../model/index.js';
-import { projectsText, screenText } from '../../report/evaluateTables.js';
-import { plantDisplayFormat } from '../../report/index.js';
+import { plantDisplayFormat, projectsText, screenText } from '../../report/index.js';
 import { evaluateProjects, ProjectLookupError, progressLine, SCREEN_DEFAULTS, screenLetdowns, type LetdownScreenRow } from '../../scenarios/index.js';
 import { parseQuantity } from '../../units/index.js';
+import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 
 interface EvaluateArgs {
@@ -46,12 +45,7 @@ export const evaluateCommand: CommandModule<object, EvaluateArgs> = {
   handler: async (args) => {
     const efficiency = percentOption(args['turbine-efficiency'], 'turbine-efficiency', SCREEN_DEFAULTS.isentropicEfficiency);
     const generator = percentOption(args['generator-efficiency'], 'generator-efficiency', SCREEN_DEFAULTS.generatorEfficiency);
-    const loaded = await loadCase(args.case);
-    if (!loaded.ok) {
-      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
-      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
-      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; nothing was solved`, EXIT_PROBLEMS);
-    }
+    const loaded = await loadCaseOrFail(args.case);
     const progress = progressLine('evaluate', process.stderr, args.json);
     let outcome;
     try {

@@ -3,10 +3,10 @@
 import { basename, extname } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
 import { getBackend, type BackendName } from '../../lp/index.js';
-import { formatIssue, loadCase } from '../../model/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
 import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, writeFileAtomic, type ScenarioSection } from '../../report/index.js';
 import { compareScenarios } from '../../scenarios/index.js';
+import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
@@ -49,12 +49,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     for (const option of ['out', 'svg'] as const) {
       if (args[option] !== undefined && args[option].trim() === '') throw new CliError(`--${option} needs a file name`);
     }
-    const loaded = await loadCase(args.case);
-    if (!loaded.ok) {
-      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
-      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
-      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; no report was written`, EXIT_PROBLEMS);
-    }
+    const loaded = await loadCaseOrFail(args.case, 'no report was written');
     const variants = loaded.variants;
     let plant = loaded.plant;
     let subtitle: string | undefined;

@@ -2,9 +2,10 @@
 // the marginal value of steam at every header.
 import type { Argv, CommandModule } from 'yargs';
 import { getBackend, toLpFormat, type BackendName } from '../../lp/index.js';
-import { formatIssue, loadCase, type Objective } from '../../model/index.js';
+import type { Objective } from '../../model/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
 import { solveSummary, writeFileAtomic } from '../../report/index.js';
+import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 
 interface SolveArgs {
@@ -38,12 +39,7 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       .example('$0 solve cases/mill.yaml', 'solve the demo plant')
       .example('$0 solve cases/mill.yaml --objective max-power --json', 'most on-site power, as JSON') as Argv<SolveArgs>,
   handler: async (args) => {
-    const loaded = await loadCase(args.case);
-    if (!loaded.ok) {
-      const errors = loaded.issues.filter((issue) => issue.severity === 'error');
-      for (const issue of loaded.issues) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
-      throw new CliError(`${args.case}: ${errors.length} error${errors.length === 1 ? '' : 's'}; nothing was solved`, EXIT_PROBLEMS);
-    }
+    const loaded = await loadCaseOrFail(args.case);
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
     let plant = loaded.plant;
     if (args.scenario !== undefined) {
