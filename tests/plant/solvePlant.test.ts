@@ -6,6 +6,7 @@ import { plantResult, solvePlant, type PlantOutcome } from '../../src/plant/inde
 import { saturatedLiquid, saturatedVapour, saturationTemperature, statePT } from '../../src/properties/index.js';
 import { expectClose } from '../helpers/expectClose.js';
 import { loadPlant, smallCase } from './helpers/cases.js';
+import { caseOpening } from '../helpers/caseText.js';
 
 type Solved = Extract<PlantOutcome, { ok: true }>;
 
@@ -170,17 +171,7 @@ users:
 });
 
 describe('solvePlant: generated two-header plants', () => {
-  const plantText = (p: { hpUser: number; lpUser: number; returned: number; efficiency: number; turbine: boolean; venting: boolean; hpFloating: boolean }) => `format_version: 1
-name: Generated plant
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.5 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 8 USD/GJ, basis: HHV, co2: 50 kg/GJ }
-power:
+  const plantText = (p: { hpUser: number; lpUser: number; returned: number; efficiency: number; turbine: boolean; venting: boolean; hpFloating: boolean }) => `${caseOpening({ name: 'Generated plant', fuelPrice: 8 })}power:
   site_demand: 500 kW
   import: { price: 90 USD/MWh, max: 10 MW }
   export: { price: 30 USD/MWh, max: 5 MW }
@@ -294,17 +285,7 @@ describe('solvePlant: heat-duty users on a floating header', () => {
   // so the user needs more of it: power is not free. Per kWh the turbine costs
   // about 1 / (eta_m eta_g (h_HP - h_c)) kg more HP steam (the user's extra flow);
   // at 8 USD/GJ and 80 % boiler efficiency that is worth some 40 to 50 USD/MWh.
-  const text = (price: number) => `format_version: 1
-name: Duty user plant
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 8 USD/GJ, basis: HHV, co2: 0 kg/GJ }
-power:
+  const text = (price: number) => `${caseOpening({ name: 'Duty user plant', makeupCost: 0, fuelPrice: 8, co2: 0 })}power:
   site_demand: 3 MW
   import: { price: ${price} USD/MWh, max: 10 MW }
   export: { price: 0 USD/MWh, max: 0 MW }

@@ -1,5 +1,6 @@
 // Small invented plants for the optimiser's tests, written in the case format.
 import { loadCaseText, type Plant } from '../../../src/model/index.js';
+import { caseOpening } from '../../helpers/caseText.js';
 
 export interface SmallPlant {
   boilerMax?: string;
@@ -18,17 +19,7 @@ export function smallCase(options: SmallPlant = {}): string {
     header: ${letdown ? 'low' : 'main'}
     steam: ${options.userSteam ?? '20 t/h'}
     condensate: { return: ${options.returnPercent ?? 0} %${options.returnPercent ? `, temperature: ${options.condensateTemperature ?? '90 degC'}, to: deaerator` : ''} }`;
-  return `format_version: 1
-name: Test plant
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.5 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 10 USD/GJ, basis: HHV, co2: 50 kg/GJ }
-power:
+  return `${caseOpening({ name: 'Test plant' })}power:
   site_demand: 0 kW
   import: { price: 100 USD/MWh, max: 10 MW }
   export: { price: 0 USD/MWh, max: 0 MW }

@@ -1,4 +1,5 @@
 // A small invented plant for the scenario tests, in the case format.
+import { caseOpening } from '../../helpers/caseText.js';
 
 // An invented two-header plant where one choice is open: HP steam reaches the
 // LP header through a back-pressure turbine generator or through a plain
@@ -8,17 +9,7 @@
 // The HP header is held at 420 degC (the boiler makes 425 degC steam, trimmed
 // by spray) so the first pass starts from the right state: a floating HP
 // header would start saturated, below the LP set point, and spray only cools.
-export const SWITCH_CASE = `format_version: 1
-name: Switching-point plant
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.5 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 12 USD/GJ, basis: HHV, co2: 50 kg/GJ }
-power:
+export const SWITCH_CASE = `${caseOpening({ name: 'Switching-point plant', fuelPrice: 12 })}power:
   site_demand: 5 MW
   import: { price: 100 USD/MWh, max: 20 MW }
   export: { price: 0 USD/MWh, max: 0 MW }
