@@ -37,9 +37,11 @@ export function summarisePlant(plant: Plant): string[] {
     count(plant.machines.length, 'machine'),
   ].filter((text): text is string => text !== null);
   const width = Math.max(...plant.headers.map((header) => header.id.length));
-  return [
-    `${plant.name}: ${kinds.join(', ')}`,
-    'headers:',
-    ...plant.headers.map((header) => headerLine(plant, header, width)),
-  ];
+  const lines = [`${plant.name}: ${kinds.join(', ')}`, 'headers:', ...plant.headers.map((header) => headerLine(plant, header, width))];
+  if (plant.scenarios.length > 0) {
+    const hours = plant.scenarios.reduce((total, scenario) => total + scenario.hours, 0);
+    lines.push(`scenarios: ${plant.scenarios.map((scenario) => `${scenario.id} (${scenario.hours.toLocaleString('en-US')} h)`).join(', ')}; ${hours.toLocaleString('en-US')} h a year in all`);
+  }
+  if (plant.projects.length > 0) lines.push(`projects: ${plant.projects.map((project) => project.id).join(', ')}`);
+  return lines;
 }

@@ -16,6 +16,8 @@ describe('steamwright check', () => {
       headers:
         hp   150.0 psig  saturation 365.8 degF  floating
         lp   15.00 psig  saturation 249.3 degF  floating, venting allowed
+      scenarios: winter (3,000 h), summer (3,200 h), reduced (1,800 h); 8,000 h a year in all
+      projects: cip_condensate, blowdown_flash
       "
     `);
   });
