@@ -98,15 +98,16 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
           continue;
         }
       }
-      if (!result.dualsAvailable && pass.context.model.isMip) {
-        // The same pass with its integers held is a linear program with the same optimum, and its duals.
-        const held = buildPass(plant, contributions, pass.context.headerEnthalpy, objective, false, integers);
-        const heldResult = await backend.solve(held.context.model, solveOptions);
-        if (heldResult.status === 'optimal') {
-          pass = held;
-          result = heldResult;
-          solution = passSolution(heldResult);
-        }
+      // The kept pass is solved once more as the last model built, with its
+      // integers held: a linear program with the same optimum and its duals, and
+      // every unit's report reads the same model as the streams (the check above
+      // rebuilt the units).
+      const kept = buildPass(plant, contributions, pass.context.headerEnthalpy, objective, false, integers);
+      const keptResult = await backend.solve(kept.context.model, solveOptions);
+      if (keptResult.status === 'optimal') {
+        pass = kept;
+        result = keptResult;
+        solution = passSolution(keptResult);
       }
       const audit = auditPass(pass, solution, contributions.map((unit) => unit.report(solution)));
       if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
