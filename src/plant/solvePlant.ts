@@ -49,9 +49,9 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   const passOptions = { ...solveOptions, mipDuals: false };
 
   try {
-    // On/off decisions usually settle in the first passes. Once two passes agree
-    // on every integer, later passes hold them fixed and solve a linear program;
-    // at convergence one mixed-integer solve at the final points confirms them.
+    // On/off decisions usually hold from the first pass. Later passes keep them
+    // fixed and solve linear programs; at convergence one mixed-integer solve at
+    // the final points confirms them, or sends the loop on with better ones.
     let fixed: Map<string, number> | null = null;
     let previousIntegers: Map<string, number> | null = null;
     let converged = false;
@@ -79,7 +79,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       const largest = changes.reduce<PointChange | null>((worst, change) => (worst === null || change.change > worst.change ? change : worst), null);
       const largestEnthalpy = enthalpyChanges.reduce((worst, change) => Math.max(worst, change.change), 0);
       passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs, integersHeld: fixed !== null });
-      if (!fixed && integers.size > 0 && previousIntegers && sameValues(integers, previousIntegers)) fixed = integers;
+      if (!fixed && integers.size > 0) fixed = integers;
       previousIntegers = integers;
       // Converged once the points hold still; the audit then decides whether the
       // last pass's points were close enough for balances to close.
