@@ -2,7 +2,7 @@
 // move the points to agree with the flows, and repeat until nothing moves.
 import { highsBackend, type SolveResult, type SolverBackend } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
-import { saturatedVapour } from '../properties/index.js';
+import { PropertyRangeError, saturatedVapour } from '../properties/index.js';
 import { auditPass, type Audit } from './audit.js';
 import { buildPass, type Pass } from './buildPass.js';
 import type { PointChange, UnitContribution } from './contribution.js';
@@ -127,6 +127,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
     };
   } catch (error) {
     if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
+    // A state the loop reached outside IF97 (a flow driven to an extreme enthalpy, say) is the case's physics too.
+    if (error instanceof PropertyRangeError) return { ok: false, plant, reason: 'physics', message: `a steam state left the range of IF97 while solving: ${error.message}`, passes };
     throw error;
   }
 }
