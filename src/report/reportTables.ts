@@ -75,7 +75,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       inletOf(unit.id),
       flow(number(unit, 'inlet_kg_s')),
       power(number(unit, 'power_kW')),
-      typeof unit.values.steam_rate_kg_kWh === 'number' ? steamRate(unit.values.steam_rate_kg_kWh, format) : '-',
+      typeof unit.values.steam_rate_kg_kWh === 'number' ? format.steamRate(unit.values.steam_rate_kg_kWh) : '-',
       exitsOf(unit.id) || '-',
       limits(unit),
     ]),
@@ -187,10 +187,6 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
     ]),
   });
   return tables;
-}
-
-function steamRate(kgPerKWh: number, format: DisplayFormat): string {
-  return format.system === 'si' ? `${kgPerKWh.toFixed(2)} kg/kWh` : `${(kgPerKWh / 0.45359237).toFixed(2)} lb/kWh`;
 }
 
 /** "heatRecoveryBoiler" -> "heat recovery boiler". */
