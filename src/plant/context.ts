@@ -1,8 +1,18 @@
 // The builder's workspace for one pass: the linear model being written, the
 // streams, the site power balance and the cost, fuel and CO2 ledgers.
-import { LinearModel, expr, type LinearExpression, type Variable, type VariableOptions } from '../lp/index.js';
+import { LinearModel, expr, term, type LinearExpression, type Variable, type VariableOptions } from '../lp/index.js';
 import type { Plant } from '../model/index.js';
 import type { BalanceNode, Stream } from './network.js';
+
+/** The point a pass linearises about. */
+export interface PassPoint {
+  /** every header's enthalpy, kJ/kg */
+  headerEnthalpy: ReadonlyMap<string, number>;
+  /** variable values of the previous pass, by name; null for a first pass */
+  previous: ReadonlyMap<string, number> | null;
+  /** largest move of each floating header's enthalpy in the pass, kJ/kg */
+  trust: ReadonlyMap<string, number>;
+}
 
 export type CostComponent = 'fuel' | 'power' | 'steam' | 'water' | 'carbon';
 
@@ -43,27 +53,54 @@ export class BuildContext {
   /** shaft power supplied to a driven machine or pump by turbines, kW, by machine id */
   readonly shaftSupply = new Map<string, LinearExpression>();
   /**
-   * For a floating header with heat-duty users: one scale on all their steam
-   * flows (1 at the pass's point), free so that the header's energy row can
-   * charge a colder or hotter inflow to the users who need its heat.
+   * The move of each linearised floating header's enthalpy in this pass,
+   * kJ/kg, bounded by its trust radius (see `PassPoint`).
    */
-  readonly dutyScale = new Map<string, Variable>();
+  readonly headerMoves = new Map<string, Variable>();
   /** rows named per unit, so reports can find a unit's limits */
   readonly unitRows = new Map<string, string[]>();
 
   /** enthalpy of each header for this pass, kJ/kg (a copy: the loop moves its own points on) */
   readonly headerEnthalpy: ReadonlyMap<string, number>;
 
+  /** variable values of the pass this one linearises about, by name; null for a first pass */
+  readonly previous: ReadonlyMap<string, number> | null;
+  /** largest move of each floating header's enthalpy in this pass, kJ/kg */
+  readonly trust: ReadonlyMap<string, number>;
+
   constructor(
     readonly plant: Plant,
-    headerEnthalpy: ReadonlyMap<string, number>,
+    point: PassPoint,
     /** slack on every balance, for diagnosing a case that cannot be met */
     readonly withSlack: boolean,
     /** integer variables held at these values (by name): the pass is then a linear program */
     readonly fixedIntegers: ReadonlyMap<string, number> | null = null,
   ) {
     this.model = new LinearModel(plant.name);
-    this.headerEnthalpy = new Map(headerEnthalpy);
+    this.headerEnthalpy = new Map(point.headerEnthalpy);
+    this.previous = point.previous;
+    this.trust = point.trust;
+  }
+
+  /**
+   * Whether a floating header's enthalpy is a variable of this pass: from the
+   * second pass on, once flows through it are known to linearise about.
+   */
+  linearises(headerId: string): boolean {
+    return this.headerMoves.has(headerId);
+  }
+
+  /** The move of a header's enthalpy in this pass: its variable, or nothing where the enthalpy is fixed. */
+  headerMove(headerId: string): LinearExpression {
+    const move = this.headerMoves.get(headerId);
+    return move ? term(move) : expr();
+  }
+
+  /** An expression's value at the point the pass linearises about (0 on a first pass). */
+  pointValue(expression: LinearExpression): number {
+    const previous = this.previous;
+    if (!previous) return 0;
+    return expression.evaluate((variable) => previous.get(variable.name) ?? 0);
   }
 
   variable(name: string, options: VariableOptions = {}): Variable {

@@ -3,6 +3,7 @@
 import type { SolveOptions, SolverBackend } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
 import { buildPass, ENERGY_ROW_SCALE } from './buildPass.js';
+import type { PassPoint } from './context.js';
 import type { UnitContribution } from './contribution.js';
 import { passSolution } from './passSolution.js';
 
@@ -23,12 +24,12 @@ export interface Diagnosis {
 export async function diagnose(
   plant: Plant,
   contributions: readonly UnitContribution[],
-  headerEnthalpy: ReadonlyMap<string, number>,
+  point: PassPoint,
   objective: Objective,
   backend: SolverBackend,
   options: SolveOptions,
 ): Promise<Diagnosis> {
-  const pass = buildPass(plant, contributions, headerEnthalpy, objective, true);
+  const pass = buildPass(plant, contributions, point, objective, { withSlack: true });
   const result = await backend.solve(pass.context.model, options);
   if (!result.hasSolution) {
     return { shortfalls: [], binding: [], summary: `the case cannot be met, and even with every balance relaxed the solver ended "${result.status}"; check the equipment limits for contradictions (a minimum above a maximum).` };
