@@ -113,6 +113,8 @@ export interface PlantResult {
   marginal_value_unit: (typeof MARGINAL_VALUE_UNIT)[Objective];
   /** on/off decisions tried, each converged on its own */
   commitments: CommitmentTried[];
+  /** the on/off decisions kept, 1 running, by variable name */
+  commitment: Record<string, number>;
 }
 
 export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): PlantResult {
@@ -238,6 +240,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
     marginal_power_value_per_kWh: solution.shadowPrice('site.power'),
     marginal_value_unit: MARGINAL_VALUE_UNIT[outcome.objective],
     commitments: outcome.commitments,
+    commitment: Object.fromEntries(outcome.commitment),
   };
 }
 

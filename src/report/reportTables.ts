@@ -46,7 +46,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       flow(header.outflow_kg_s),
       header.vent_kg_s > TINY ? flow(header.vent_kg_s) : '-',
       header.heat_loss_kW !== undefined ? power(header.heat_loss_kW) : '-',
-      format.valuePerMass(header.marginal_value_per_t),
+      format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit),
     ]),
   });
 

@@ -26,10 +26,21 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         flow(header.inflow_kg_s),
         flow(header.outflow_kg_s),
         header.vent_kg_s > 1e-9 ? flow(header.vent_kg_s) : '-',
-        valuePerMass(header.marginal_value_per_t),
+        valuePerMass(header.marginal_value_per_t, result.marginal_value_unit),
       ]),
     ),
   );
+
+  // Each side of the marginal value, measured by re-solving, and what sets it.
+  lines.push('', `Marginal steam values (${objectiveWords(result.objective)}; one tonne drawn at the header and not returned)`);
+  for (const header of result.headers) {
+    const marginal = header.marginal;
+    if (marginal.more_per_t === null && marginal.less_per_t === null) continue;
+    const by = (causes: string[]): string => (causes.length > 0 ? ` (${causes.join(', ')})` : '');
+    const more = marginal.more_per_t === null ? 'no more can be raised with the units running' : `one more costs ${valuePerMass(marginal.more_per_t, result.marginal_value_unit)}${by(marginal.more_set_by)}`;
+    const less = marginal.less_per_t === null ? 'it cannot take less' : `one less saves ${valuePerMass(marginal.less_per_t, result.marginal_value_unit)}${by(marginal.less_set_by)}`;
+    lines.push(`  ${header.id}: ${more}; ${less}${marginal.differs ? '  <- a switching point: the two differ' : ''}`);
+  }
 
   // Vents first, then drains; flows of one kind from one unit are added up.
   const losses = new Map<string, number>();

@@ -51,8 +51,15 @@ export async function evaluateProjects(variants: CaseVariants, projectIds: strin
     if (!project) throw new ProjectLookupError(`no project "${id}" in the case; known: ${variants.projects.map((entry) => entry.id).join(', ') || 'none'}`);
     return project;
   });
-  const plants = [...variants.scenarios.map((scenario) => scenario.plant), ...projects.flatMap((project) => project.plants.map((entry) => entry.plant))];
-  const outcomes = await solvePlants(plants, options);
+  // The scenarios first: each project on a scenario then also tries that
+  // scenario's on/off decisions, so an added option never shows a loss.
+  const baseOutcomes = await solvePlants(variants.scenarios.map((scenario) => scenario.plant), options);
+  const commitmentOf = (scenario: string): Record<string, number> | undefined => {
+    const outcome = baseOutcomes[variants.scenarios.findIndex((entry) => entry.id === scenario)];
+    return outcome?.ok ? outcome.result.commitment : undefined;
+  };
+  const projectEntries = projects.flatMap((project) => project.plants);
+  const outcomes = [...baseOutcomes, ...(await solvePlants(projectEntries.map((entry) => entry.plant), options, projectEntries.map((entry) => commitmentOf(entry.scenario))))];
   const base = variants.scenarios.map((scenario, index) => scenarioRun(scenario.id, scenario.name, scenario.hours, outcomes[index]));
   let next = variants.scenarios.length;
   const evaluations = projects.map((project) => {

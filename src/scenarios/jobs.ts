@@ -16,6 +16,8 @@ export type JobOutcome =
 export interface JobOptions {
   objective?: Objective;
   backend?: 'highs' | 'jslp';
+  /** another solve's on/off decisions (the base scenario's, for a project), tried as a candidate */
+  commitment?: Record<string, number>;
 }
 
 /** The plant a job solves; throws for a job that names nothing in the variants (a programming error). */
