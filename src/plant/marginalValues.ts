@@ -16,8 +16,8 @@ import type { UnitReport } from './contribution.js';
 import type { Converged, LoopSettings } from './converge.js';
 import { passSolution } from './passSolution.js';
 
-/** The probe's draw, kg/s (36 kg/h): small beside any header, large beside solver round-off. */
-export const PROBE_FLOW = 0.01;
+/** The probe's draw, kg/s (3.6 kg/h): small beside any header, so that a switch it sees is at the operating point, and large beside solver round-off (1e-9 of the objective). */
+export const PROBE_FLOW = 0.001;
 
 export interface MarginalValue {
   header: string;

@@ -30,7 +30,7 @@ export interface SolvePlantOptions {
 /** One set of on/off decisions tried, converged on its own, and its converged objective. */
 export interface CommitmentTried {
   /** where the candidate came from */
-  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip';
+  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip' | 'boiler swap';
   /** on/off of every switchable unit, 1 running */
   onOff: Record<string, number>;
   /** converged objective; null when it could not be met or did not settle */
@@ -125,7 +125,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
 /**
  * On/off decisions judged at their own converged points: the first pass's
  * MIP, the MIP at the converged points, the base plant's decisions where given,
- * and single flips of each switchable unit, each converged on its own; the
+ * single flips of each switchable unit and swaps of a running boiler for a
+ * stopped one, each converged on its own; the
  * lowest converged objective is kept. A unit that may switch off can then never
  * raise the optimum: running it as before is one of the candidates.
  */
@@ -148,35 +149,44 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
   };
   const firstOnOff = onOffOf(first.integers);
   seen.add(keyOf(firstOnOff));
+  seen.add(keyOf(first.integers));
   record('first pass', firstOnOff, first);
-  if (firstOnOff.size === 0) return { best, tried };
 
   const attempt = async (source: CommitmentTried['source'], onOff: Map<string, number>): Promise<void> => {
     const key = keyOf(onOff);
     if (seen.has(key)) return;
     seen.add(key);
     const outcome = await converge(settings, contributionsOf(plant), best.point.headerEnthalpy, onOff);
-    record(source, onOff, outcome);
+    record(source, onOffOf(onOff), outcome);
   };
 
   // The MIP at the converged points, with every integer free.
   const check = buildPass(plant, contributionsOf(plant), best.point, objective);
   const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
-  if (confirmed.status === 'optimal') await attempt('MIP at the converged points', onOffOf(integerValues(check, confirmed)));
+  // Its load segments too (non-convex fuel curves), which the first pass decided far from here.
+  if (confirmed.status === 'optimal') await attempt('MIP at the converged points', integerValues(check, confirmed));
   if (options.commitment) {
     // The base plant's decisions, for the units this plant shares with it.
     const base = new Map([...firstOnOff].map(([name, value]) => [name, options.commitment!.get(name) ?? value]));
     await attempt('base plant', base);
   }
   const maxFlips = options.maxFlips ?? 20;
-  // Flips of the best so far; once more if a flip found a better one.
-  for (let round = 0; round < 2 && firstOnOff.size <= maxFlips; round += 1) {
+  const boilers = new Set(plant.boilers.map((boiler) => `${boiler.id}.on`));
+  // Flips of the best so far, and swaps of a running boiler for a stopped one
+  // (which boiler carries the load); once more if one of them found a better one.
+  for (let round = 0; round < 2 && firstOnOff.size > 0 && firstOnOff.size <= maxFlips; round += 1) {
     const around = onOffOf(best.integers);
     const before = best;
     for (const name of around.keys()) {
       const flipped = new Map(around);
       flipped.set(name, 1 - around.get(name)!);
       await attempt('single flip', flipped);
+    }
+    for (const [running, on] of around) {
+      for (const [stopped, off] of around) {
+        if (on !== 1 || off !== 0 || !boilers.has(running) || !boilers.has(stopped)) continue;
+        await attempt('boiler swap', new Map(around).set(running, 0).set(stopped, 1));
+      }
     }
     if (best === before) break;
   }
