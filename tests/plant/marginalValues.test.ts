@@ -125,7 +125,7 @@ describe('marginal steam values agree with re-solving the converged plant', () =
         }
         solved += 1;
         for (const header of plantResult(outcome).headers) {
-          const checks = await oracle(plant, header, 0.1, outcome.commitment);
+          const checks = await oracle(plant, header, 0.02, outcome.commitment);
           if (checks === null) continue;
           for (const check of checks) expectAgree(check);
           headersChecked += 1;

@@ -112,7 +112,7 @@ export function plantText(shape: PlantShape, without: number | null = null): Gen
   });
   const letdowns: string[] = [];
   for (let k = 0; k + 1 < shape.headers; k += 1) {
-    const desuperheater = shape.desuperheat[k] ? `\n    desuperheater: { target_temperature: ${Math.round(175 + 20 * (shape.headers - k - 1))} degC, spray_water: feedwater }` : '';
+    const desuperheater = shape.desuperheat[k] ? `\n    desuperheater: { target_temperature: ${SET_POINTS[k + 1]} degC, spray_water: feedwater }` : '';
     letdowns.push(`  - id: prv${k}
     from: h${k}
     to: h${k + 1}
