@@ -1,6 +1,6 @@
 // The audit: every balance recomputed from the final flows and the states the
 // pass used, independent of the solver's own row activities.
-import { ATMOSPHERE, DRAIN, MAKEUP, PROCESS, solvedEnthalpy } from './network.js';
+import { ATMOSPHERE, DRAIN, MAKEUP, PROCESS, headerLoss, solvedEnthalpy } from './network.js';
 import type { Pass } from './buildPass.js';
 import type { PassSolution } from './passSolution.js';
 import type { UnitReport } from './contribution.js';
@@ -51,7 +51,7 @@ export function auditPass(pass: Pass, solution: PassSolution, reports: readonly 
     let massIn = 0;
     let massOut = 0;
     let energyIn = 0;
-    let energyOut = node ? node.heatLoss : 0;
+    let energyOut = node ? headerLoss(node.heatLoss, into, solution) : 0;
     for (const stream of into) {
       const flow = solution.evaluate(stream.flow);
       massIn += flow;

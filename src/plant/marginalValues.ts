@@ -19,6 +19,9 @@ import { passSolution } from './passSolution.js';
 /** The probe's draw, kg/s (3.6 kg/h): small beside any header, so that a switch it sees is at the operating point, and large beside solver round-off (1e-9 of the objective). */
 export const PROBE_FLOW = 0.001;
 
+/** Trust radius of the probes' header moves, kJ/kg: far beyond what 3.6 kg/h moves. */
+const PROBE_TRUST = 50;
+
 export interface MarginalValue {
   header: string;
   /** the kept pass's dual, objective units per kg/s; null without duals */
@@ -37,16 +40,24 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
   const { pass, solution, contributions, point } = converged;
   const base = contributions.map((unit) => unit.report(solution));
   const baseObjective = converged.result.objective ?? 0;
-  // The probes hold the on/off decisions and let load segments of non-convex curves follow.
   const onOff = new Map([...converged.integers].filter(([name]) => name.endsWith('.on')));
+  // The trust radii bound the loop's steps, not the plant: at convergence none
+  // binds, so the probes open them and let the headers' enthalpies follow the draw.
+  const probePoint = { ...point, trust: new Map([...point.trust].map(([id, radius]) => [id, Math.max(radius, PROBE_TRUST)])) };
   const values: MarginalValue[] = [];
   for (const header of plant.headers) {
     const massPrice = solution.shadowPrice(massRowName(header.id));
     const energyPrice = pass.context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
     const dual = massPrice === null || energyPrice === null ? null : massPrice + pass.context.h(header.id) * ENERGY_ROW_SCALE * energyPrice;
+    const solveProbe = async (flow: number, fixed: ReadonlyMap<string, number>) => {
+      const probePass = buildPass(plant, contributions, probePoint, objective, { fixedIntegers: fixed, extraDemand: new Map([[header.id, flow]]) });
+      // A MIP's gap would swamp a difference this small: where a load segment must change, solve it to optimality.
+      return backend.solve(probePass.context.model, { ...settings.solveOptions, mipDuals: false, mipRelativeGap: 1e-12 });
+    };
     const probe = async (flow: number): Promise<{ value: number | null; setBy: string[] }> => {
-      const probePass = buildPass(plant, contributions, point, objective, { fixedIntegers: onOff, extraDemand: new Map([[header.id, flow]]) });
-      const result = await backend.solve(probePass.context.model, { ...settings.solveOptions, mipDuals: false });
+      // Every integer held first (a linear program); only where that cannot take the draw, the load segments of non-convex curves follow.
+      let result = await solveProbe(flow, converged.integers);
+      if (result.status !== 'optimal' && onOff.size < converged.integers.size) result = await solveProbe(flow, onOff);
       if (result.status !== 'optimal' || result.objective === null) return { value: null, setBy: [] };
       const probeSolution = passSolution(result);
       const changed = contributions.map((unit) => unit.report(probeSolution));

@@ -73,3 +73,12 @@ export function solvedEnthalpy(stream: Stream, solution: PassSolution): number {
   }
   return stream.h + (stream.dh ? solution.evaluate(stream.dh) : 0);
 }
+
+/**
+ * A header's heat loss while steam flows through it, kW: an idle header is out
+ * of service and loses nothing (the case's loss is the piping's at operating
+ * conditions).
+ */
+export function headerLoss(heatLoss: number, streamsInto: readonly Stream[], solution: PassSolution): number {
+  return streamsInto.some((stream) => solution.evaluate(stream.flow) > 1e-9) ? heatLoss : 0;
+}

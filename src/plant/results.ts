@@ -159,7 +159,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       outflows: outflows.map((stream) => ({ to: stream.to, kind: stream.kind, mass_kg_s: stream.mass_kg_s })),
       vent_kg_s: outflows.filter((stream) => stream.to === ATMOSPHERE).reduce((total, stream) => total + stream.mass_kg_s, 0),
     };
-    if (header.heatLoss > 0) result.heat_loss_kW = header.heatLoss;
+    if (header.heatLoss > 0) result.heat_loss_kW = result.inflow_kg_s > 1e-9 ? header.heatLoss : 0;
     return result;
   });
 

@@ -166,8 +166,9 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
   // Its load segments too (non-convex fuel curves), which the first pass decided far from here.
   if (confirmed.status === 'optimal') await attempt('MIP at the converged points', integerValues(check, confirmed));
   if (options.commitment) {
-    // The base plant's decisions, for the units this plant shares with it.
-    const base = new Map([...firstOnOff].map(([name, value]) => [name, options.commitment!.get(name) ?? value]));
+    // The base plant's decisions, with the units it does not have stopped: the
+    // base plant itself, so an added unit that may stop can never cost more.
+    const base = new Map([...firstOnOff].map(([name]) => [name, options.commitment!.get(name) ?? 0]));
     await attempt('base plant', base);
   }
   const maxFlips = options.maxFlips ?? 20;
