@@ -137,6 +137,13 @@ function movePoints(
     const radius = context.trust.get(header.id);
     const move = context.headerMoves.get(header.id);
     if (move && radius !== undefined) {
+      if (!throughputOf(pass, solution, header.id)) {
+        // Idle in this pass: its enthalpy means nothing, so it stays, and is set
+        // by mixing again once steam flows.
+        trust.delete(header.id);
+        lastMove.delete(header.id);
+        continue;
+      }
       const step = solution.value(move);
       const last = lastMove.get(header.id) ?? 0;
       const atRadius = Math.abs(step) >= radius * (1 - 1e-9) && radius < TRUST.largest;

@@ -50,6 +50,21 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
     ]),
   });
 
+  // Both sides of each marginal value, measured by re-solving, and what sets them.
+  tables.push({
+    id: 'marginal-values',
+    title: 'Marginal steam values: one tonne more or less drawn at each header',
+    headings: ['header', 'one more costs', 'set by', 'one less saves', 'set by', 'switching point'],
+    rows: headers.map((header) => [
+      header.id,
+      header.marginal.more_per_t === null ? 'no more with the units running' : format.valuePerMass(header.marginal.more_per_t, result.marginal_value_unit),
+      header.marginal.more_set_by.join(', ') || '-',
+      header.marginal.less_per_t === null ? 'cannot take less' : format.valuePerMass(header.marginal.less_per_t, result.marginal_value_unit),
+      header.marginal.less_set_by.join(', ') || '-',
+      header.marginal.differs ? 'yes: the two sides differ' : '-',
+    ]),
+  });
+
   tables.push({
     id: 'sources',
     title: 'Sources',

@@ -111,7 +111,7 @@ describe('marginal steam values agree with re-solving the converged plant', () =
     }
   }, 120_000);
 
-  it('property: 200 generated plants of 2 to 6 headers, every header against its re-solve', async () => {
+  it('property: 400 generated plants of 2 to 6 headers (at least 200 of them solvable), every header against its re-solve', async () => {
     let solved = 0;
     let headersChecked = 0;
     await fc.assert(
@@ -131,11 +131,11 @@ describe('marginal steam values agree with re-solving the converged plant', () =
           headersChecked += 1;
         }
       }),
-      { numRuns: 200, seed: 20261202 },
+      { numRuns: 400, seed: 20261202 },
     );
     // Most generated plants can be met; the property is not vacuous.
-    expect(solved).toBeGreaterThan(120);
-    expect(headersChecked).toBeGreaterThan(400);
+    expect(solved).toBeGreaterThanOrEqual(200);
+    expect(headersChecked).toBeGreaterThan(600);
   }, 900_000);
 });
 

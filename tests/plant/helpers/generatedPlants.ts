@@ -14,8 +14,8 @@ export interface GeneratedPlant {
 }
 
 const PRESSURES = [60, 42, 18, 10, 4.5, 1.5];
-/** set points of controlled headers, some 40 K above saturation at each pressure */
-const SET_POINTS = [420, 300, 250, 225, 195, 170];
+/** set points of controlled headers, some 10 K above saturation at each pressure: turbine exhausts arrive hotter, and spray cools them */
+const SET_POINTS = [420, 265, 222, 195, 165, 138];
 
 export interface PlantShape {
   headers: number;
@@ -36,7 +36,7 @@ export const plantShape: fc.Arbitrary<PlantShape> = fc.integer({ min: 2, max: 6 
     headers: fc.constant(headers),
     topControlled: fc.boolean(),
     floating: fc.array(fc.boolean(), { minLength: headers, maxLength: headers }),
-    boilerMax: fc.integer({ min: 60, max: 140 }),
+    boilerMax: fc.integer({ min: 120, max: 220 }),
     secondBoiler: fc.boolean(),
     turbines: fc.array(
       fc.record({
@@ -51,7 +51,7 @@ export const plantShape: fc.Arbitrary<PlantShape> = fc.integer({ min: 2, max: 6 
     ),
     desuperheat: fc.array(fc.boolean(), { minLength: headers, maxLength: headers }),
     users: fc.array(
-      fc.record({ header: fc.integer({ min: 0, max: headers - 1 }), duty: fc.boolean(), size: fc.integer({ min: 2, max: 20 }), returned: fc.integer({ min: 0, max: 90 }) }),
+      fc.record({ header: fc.integer({ min: 0, max: headers - 1 }), duty: fc.boolean(), size: fc.integer({ min: 2, max: 14 }), returned: fc.integer({ min: 0, max: 90 }) }),
       { minLength: 1, maxLength: 6 },
     ),
     importPrice: fc.integer({ min: 40, max: 160 }),
@@ -112,12 +112,17 @@ export function plantText(shape: PlantShape, without: number | null = null): Gen
   });
   const letdowns: string[] = [];
   for (let k = 0; k + 1 < shape.headers; k += 1) {
-    const desuperheater = shape.desuperheat[k] ? `\n    desuperheater: { target_temperature: ${SET_POINTS[k + 1]} degC, spray_water: feedwater }` : '';
+    const desuperheater = shape.desuperheat[k] ? `\n    desuperheater: { target_temperature: ${SET_POINTS[k + 1] + 15} degC, spray_water: feedwater }` : '';
     letdowns.push(`  - id: prv${k}
     from: h${k}
     to: h${k + 1}
     capacity: 120 t/h${desuperheater}`);
   }
+  // Every header has a small user of its own: a header with a heat loss must carry steam.
+  const baseLoads = Array.from({ length: shape.headers }, (_, k) => `  - id: base${k}
+    header: h${k}
+    steam: 1 t/h
+    condensate: { return: 50 %, temperature: 95 degC, to: deaerator }`);
   const users = shape.users.map((user, index) => {
     const demand = user.duty ? `heat: ${(user.size * 0.6).toFixed(1)} MW` : `steam: ${user.size} t/h`;
     const condensate = user.returned > 0 ? `{ return: ${user.returned} %, temperature: 90 degC, to: deaerator }` : '{ return: 0 % }';
@@ -137,7 +142,7 @@ ${boilers.join('\n')}
 ${turbines.length > 0 ? `turbines:\n${turbines.join('\n')}\n` : ''}letdowns:
 ${letdowns.join('\n')}
 users:
-${users.join('\n')}
+${[...baseLoads, ...users].join('\n')}
 deaerator:
   pressure: 0.3 barg
   heating_steam: h${shape.headers - 1}
