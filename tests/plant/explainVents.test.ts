@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import Ajv2020 from 'ajv/dist/2020.js';
+import { readFileSync } from 'node:fs';
 import { explainVents, plantResult, solvePlant, type PlantResult, type VentExplanation } from '../../src/plant/index.js';
 import { saturatedLiquid, saturatedVapour, statePT } from '../../src/properties/index.js';
 import { caseOpening } from '../helpers/caseText.js';
@@ -107,6 +109,19 @@ describe('explainVents: a header that must vent', () => {
     expect(sprayInflow.held).toBe('holding lp at its set temperature');
     expect(vent.reason).toMatch(/lp's spray water \([\d.]+ t\/h, holding lp at its set temperature\)/);
     expect(vent.inflows.find((inflow) => inflow.from === 'bpt1')?.held).toBe('inlet flow at minimum');
+  });
+
+  it('is valid against schema/result.schema.json, vents and all', async () => {
+    const result = await solvedResult(ventingCase({ turbineMin: '30 t/h', lpUser: '5 t/h', wasteHeat: '4 t/h', lpControlled: true }));
+    expect(result.vents.length).toBeGreaterThan(0);
+    const ajv = new Ajv2020.default({ allErrors: true, strict: false });
+    const validate = ajv.compile(JSON.parse(readFileSync('schema/result.schema.json', 'utf8')));
+    validate(JSON.parse(JSON.stringify(result)));
+    expect(validate.errors ?? []).toEqual([]);
+    // The schema does describe the vents: a vent without its reason is refused.
+    const broken = JSON.parse(JSON.stringify(result));
+    delete broken.vents[0].reason;
+    expect(validate(broken)).toBe(false);
   });
 
   it('writes the flows in the case units', async () => {
