@@ -6,6 +6,7 @@ import { saturatedLiquid, saturatedVapour, statePT } from '../../src/properties/
 import { caseOpening } from '../helpers/caseText.js';
 import { expectClose } from '../helpers/expectClose.js';
 import { loadPlant } from './helpers/cases.js';
+import { ventingCase } from './helpers/ventingCase.js';
 
 async function solvedResult(text: string): Promise<PlantResult> {
   const outcome = await solvePlant(loadPlant(text));
@@ -18,56 +19,6 @@ const ventAt = (result: PlantResult, where: string): VentExplanation => {
   if (!found) throw new Error(`no vent explained at ${where}: ${JSON.stringify(result.vents)}`);
   return found;
 };
-
-// Two headers: HP from a gas boiler; LP fed by a back-pressure turbine that may not
-// stop and must pass at least `turbineMin`, and by a waste-heat boiler whose steam is
-// set by its process. LP may vent; its one user asks for `lpUser`.
-function ventingCase(options: { turbineMin: string; lpUser: string; wasteHeat: string; lpControlled?: boolean; units?: 'si' | 'us' }): string {
-  const opening = caseOpening({ name: 'Venting plant' }).replace('units: si', `units: ${options.units ?? 'si'}`);
-  return `${opening}power:
-  site_demand: 0 kW
-  import: { price: 100 USD/MWh, max: 10 MW }
-  export: { price: 20 USD/MWh, max: 10 MW }
-headers:
-  - { id: hp, pressure: 40 barg, state: floating, venting: forbidden }
-  - id: lp
-    pressure: 4 barg
-    state: ${options.lpControlled ? 'controlled\n    temperature: 170 degC' : 'floating'}
-    venting: allowed
-boilers:
-  - id: b1
-    header: hp
-    fuels: [gas]
-    steam: { min: 0 t/h, max: 100 t/h }
-    outlet_temperature: 420 degC
-    efficiency: [{ load: 100 %, efficiency: 85 % }]
-    blowdown: 0 %
-    can_switch_off: false
-heat_recovery_boilers:
-  - id: hrsg1
-    header: lp
-    steam: ${options.wasteHeat}
-    outlet_temperature: saturated
-    blowdown: 0 %
-turbines:
-  - id: bpt1
-    inlet: hp
-    stages:
-      - { to: lp, isentropic_efficiency: 70 %, section_flow: { min: ${options.turbineMin}, max: 60 t/h } }
-    mechanical_efficiency: 98 %
-    generator_efficiency: 96 %
-    can_switch_off: false
-    drives: generator
-users:
-  - { id: paper_machine, header: hp, steam: 20 t/h, condensate: { return: 0 % } }
-  - { id: dryer, header: lp, steam: ${options.lpUser}, condensate: { return: 0 % } }
-deaerator:
-  pressure: 0.2 barg
-  heating_steam: lp
-  vent: 0 %
-objective: minimum_cost
-`;
-}
 
 describe('explainVents: a header that must vent', () => {
   it('names the turbine at its minimum and the waste-heat boiler, and adds up to the vent', async () => {
