@@ -175,4 +175,29 @@ describe('explainVents on hand-made data', () => {
     );
     expect(vents[1].reason).toBe('lp: 1.0 kg/s comes in and nothing draws on it; flash vapour from ft (1.0 kg/s, flashed from hot condensate or blowdown) cannot be turned down; nothing takes steam from lp to a lower pressure.');
   });
+  it('says a header that may not vent sheds its surplus through the deaerator, and what holds it', () => {
+    const stream = (from: string, to: string, kind: string, mass: number, h = 2800) => ({ from, to, kind, mass_kg_s: mass, h_kJ_kg: h, T_K: 450 });
+    const vents = explainVents(
+      {
+        headers: [{ id: 'main', vent_kg_s: 0 }],
+        streams: [
+          stream('b1', 'main', 'steam', 10),
+          stream('main', 'u1', 'process', 7),
+          stream('main', 'deaerator', 'heatingSteam', 3),
+          stream('deaerator', 'b1', 'feedwater', 10, 440),
+          stream('makeup', 'deaerator', 'makeup', 8, 63),
+          stream('deaerator', 'atmosphere', 'vent', 1, 2680),
+        ],
+        units: [
+          { id: 'b1', kind: 'boiler', values: { steam_kg_s: 10 }, binding: ['at minimum steam'] },
+          { id: 'deaerator', kind: 'deaerator', values: { excess_vent_kg_s: 1, heating_steam_kg_s: 3 }, binding: [] },
+        ],
+      },
+      { flow: (kg_s) => `${kg_s.toFixed(1)} kg/s`, temperature: (K) => `${K} K` },
+    );
+    expect(vents.map((vent) => [vent.where, vent.kind])).toEqual([['deaerator', 'deaerator excess']]);
+    expect(vents[0].reason).toBe(
+      "deaerator: 1.0 kg/s vented above its design share: it draws 3.0 kg/s of heating steam from main, which may not vent, so main's surplus leaves here, where b1's steam (10.0 kg/s, at minimum steam) cannot be turned down.",
+    );
+  });
 });
