@@ -112,7 +112,7 @@ class SolvedPlant {
     const free = inflows.filter((inflow) => inflow.held === null);
     const heldPhrase = held.length > 0 ? `${list(held.map((inflow) => `${describe(id, inflow)} (${flow(inflow.flow_kg_s)}${spray(inflow, words)}, ${inflow.held})`))} cannot be turned down` : 'no inflow sits at a limit: venting costs less than turning one down';
     const freePhrase = free.length > 0 ? `; also in: ${list(free.map((inflow) => `${describe(id, inflow)} ${flow(inflow.flow_kg_s)}`))}` : '';
-    const reason = `${opening}; ${heldPhrase}${freePhrase}; ${this.outletPhrase(id, outlets)}.`;
+    const reason = `${opening}; ${heldPhrase}${freePhrase}${this.upstreamPhrase(id, held, words)}; ${this.outletPhrase(id, outlets)}.`;
     return { where: id, kind: 'header', flow_kg_s: vent, inflows, outlets, reason };
   }
 
@@ -164,6 +164,20 @@ class SolvedPlant {
     if (parts.length === 0) parts.push('what comes in brings more heat than the feedwater can take');
     const reason = `deaerator: ${flow(excess)} vented above its design share: ${parts.join('; ')}.`;
     return { where: 'deaerator', kind: 'deaerator excess', flow_kg_s: excess, inflows, outlets, reason };
+  }
+
+  /**
+   * One level up: where a letdown brings the surplus of a header that may not
+   * vent, what holds that header's own inflows (its spray, a unit at a minimum).
+   */
+  private upstreamPhrase(headerId: string, held: readonly VentInflow[], words: VentWords): string {
+    const phrases: string[] = [];
+    for (const upstream of new Set(held.filter((inflow) => inflow.what === 'letdown' && inflow.upstream && !this.canVent.has(inflow.upstream)).map((inflow) => inflow.upstream!))) {
+      if (upstream === headerId) continue;
+      const above = this.inflows(upstream).filter((inflow) => inflow.held !== null && inflow.what !== 'letdown');
+      if (above.length > 0) phrases.push(`; at ${upstream}, ${list(above.map((inflow) => `${describe(upstream, inflow)} (${words.flow(inflow.flow_kg_s)}, ${inflow.held})`))} cannot be turned down either`);
+    }
+    return phrases.join('');
   }
 
   /** Inflows of a header, one per source and kind, each with what holds it. */

@@ -88,6 +88,54 @@ describe('explainVents: a header that must vent', () => {
   });
 });
 
+describe('explainVents: surplus let down from a header that may not vent', () => {
+  // HP may not vent and is held at 380 degC; its waste-heat boiler makes 30 t/h at
+  // 420 degC, sprayed down with feedwater, for a user of 10 t/h. The rest must go
+  // down the letdown to LP, whose user takes 5 t/h, and LP vents what is left.
+  const text = `${caseOpening({ name: 'Let down and vented' })}power:
+  site_demand: 0 kW
+  import: { price: 100 USD/MWh, max: 10 MW }
+  export: { price: 0 USD/MWh, max: 0 MW }
+headers:
+  - id: hp
+    pressure: 40 barg
+    state: controlled
+    temperature: 380 degC
+    venting: forbidden
+  - { id: lp, pressure: 4 barg, state: floating, venting: allowed }
+boilers:
+  - id: b1
+    header: hp
+    fuels: [gas]
+    steam: { min: 0 t/h, max: 50 t/h }
+    outlet_temperature: 420 degC
+    efficiency: [{ load: 100 %, efficiency: 85 % }]
+    blowdown: 0 %
+    can_switch_off: false
+heat_recovery_boilers:
+  - { id: hrsg_hp, header: hp, steam: 30 t/h, outlet_temperature: 420 degC, blowdown: 0 % }
+letdowns:
+  - { id: prv, from: hp, to: lp, capacity: 60 t/h, desuperheater: none }
+users:
+  - { id: reactor, header: hp, steam: 10 t/h, condensate: { return: 0 % } }
+  - { id: dryer, header: lp, steam: 5 t/h, condensate: { return: 0 % } }
+deaerator:
+  pressure: 0.2 barg
+  heating_steam: lp
+  vent: 0 %
+objective: minimum_cost
+`;
+
+  it("names the letdown and, one level up, HP's waste-heat steam and spray", async () => {
+    const result = await solvedResult(text);
+    const vent = ventAt(result, 'lp');
+    const letdown = vent.inflows.find((inflow) => inflow.from === 'prv')!;
+    expect(letdown).toMatchObject({ what: 'letdown', upstream: 'hp', held: 'hp may not vent its own surplus' });
+    expect(vent.reason).toContain('letdown prv from hp (');
+    expect(vent.reason).toMatch(/; at hp, hp's spray water \([\d.]+ t\/h, holding hp at its set temperature\) and hrsg_hp's waste-heat steam \(30\.0 t\/h, unfired steam fixed by its process\) cannot be turned down either; /);
+  });
+});
+
 describe('explainVents: the deaerator above its design share', () => {
   // One header; a user returns all its condensate at 160 degC, hotter than the
   // deaerator's saturation at 0.2 barg (about 105 degC). The feedwater cannot take
@@ -171,7 +219,7 @@ describe('explainVents on hand-made data', () => {
     );
     expect(vents.map((vent) => vent.where)).toEqual(['mp', 'lp']);
     expect(vents[0].reason).toBe(
-      'mp: 2.0 kg/s more steam than its users (8.0 kg/s) take; letdown prv1 from hp (10.0 kg/s, hp may not vent its own surplus) cannot be turned down; letdown prv2 to lp is closed, and lp vents too.',
+      "mp: 2.0 kg/s more steam than its users (8.0 kg/s) take; letdown prv1 from hp (10.0 kg/s, hp may not vent its own surplus) cannot be turned down; at hp, hrsg's waste-heat steam (10.0 kg/s, unfired steam fixed by its process) cannot be turned down either; letdown prv2 to lp is closed, and lp vents too.",
     );
     expect(vents[1].reason).toBe('lp: 1.0 kg/s comes in and nothing draws on it; flash vapour from ft (1.0 kg/s, flashed from hot condensate or blowdown) cannot be turned down; nothing takes steam from lp to a lower pressure.');
   });
