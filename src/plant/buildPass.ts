@@ -46,11 +46,13 @@ export interface BuildOptions {
   fixedIntegers?: ReadonlyMap<string, number> | null;
   /** steam drawn from headers beyond their users' demand, kg/s, by header: the probe for marginal values */
   extraDemand?: ReadonlyMap<string, number>;
+  /** a unit whose limits are lifted (its inequalities dropped, its bounds widened), when diagnosing */
+  relaxUnit?: string;
 }
 
 export function buildPass(plant: Plant, contributions: readonly UnitContribution[], point: PassPoint, objective: Objective, options: BuildOptions = {}): Pass {
   const withSlack = options.withSlack ?? false;
-  const context = new BuildContext(plant, point, withSlack, options.fixedIntegers ?? null);
+  const context = new BuildContext(plant, point, withSlack, options.fixedIntegers ?? null, options.relaxUnit ?? null);
   for (const unit of contributions) unit.build(context);
   for (const [header, flow] of options.extraDemand ?? []) {
     context.stream({ from: header, to: PROCESS, kind: 'process', flow: expr().addConstant(flow), h: context.h(header), dh: context.headerMove(header), p: context.pressure(header) });

@@ -75,6 +75,8 @@ export class BuildContext {
     readonly withSlack: boolean,
     /** integer variables held at these values (by name): the pass is then a linear program */
     readonly fixedIntegers: ReadonlyMap<string, number> | null = null,
+    /** a unit whose limits are lifted, when diagnosing: does relaxing them help? */
+    readonly relaxedUnit: string | null = null,
   ) {
     this.model = new LinearModel(plant.name);
     this.headerEnthalpy = new Map(point.headerEnthalpy);
@@ -104,6 +106,7 @@ export class BuildContext {
   }
 
   variable(name: string, options: VariableOptions = {}): Variable {
+    if (this.relaxes(name)) return this.model.addVariable(name, relaxedBounds(options));
     const fixed = options.type && options.type !== 'continuous' ? this.fixedIntegers?.get(name) : undefined;
     if (fixed !== undefined) return this.model.addVariable(name, { lower: fixed, upper: fixed, type: 'continuous' });
     return this.model.addVariable(name, options);
@@ -115,10 +118,17 @@ export class BuildContext {
   }
 
   row(owner: string, name: string, expression: LinearExpression, sense: '<=' | '>=' | '=', rhs: number): void {
+    // A relaxed unit keeps its equations (its physics) and loses its inequalities (its limits).
+    if (owner === this.relaxedUnit && sense !== '=') return;
     this.model.addRow(name, expression, sense, rhs);
     const rows = this.unitRows.get(owner) ?? [];
     rows.push(name);
     this.unitRows.set(owner, rows);
+  }
+
+  /** Whether a variable belongs to the relaxed unit: every unit names its variables `<id>.<what>`. */
+  private relaxes(name: string): boolean {
+    return this.relaxedUnit !== null && name.startsWith(`${this.relaxedUnit}.`);
   }
 
   /** When diagnosing, lets a balance row be missed at a penalty: adds short - surplus to it. */
@@ -186,3 +196,19 @@ export class BuildContext {
     return cost;
   }
 }
+
+/**
+ * A relaxed unit's variable: continuous, down to zero, and with its upper
+ * bound lifted well past its limit (an on/off may lie anywhere in [0, 1]).
+ * Lifted to a finite bound, not removed, so that a relaxed model stays bounded
+ * where the case leaves some profitable flow open.
+ */
+function relaxedBounds(options: VariableOptions): VariableOptions {
+  const lower = Math.min(0, options.lower ?? 0);
+  if (options.type === 'binary' || options.type === 'integer') return { lower, upper: options.type === 'binary' ? 1 : (options.upper ?? Infinity), type: 'continuous' };
+  const upper = options.upper ?? Infinity;
+  return { lower, upper: Number.isFinite(upper) ? 2 * Math.abs(upper) + RELAXED_HEADROOM : upper };
+}
+
+/** Headroom added to a relaxed upper bound, in the variable's own unit (kg/s, kW). */
+const RELAXED_HEADROOM = 100;

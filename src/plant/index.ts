@@ -5,6 +5,7 @@ export { buildPass, massRowName, energyRowName, type Pass } from './buildPass.js
 export { contributionsOf } from './contributions.js';
 export type { UnitContribution, UnitReport, PointChange } from './contribution.js';
 export type { Diagnosis, Shortfall } from './diagnose.js';
+export { explainVents, type VentExplanation, type VentInflow, type VentOutlet, type VentWords } from './explainVents.js';
 export { flashSplit, type FlashSplit } from './physics/flash.js';
 export { sprayWaterRatio } from './physics/desuperheater.js';
 export { boilerFuel, blowdownFromCycles, blowdownFromFraction } from './physics/boilerFuel.js';

@@ -9,6 +9,8 @@ import { ATMOSPHERE, solvedEnthalpy } from './network.js';
 import type { Objective } from '../model/index.js';
 import type { MarginalValue } from './marginalValues.js';
 import type { CommitmentTried, PassRecord, PlantOutcome } from './solvePlant.js';
+import { explainVents, type VentExplanation } from './explainVents.js';
+import { formatQuantity } from '../units/index.js';
 
 export interface StreamResult {
   from: string;
@@ -115,6 +117,8 @@ export interface PlantResult {
   commitments: CommitmentTried[];
   /** the on/off decisions kept, 1 running, by variable name */
   commitment: Record<string, number>;
+  /** every vented flow and why that steam has no better use, its flows in the case's units */
+  vents: VentExplanation[];
 }
 
 export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): PlantResult {
@@ -241,6 +245,15 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
     marginal_value_unit: MARGINAL_VALUE_UNIT[outcome.objective],
     commitments: outcome.commitments,
     commitment: Object.fromEntries(outcome.commitment),
+    vents: explainVents({ headers, streams, units }, ventWords(plant.site.unitSystem)),
+  };
+}
+
+/** Flows and temperatures in a vent's sentence, as the report shows them: in the case's unit system. */
+function ventWords(system: 'si' | 'us'): { flow(kg_s: number): string; temperature(K: number): string } {
+  return {
+    flow: (kg_s) => formatQuantity(Math.abs(kg_s) < 1e-7 ? 0 : kg_s, 'massFlow', system),
+    temperature: (K) => formatQuantity(K, 'temperature', system),
   };
 }
 

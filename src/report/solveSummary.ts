@@ -54,6 +54,11 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const lossRows = [...losses].filter(([, value]) => value > 1e-9).map(([label, value]) => [label, flow(value)]);
   lines.push('', 'Losses (vents first: venting is usually the largest avoidable loss)');
   lines.push(lossRows.length > 0 ? table(['where', 'flow'], lossRows) : '  none');
+  // Why each vented flow has no better use, worded by the plant layer in the case's units.
+  if (result.vents.length > 0) {
+    lines.push('', '  Why each vent has no better use:');
+    for (const vent of result.vents) lines.push(`  - ${vent.reason}`);
+  }
 
   const units = result.units;
   const sources = units.filter((unit) => ['boiler', 'heatRecoveryBoiler', 'steamImport'].includes(unit.kind));

@@ -200,6 +200,8 @@ export class TurbineContribution implements UnitContribution {
     const inletH = this.inletH + move;
     const values: Record<string, number | string | boolean | null> = {
       running,
+      // the machine the shaft drives, or null for a generator
+      drives_machine: turbine.drives.kind === 'generator' ? null : turbine.drives.id,
       inlet_kg_s: flows[0] ?? 0,
       power_kW: power,
       inlet_h_kJ_kg: inletH,
@@ -224,11 +226,13 @@ export class TurbineContribution implements UnitContribution {
     values.steam_work_kW = steamWork;
     values.steam_rate_kg_kWh = power > 0 ? ((flows[0] ?? 0) * 3600) / power : null;
     const binding: string[] = [];
-    const near = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-6 * Math.max(1, Math.abs(b));
+    // A limit the case leaves open (infinite) is never reached.
+    const near = (a: number, b: number): boolean => Number.isFinite(b) && Math.abs(a - b) <= 1e-6 * Math.max(1, Math.abs(b));
     if (!running) binding.push('stopped');
     if (running && near(flows[0] ?? 0, turbine.inletFlow.max)) binding.push('inlet flow at maximum');
     if (running && turbine.inletFlow.min > 0 && near(flows[0] ?? 0, turbine.inletFlow.min)) binding.push('inlet flow at minimum');
     if (running && near(power, turbine.power.max)) binding.push('power at maximum');
+    if (running && turbine.power.min > 0 && near(power, turbine.power.min)) binding.push('power at minimum');
     turbine.stages.forEach((stage, k) => {
       const outflow = flows[k] - (flows[k + 1] ?? 0);
       if (running && near(outflow, stage.outflow.max) && stage.outflow.max < Infinity) binding.push(`stage ${k + 1} outflow at maximum`);
