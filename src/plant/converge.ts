@@ -61,13 +61,16 @@ export type NotConverged =
  * held. Throws PlantPhysicsError or PropertyRangeError for physics the case
  * cannot reach.
  */
-export async function converge(settings: LoopSettings, contributions: UnitContribution[], start: ReadonlyMap<string, number>, commitment: ReadonlyMap<string, number> | null): Promise<Converged | NotConverged> {
+export async function converge(settings: LoopSettings, contributions: UnitContribution[], start: ReadonlyMap<string, number> | PassPoint, commitment: ReadonlyMap<string, number> | null): Promise<Converged | NotConverged> {
   const { plant, objective, backend, tolerance, maxPasses } = settings;
   const passOptions = { ...settings.solveOptions, mipDuals: false };
-  const headerEnthalpy = new Map(start);
-  const trust = new Map<string, number>();
+  // From a bare guess of the headers' enthalpies, or warm from another converged
+  // point (its flows to linearise about and its trust radii): the first pass is then linearised too.
+  const warm = start instanceof Map ? null : (start as PassPoint);
+  const headerEnthalpy = new Map(warm ? warm.headerEnthalpy : (start as ReadonlyMap<string, number>));
+  const trust = new Map<string, number>(warm ? [...warm.trust].map(([id, radius]) => [id, Math.max(radius, TRUST.initial)]) : []);
   const lastMove = new Map<string, number>();
-  let previous: Map<string, number> | null = null;
+  let previous: Map<string, number> | null = warm?.previous ? new Map(warm.previous) : null;
   let fixed: ReadonlyMap<string, number> | null = commitment;
   let held = false;
   const passes: PassRecord[] = [];

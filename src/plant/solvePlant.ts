@@ -156,7 +156,8 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
     const key = keyOf(onOff);
     if (seen.has(key)) return;
     seen.add(key);
-    const outcome = await converge(settings, contributionsOf(plant), best.point.headerEnthalpy, onOff);
+    // Warm from the best point so far: its flows are as good a place to linearise about as any.
+    const outcome = await converge(settings, contributionsOf(plant), best.point, onOff);
     record(source, onOffOf(onOff), outcome);
   };
 
