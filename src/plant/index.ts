@@ -1,4 +1,6 @@
-export { solvePlant, initialHeaderEnthalpy, AUDIT_TOLERANCE, type PlantOutcome, type SolvePlantOptions, type PassRecord } from './solvePlant.js';
+export { solvePlant, initialHeaderEnthalpy, AUDIT_TOLERANCE, type PlantOutcome, type SolvePlantOptions, type PassRecord, type CommitmentTried } from './solvePlant.js';
+export { marginalValues, PROBE_FLOW, type MarginalValue } from './marginalValues.js';
+export { MARGINAL_VALUE_UNIT } from './results.js';
 export { plantResult, type PlantResult, type HeaderResult, type StreamResult, type Totals, type Kpis } from './results.js';
 export { auditPass, type Audit, type BalanceResidual } from './audit.js';
 export { buildPass, massRowName, energyRowName, type Pass } from './buildPass.js';

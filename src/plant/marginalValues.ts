@@ -10,7 +10,6 @@
 // with a small draw added or taken away, with the on/off decisions held, and
 // the units whose fuel or power moved are named.
 import type { SolverBackend } from '../lp/index.js';
-import type { Objective } from '../model/index.js';
 import { buildPass, ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
 import type { UnitReport } from './contribution.js';
 import type { Converged, LoopSettings } from './converge.js';
@@ -61,7 +60,7 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
       if (result.status !== 'optimal' || result.objective === null) return { value: null, setBy: [] };
       const probeSolution = passSolution(result);
       const changed = contributions.map((unit) => unit.report(probeSolution));
-      return { value: (result.objective - baseObjective) / flow, setBy: causes(base, changed, objective, flow) };
+      return { value: (result.objective - baseObjective) / flow, setBy: causes(base, changed, flow) };
     };
     const more = await probe(PROBE_FLOW);
     const less = await probe(-PROBE_FLOW);
@@ -74,8 +73,7 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
  * The units whose fuel, power or vent moved with the probe, largest first, in
  * words: "boiler_2 fuel", "tg1 power given up", "lp vent".
  */
-function causes(base: readonly UnitReport[], changed: readonly UnitReport[], objective: Objective, flow: number): string[] {
-  void objective;
+function causes(base: readonly UnitReport[], changed: readonly UnitReport[], flow: number): string[] {
   const moves: { phrase: string; size: number }[] = [];
   const num = (report: UnitReport | undefined, key: string): number => {
     const value = report?.values[key];
