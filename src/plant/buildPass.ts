@@ -1,6 +1,6 @@
 // One pass of the successive linearisation: with every property point fixed,
 // the plant becomes a linear model.
-import { expr, type LinearExpression } from '../lp/index.js';
+import { expr, term, type LinearExpression } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
 import { BuildContext, GJ_PER_KWH, T_PER_H_PER_KG_S, type BalanceSlack, type CostComponent, type PassPoint } from './context.js';
 import type { UnitContribution } from './contribution.js';
@@ -44,7 +44,7 @@ export interface BuildOptions {
   withSlack?: boolean;
   /** integer variables held at these values, by name */
   fixedIntegers?: ReadonlyMap<string, number> | null;
-  /** steam drawn from headers beyond their users' demand, kg/s, by header: the probe for marginal values */
+  /** steam drawn from headers beyond their users' demand, kg/s, by header (variables `<id>.extra_draw` held there): the probe for marginal values */
   extraDemand?: ReadonlyMap<string, number>;
   /** a unit whose limits are lifted (its inequalities dropped, its bounds widened), when diagnosing */
   relaxUnit?: string;
@@ -55,7 +55,9 @@ export function buildPass(plant: Plant, contributions: readonly UnitContribution
   const context = new BuildContext(plant, point, withSlack, options.fixedIntegers ?? null, options.relaxUnit ?? null);
   for (const unit of contributions) unit.build(context);
   for (const [header, flow] of options.extraDemand ?? []) {
-    context.stream({ from: header, to: PROCESS, kind: 'process', flow: expr().addConstant(flow), h: context.h(header), dh: context.headerMove(header), p: context.pressure(header) });
+    // A variable held at the draw, so that a solver session can move it without a rebuild.
+    const draw = context.variable(`${header}.extra_draw`, { lower: flow, upper: flow });
+    context.stream({ from: header, to: PROCESS, kind: 'process', flow: term(draw), h: context.h(header), dh: context.headerMove(header), p: context.pressure(header) });
   }
   for (const unit of contributions) unit.finish?.(context);
 

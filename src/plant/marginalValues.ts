@@ -9,8 +9,8 @@
 // one of them; so each side is also measured by re-solving that same model
 // with a small draw added or taken away, with the on/off decisions held, and
 // the units whose fuel or power moved are named.
-import type { SolverBackend } from '../lp/index.js';
-import { buildPass, ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
+import type { SolveResult } from '../lp/index.js';
+import { buildPass, ENERGY_ROW_SCALE, energyRowName, massRowName, type Pass } from './buildPass.js';
 import type { UnitReport } from './contribution.js';
 import type { Converged, LoopSettings } from './converge.js';
 import { passSolution } from './passSolution.js';
@@ -43,30 +43,49 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
   // The trust radii bound the loop's steps, not the plant: at convergence none
   // binds, so the probes open them and let the headers' enthalpies follow the draw.
   const probePoint = { ...point, trust: new Map([...point.trust].map(([id, radius]) => [id, Math.max(radius, PROBE_TRUST)])) };
-  const values: MarginalValue[] = [];
-  for (const header of plant.headers) {
+  const probeOptions = { ...settings.solveOptions, mipDuals: false, mipRelativeGap: 1e-12 };
+  const probes = plant.headers.flatMap((header) => [PROBE_FLOW, -PROBE_FLOW].map((flow) => ({ header: header.id, flow })));
+  const measured: { value: number | null; setBy: string[] }[] = probes.map(() => ({ value: null, setBy: [] }));
+  // A probe's figures, read while the units are built for the model its result belongs to.
+  const read = (index: number, result: SolveResult): boolean => {
+    if (result.status !== 'optimal' || result.objective === null) return false;
+    const changed = contributions.map((unit) => unit.report(passSolution(result)));
+    measured[index] = { value: (result.objective - baseObjective) / probes[index].flow, setBy: causes(base, changed, probes[index].flow) };
+    return true;
+  };
+  const build = (header: string, flow: number, fixed: ReadonlyMap<string, number>): Pass =>
+    buildPass(plant, contributions, probePoint, objective, { fixedIntegers: fixed, extraDemand: new Map(plant.headers.map((entry) => [entry.id, entry.id === header ? flow : 0])) });
+
+  // Every integer held, so each probe is a linear program: one model with a
+  // held draw at every header, re-solved warm with one draw moved where the
+  // backend keeps a session, else one model per probe.
+  const unmet: number[] = [];
+  if (backend.solveBoundVariants) {
+    const probeModel = build('', 0, converged.integers).context.model;
+    const results = await backend.solveBoundVariants(probeModel, probes.map((probe) => [[`${probe.header}.extra_draw`, probe.flow, probe.flow] as const]), probeOptions);
+    results.forEach((result, index) => {
+      if (!read(index, result)) unmet.push(index);
+    });
+  } else {
+    for (const [index, probe] of probes.entries()) {
+      if (!read(index, await backend.solve(build(probe.header, probe.flow, converged.integers).context.model, probeOptions))) unmet.push(index);
+    }
+  }
+  // Where the held load segments cannot take the draw, the segments of
+  // non-convex curves follow: a small MIP, solved to optimality, since its gap
+  // would swamp a difference this small.
+  if (onOff.size < converged.integers.size) {
+    for (const index of unmet) read(index, await backend.solve(build(probes[index].header, probes[index].flow, onOff).context.model, probeOptions));
+  }
+
+  return plant.headers.map((header, position) => {
     const massPrice = solution.shadowPrice(massRowName(header.id));
     const energyPrice = pass.context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
     const dual = massPrice === null || energyPrice === null ? null : massPrice + pass.context.h(header.id) * ENERGY_ROW_SCALE * energyPrice;
-    const solveProbe = async (flow: number, fixed: ReadonlyMap<string, number>) => {
-      const probePass = buildPass(plant, contributions, probePoint, objective, { fixedIntegers: fixed, extraDemand: new Map([[header.id, flow]]) });
-      // A MIP's gap would swamp a difference this small: where a load segment must change, solve it to optimality.
-      return backend.solve(probePass.context.model, { ...settings.solveOptions, mipDuals: false, mipRelativeGap: 1e-12 });
-    };
-    const probe = async (flow: number): Promise<{ value: number | null; setBy: string[] }> => {
-      // Every integer held first (a linear program); only where that cannot take the draw, the load segments of non-convex curves follow.
-      let result = await solveProbe(flow, converged.integers);
-      if (result.status !== 'optimal' && onOff.size < converged.integers.size) result = await solveProbe(flow, onOff);
-      if (result.status !== 'optimal' || result.objective === null) return { value: null, setBy: [] };
-      const probeSolution = passSolution(result);
-      const changed = contributions.map((unit) => unit.report(probeSolution));
-      return { value: (result.objective - baseObjective) / flow, setBy: causes(base, changed, flow) };
-    };
-    const more = await probe(PROBE_FLOW);
-    const less = await probe(-PROBE_FLOW);
-    values.push({ header: header.id, dual, more: more.value, less: less.value, moreSetBy: more.setBy, lessSetBy: less.setBy });
-  }
-  return values;
+    const more = measured[2 * position];
+    const less = measured[2 * position + 1];
+    return { header: header.id, dual, more: more.value, less: less.value, moreSetBy: more.setBy, lessSetBy: less.setBy };
+  });
 }
 
 /**

@@ -157,7 +157,7 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
     if (seen.has(key)) return;
     seen.add(key);
     // Warm from the best point so far: its flows are as good a place to linearise about as any.
-    const outcome = await converge(settings, contributionsOf(plant), best.point, onOff);
+    const outcome = await converge(settings, contributionsOf(plant), best.point, withHeldSegments(onOff, best.integers));
     record(source, onOffOf(onOff), outcome);
   };
 
@@ -193,6 +193,20 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
     if (best === before) break;
   }
   return { best, tried };
+}
+
+/**
+ * On/off decisions to try, with the best's other integers (load segments of
+ * non-convex fuel curves) held for every unit whose on/off does not change, so
+ * that only a unit just switched decides its segments again. A full set of
+ * integers (the MIP's) is taken as it is.
+ */
+function withHeldSegments(candidate: ReadonlyMap<string, number>, best: ReadonlyMap<string, number>): Map<string, number> {
+  if ([...candidate.keys()].some((name) => !name.endsWith('.on'))) return new Map(candidate);
+  const switched = [...candidate].filter(([name, value]) => best.get(name) !== value).map(([name]) => name.slice(0, -'.on'.length));
+  const held = new Map([...best].filter(([name]) => !name.endsWith('.on') && !switched.some((unit) => name.startsWith(`${unit}.`))));
+  for (const [name, value] of candidate) held.set(name, value);
+  return held;
 }
 
 function onOffOf(integers: ReadonlyMap<string, number>): Map<string, number> {
