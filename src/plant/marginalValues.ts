@@ -15,8 +15,13 @@ import type { UnitReport } from './contribution.js';
 import type { Converged, LoopSettings } from './converge.js';
 import { passSolution } from './passSolution.js';
 
-/** The probe's draw, kg/s (3.6 kg/h): small beside any header, so that a switch it sees is at the operating point, and large beside solver round-off (1e-9 of the objective). */
-export const PROBE_FLOW = 0.001;
+/**
+ * The probe's draw, kg/s (0.36 kg/h). The value read is the probe model's own
+ * dual, the slope of the optimum just beyond the operating point on that side,
+ * exact while no switch lies within the draw; the draw only has to move the
+ * solver off a degenerate point, so it can be far smaller than any header.
+ */
+export const PROBE_FLOW = 1e-4;
 
 /** Trust radius of the probes' header moves, kJ/kg: far beyond what 3.6 kg/h moves. */
 const PROBE_TRUST = 50;
@@ -50,7 +55,10 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
   const read = (index: number, result: SolveResult): boolean => {
     if (result.status !== 'optimal' || result.objective === null) return false;
     const changed = contributions.map((unit) => unit.report(passSolution(result)));
-    measured[index] = { value: (result.objective - baseObjective) / probes[index].flow, setBy: causes(base, changed, probes[index].flow) };
+    const header = probes[index].header;
+    // The slope beyond the point is the probe's dual; without duals (a MIP), the difference quotient.
+    const slope = result.dualsAvailable ? headerDual(result, header, probePoint.headerEnthalpy.get(header)!) : null;
+    measured[index] = { value: slope ?? (result.objective - baseObjective) / probes[index].flow, setBy: causes(base, changed, probes[index].flow) };
     return true;
   };
   const build = (header: string, flow: number, fixed: ReadonlyMap<string, number>): Pass =>
@@ -79,13 +87,31 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
   }
 
   return plant.headers.map((header, position) => {
-    const massPrice = solution.shadowPrice(massRowName(header.id));
-    const energyPrice = pass.context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
-    const dual = massPrice === null || energyPrice === null ? null : massPrice + pass.context.h(header.id) * ENERGY_ROW_SCALE * energyPrice;
+    const dual = headerDual(converged.result, header.id, pass.context.h(header.id));
     const more = measured[2 * position];
     const less = measured[2 * position + 1];
     return { header: header.id, dual, more: more.value, less: less.value, moreSetBy: more.setBy, lessSetBy: less.setBy };
   });
+}
+
+/**
+ * One more kg/s drawn at h moves the header's mass row by 1 and its energy row
+ * (where it has one) by h: the sum of both prices, objective units per kg/s.
+ */
+function headerDual(result: SolveResult, header: string, h: number): number | null {
+  if (!result.dualsAvailable) return null;
+  const mass = result.shadowPrice(massRowName(header));
+  const energy = safeShadowPrice(result, energyRowName(header));
+  return mass + h * ENERGY_ROW_SCALE * energy;
+}
+
+/** A row's shadow price, 0 for a row the model does not have (a header without an energy row). */
+function safeShadowPrice(result: SolveResult, row: string): number {
+  try {
+    return result.shadowPrice(row);
+  } catch {
+    return 0;
+  }
 }
 
 /**
@@ -110,6 +136,10 @@ function causes(base: readonly UnitReport[], changed: readonly UnitReport[], flo
     if (after.kind === 'grid') {
       const bought = delta('import_kW') - delta('export_kW');
       if (Math.abs(bought) > 1) moves.push({ phrase: bought * flow > 0 ? 'power bought' : 'power sold', size: Math.abs(bought) * 3 });
+    }
+    if (after.kind === 'deaerator') {
+      const vent = delta('excess_vent_kg_s');
+      if (Math.abs(vent) > 1e-3) moves.push({ phrase: 'deaerator excess vent', size: Math.abs(vent) * 2500 });
     }
     if (after.kind === 'header') {
       const vent = delta('vent_kg_s');

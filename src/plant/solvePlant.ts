@@ -156,8 +156,13 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
     const key = keyOf(onOff);
     if (seen.has(key)) return;
     seen.add(key);
-    // Warm from the best point so far: its flows are as good a place to linearise about as any.
-    const outcome = await converge(settings, contributionsOf(plant), best.point, withHeldSegments(onOff, best.integers));
+    // Warm from the best point so far, the load segments of unswitched units
+    // held; where that cannot be met, with every segment free; and last from
+    // the cold start, since a point far from this commitment's may be unable to
+    // reach it within the trust radii.
+    let outcome: Converged | NotConverged = await converge(settings, contributionsOf(plant), best.point, withHeldSegments(onOff, best.integers));
+    if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), best.point, onOffOf(onOff));
+    if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), onOffOf(onOff));
     record(source, onOffOf(onOff), outcome);
   };
 

@@ -71,6 +71,8 @@ export class TurbineContribution implements UnitContribution {
       if (stage.performance.kind === 'willans') {
         // Exactly linear in flow and on/off: no property point.
         stagePower.add(flow, stage.performance.slope).addExpression(onTimes(stage.performance.intercept), -1);
+        // Running, it passes at least its no-load flow: below it the line gives negative power.
+        if (stage.performance.intercept > 0) context.row(id, `${id}.section${k + 1}.no_load`, stagePower.clone(), '>=', 0);
       } else {
         // m (h_in - h_out) x efficiency, to first order in the inlet's move.
         const slopeIn = k === 0 ? 1 : this.exhaustSlope[k - 1];
