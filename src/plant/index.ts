@@ -15,3 +15,4 @@ export { expandIsentropic, expandToEnthalpy, impliedEfficiency, theoreticalSteam
 export { willansPower } from './physics/willans.js';
 export { PlantPhysicsError } from './units/user.js';
 export type { SiteEnergyBalance } from './siteBalance.js';
+export type { PassPoint } from './context.js';

@@ -115,7 +115,7 @@ export interface PlantResult {
   marginal_value_unit: (typeof MARGINAL_VALUE_UNIT)[Objective];
   /** on/off decisions tried, each converged on its own */
   commitments: CommitmentTried[];
-  /** the on/off decisions kept, 1 running, by variable name */
+  /** the integer decisions kept (on/off, 1 running, and load segments of non-convex fuel curves), by variable name */
   commitment: Record<string, number>;
   /** every vented flow and why that steam has no better use, its flows in the case's units */
   vents: VentExplanation[];

@@ -5,6 +5,7 @@ import type { Objective, Plant } from '../model/index.js';
 import { PropertyRangeError, saturatedVapour } from '../properties/index.js';
 import { auditPass, type Audit } from './audit.js';
 import { buildPass, ENERGY_ROW_SCALE, energyRowName, massRowName, type Pass } from './buildPass.js';
+import type { PassPoint } from './context.js';
 import type { UnitContribution } from './contribution.js';
 import { contributionsOf } from './contributions.js';
 import { AUDIT_TOLERANCE, converge, integerValues, type Converged, type LoopSettings, type NotConverged, type PassRecord } from './converge.js';
@@ -19,8 +20,14 @@ export interface SolvePlantOptions {
   /** largest enthalpy change between passes for convergence, kJ/kg (default from the case) */
   enthalpyTolerance?: number;
   maxPasses?: number;
-  /** another plant's on/off decisions (a scenario's base, say), tried as one more candidate */
+  /**
+   * Another plant's integer decisions (a scenario's base, say: on/off and load
+   * segments, by variable name), tried as one more candidate, with the units
+   * it does not have stopped; from `start`, that plant's converged point, when
+   * given, so that a variant that only adds an option reproduces its base.
+   */
   commitment?: ReadonlyMap<string, number>;
+  start?: PassPoint;
   /** try single flips of each switchable unit when there are at most this many (default 20; 0 for none) */
   maxFlips?: number;
   /** measure each header's one-more and one-less values by re-solving (default true) */
@@ -54,8 +61,10 @@ export type PlantOutcome =
       backend: string;
       marginalValues: MarginalValue[];
       commitments: CommitmentTried[];
-      /** on/off decisions kept, by variable name, for a variant to start from */
+      /** integer decisions kept (on/off and load segments), by variable name, for a variant to start from */
       commitment: Map<string, number>;
+      /** the converged point, linearised about the kept solution, for a variant to start from */
+      start: PassPoint;
     }
   | { ok: false; plant: Plant; reason: 'infeasible' | 'not_converged' | 'physics' | 'audit' | 'solver'; message: string; diagnosis?: Diagnosis; passes: PassRecord[] };
 
@@ -97,7 +106,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
     const audit = useKept ? auditPass(pass, solution, best.contributions.map((unit) => unit.report(solution))) : best.audit;
     if (audit.worstRelative > AUDIT_TOLERANCE) return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes: best.passes };
     if (!probe) values.push(...dualValues(pass, solution));
-    const commitment = new Map([...best.integers].filter(([name]) => name.endsWith('.on')));
+    const commitment = new Map(best.integers);
+    const start: PassPoint = { headerEnthalpy: solvedHeaderEnthalpy(pass, solution), previous: solutionValues(pass, result), trust: new Map(pass.context.trust) };
     return {
       ok: true,
       plant,
@@ -113,6 +123,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       marginalValues: values,
       commitments: tried,
       commitment,
+      start,
     };
   } catch (error) {
     if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
@@ -157,11 +168,10 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
     if (seen.has(key)) return;
     seen.add(key);
     // Warm from the best point so far, the load segments of unswitched units
-    // held; where that cannot be met, with every segment free; and last from
-    // the cold start, since a point far from this commitment's may be unable to
-    // reach it within the trust radii.
+    // held; where that cannot be met, from the cold start with every segment
+    // free, since a point far from this commitment's may be unable to reach it
+    // within the trust radii.
     let outcome: Converged | NotConverged = await converge(settings, contributionsOf(plant), best.point, withHeldSegments(onOff, best.integers));
-    if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), best.point, onOffOf(onOff));
     if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), onOffOf(onOff));
     record(source, onOffOf(onOff), outcome);
   };
@@ -172,10 +182,17 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
   // Its load segments too (non-convex fuel curves), which the first pass decided far from here.
   if (confirmed.status === 'optimal') await attempt('MIP at the converged points', integerValues(check, confirmed));
   if (options.commitment) {
-    // The base plant's decisions, with the units it does not have stopped: the
-    // base plant itself, so an added unit that may stop can never cost more.
-    const base = new Map([...firstOnOff].map(([name]) => [name, options.commitment!.get(name) ?? 0]));
-    await attempt('base plant', base);
+    // The base plant's decisions, with the units it does not have stopped (and
+    // their segments empty): the base plant itself, from its own point where
+    // given, so an added unit that may stop can never cost more.
+    const base = new Map([...first.integers].map(([name]) => [name, options.commitment!.get(name) ?? 0]));
+    const key = keyOf(base);
+    if (!seen.has(key)) {
+      seen.add(key);
+      let outcome: Converged | NotConverged = await converge(settings, contributionsOf(plant), options.start ?? best.point, base);
+      if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), onOffOf(base));
+      record('base plant', onOffOf(base), outcome);
+    }
   }
   const maxFlips = options.maxFlips ?? 20;
   const boilers = new Set(plant.boilers.map((boiler) => `${boiler.id}.on`));
@@ -239,6 +256,12 @@ function dualValues(pass: Pass, solution: PassSolution): MarginalValue[] {
     const dual = massPrice === null || energyPrice === null ? null : massPrice + pass.context.h(header.id) * ENERGY_ROW_SCALE * energyPrice;
     return { header: header.id, dual, more: null, less: null, moreSetBy: [], lessSetBy: [] };
   });
+}
+
+/** Every variable's value in a solution, by name, header moves excepted (a next point's moves are 0). */
+function solutionValues(pass: Pass, result: SolveResult): Map<string, number> {
+  const moves = new Set([...pass.context.headerMoves.values()].map((variable) => variable.name));
+  return new Map(pass.context.model.variables.filter((variable) => !moves.has(variable.name)).map((variable) => [variable.name, result.value(variable)]));
 }
 
 /** Each header's enthalpy in the solution: its point plus its solved move. */

@@ -29,12 +29,12 @@ export function workerCount(jobs: number, options: PoolOptions = {}): number {
 }
 
 /**
- * Solves every plant; outcomes come back in the order given. `commitments[i]`,
- * where given, is another solve's on/off decisions tried for plant i.
+ * Solves every plant; outcomes come back in the order given. `warm[i]`, where
+ * given, is another solve's decisions and point, tried for plant i.
  */
-export async function solvePlants(plants: Plant[], options: PoolOptions = {}, commitments: (Record<string, number> | undefined)[] = []): Promise<JobOutcome[]> {
+export async function solvePlants(plants: Plant[], options: PoolOptions = {}, warm: (Pick<JobOptions, 'commitment' | 'start'> | undefined)[] = []): Promise<JobOutcome[]> {
   const baseOptions: JobOptions = { objective: options.objective, backend: options.backend };
-  const optionsOf = (index: number): JobOptions => (commitments[index] ? { ...baseOptions, commitment: commitments[index] } : baseOptions);
+  const optionsOf = (index: number): JobOptions => (warm[index] ? { ...baseOptions, ...warm[index] } : baseOptions);
   const count = workerCount(plants.length, options);
   const outcomes: JobOutcome[] = new Array(plants.length);
   let done = 0;

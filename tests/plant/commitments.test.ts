@@ -25,7 +25,7 @@ describe('adding a unit that may switch off never raises the converged optimum',
     const without = await solvePlant(base);
     if (!without.ok) throw new Error(without.message);
     // Alone, and told the base plant's decisions, as evaluate does.
-    for (const options of [{}, { commitment: without.commitment }]) {
+    for (const options of [{}, { commitment: without.commitment, start: without.start }]) {
       const withIt = await solvePlant(withTurbine, options);
       if (!withIt.ok) throw new Error(withIt.message);
       expect(noWorse(withIt.result.objective!, without.result.objective!), `${withIt.result.objective} against ${without.result.objective}`).toBe(true);
@@ -52,7 +52,7 @@ describe('adding a unit that may switch off never raises the converged optimum',
 `;
         const text = plantText(shape).text;
         const withText = text.includes('turbines:\n') ? text.replace('turbines:\n', `turbines:\n${turbine}`) : text.replace('letdowns:\n', `turbines:\n${turbine}letdowns:\n`);
-        const withIt = await solvePlant(loadPlant(withText), { probeMarginalValues: false, commitment: without.commitment });
+        const withIt = await solvePlant(loadPlant(withText), { probeMarginalValues: false, commitment: without.commitment, start: without.start });
         expect(withIt.ok, withIt.ok ? '' : withIt.message).toBe(true);
         if (!withIt.ok) return;
         compared += 1;

@@ -1,16 +1,18 @@
 import { describe, expect, test } from 'vitest';
 import { loadCase } from '../../src/model/index.js';
-import { plantResult, solvePlant } from '../../src/plant/index.js';
+import { plantResult, solvePlant, type SolvePlantOptions } from '../../src/plant/index.js';
 import { compareScenarios, evaluateProjects, runSweep, screenLetdowns, workersAvailable } from '../../src/scenarios/index.js';
 
 const loaded = await loadCase(new URL('../../cases/kestrel-bay-board-mill.yaml', import.meta.url).pathname);
 if (!loaded.ok) throw new Error('the demo case must load');
 const { variants } = loaded;
 
-async function separate(plant: Parameters<typeof solvePlant>[0], commitment?: ReadonlyMap<string, number>): Promise<{ cost: number; commitment: Map<string, number> }> {
-  const outcome = await solvePlant(plant, commitment ? { commitment } : {});
+type Warm = Pick<SolvePlantOptions, 'commitment' | 'start'>;
+
+async function separate(plant: Parameters<typeof solvePlant>[0], warm: Warm = {}): Promise<{ cost: number; warm: Warm }> {
+  const outcome = await solvePlant(plant, warm);
   if (!outcome.ok) throw new Error(outcome.message);
-  return { cost: plantResult(outcome).totals.cost_per_h, commitment: outcome.commitment };
+  return { cost: plantResult(outcome).totals.cost_per_h, warm: { commitment: outcome.commitment, start: outcome.start } };
 }
 
 async function separateCost(plant: Parameters<typeof solvePlant>[0]): Promise<number> {
@@ -45,7 +47,7 @@ describe('scenarios of the demo mill', () => {
       const withProject = entry.plants.find((candidate) => candidate.scenario === scenario.id)!.plant;
       // A project is solved trying its scenario's on/off decisions too, as evaluate does.
       const base = await separate(scenario.plant);
-      expected += scenario.hours * (base.cost - (await separate(withProject, base.commitment)).cost);
+      expected += scenario.hours * (base.cost - (await separate(withProject, base.warm)).cost);
     }
     expect(Math.round(project.annual_saving * 100)).toBe(Math.round(expected * 100));
     expect(project.simple_payback_years).toBeCloseTo(project.capitalCost / (expected - project.fixedOmPerYear), 9);
