@@ -29,7 +29,7 @@ describe('scenarios of the demo mill', () => {
       annual += scenario.hours * separate;
     }
     expect(comparison.annual.cost_per_year).toBeCloseTo(annual, 6);
-  }, 120_000);
+  });
   test('a project saving equals the difference of the two separate solves, to the cent', async () => {
     const outcome = await evaluateProjects(variants, ['more_condensate']);
     const project = outcome.projects[0];
@@ -49,5 +49,5 @@ describe('scenarios of the demo mill', () => {
     const costs = sweep.runs.map((run) => (run.ok ? run.cost_per_h : NaN));
     expect(costs).toHaveLength(9);
     for (let index = 1; index < costs.length; index++) expect(costs[index]).toBeGreaterThanOrEqual(costs[index - 1] - 1e-9);
-  }, 120_000);
+  });
 });
