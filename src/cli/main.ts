@@ -4,6 +4,8 @@ import yargs from 'yargs';
 import { hideBin } from 'yargs/helpers';
 import { commands } from './commands/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
+import { removePendingOnExit } from './pendingFiles.js';
+import { handleStdoutErrors } from './stdout.js';
 
 /** yargs reads a lone "-" as an unknown argument, not as an option's value ("--batch -" for stdin). */
 function joinStdinValues(argv: string[]): string[] {
@@ -44,11 +46,8 @@ export async function main(argv: string[]): Promise<number> {
   return (process.exitCode as number | undefined) ?? 0;
 }
 
-// A reader that closes early (`steamwright solve x.yaml | head`) is not an error.
-process.stdout.on('error', (error: NodeJS.ErrnoException) => {
-  if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
-  throw error;
-});
+handleStdoutErrors();
+removePendingOnExit();
 
 main(hideBin(process.argv)).then(
   (code) => {
