@@ -28,7 +28,7 @@ describe('planOutputs', () => {
       { option: '--svg', path: join(dir, 'a') },
       { option: '--csv', path: '' },
       { option: '--md', path: dir },
-    ]).catch((caught: unknown) => caught as Error);
+    ]).then(() => new Error("no error"), (caught: unknown) => caught as Error);
     expect(error.message.split('\nsteamwright: ')).toEqual([
       `--svg "${join(dir, 'a')}" is the same file as --out "${join(dir, 'a')}"; give each output its own file`,
       '--csv needs a file name, found an empty one',
