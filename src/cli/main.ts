@@ -18,6 +18,31 @@ function joinStdinValues(argv: string[]): string[] {
   return joined;
 }
 
+/** Options whose empty value means something ("--md" alone: standard output). */
+const EMPTY_ALLOWED = new Set(['md', 'csv']);
+
+/**
+ * Every command: an option given twice, or given an empty value, is a usage
+ * error (exit 2) rather than an array or an empty string reaching a handler.
+ */
+function checkOptionValues(argv: Record<string, unknown>): true {
+  const problems: string[] = [];
+  // yargs also stores "export-lp" as "exportLp", and "--out" under its alias "o".
+  const keys = Object.keys(argv).filter((key) => key !== '_' && key !== '$0' && !(key.length > 1 && /[A-Z]/.test(key)));
+  const long = keys.filter((key) => key.length > 1);
+  const isAlias = (key: string): boolean => key.length === 1 && long.some((other) => JSON.stringify(argv[other]) === JSON.stringify(argv[key]));
+  for (const key of keys) {
+    const value = argv[key];
+    if (!(Array.isArray(value) || (value === '' && !EMPTY_ALLOWED.has(key))) || isAlias(key)) continue;
+    const flag = key.length === 1 ? `-${key}` : `--${key}`;
+    problems.push(Array.isArray(value)
+      ? `${flag} was given ${value.length} times (${value.map((item) => JSON.stringify(item)).join(', ')}); give it once`
+      : `${flag} needs a value, found an empty one`);
+  }
+  if (problems.length > 0) throw new CliError(problems.join('; '), EXIT_USAGE);
+  return true;
+}
+
 export async function main(argv: string[]): Promise<number> {
   const parser = yargs(joinStdinValues(argv))
     .scriptName('steamwright')
@@ -25,6 +50,7 @@ export async function main(argv: string[]): Promise<number> {
     .strict()
     .demandCommand(1, 'Name a command, for example: steamwright state --p "10 barg" --x 1')
     .recommendCommands()
+    .check(checkOptionValues, true)
     .help()
     .version()
     .wrap(Math.min(100, process.stdout.columns ?? 100))
