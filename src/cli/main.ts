@@ -34,7 +34,7 @@ function checkOptionValues(argv: Record<string, unknown>): true {
   for (const key of keys) {
     const value = argv[key];
     if (!(Array.isArray(value) || (value === '' && !EMPTY_ALLOWED.has(key))) || isAlias(key)) continue;
-    const flag = key.length === 1 ? `-${key}` : `--${key}`;
+    const flag = `--${key}`;
     problems.push(Array.isArray(value)
       ? `${flag} was given ${value.length} times (${value.map((item) => JSON.stringify(item)).join(', ')}); give it once`
       : `${flag} needs a value, found an empty one`);
