@@ -118,6 +118,8 @@ const cases: HostileCase[] = [
       expect(answers[5].T_K).toBe(400);
     },
   },
+  // Class 6: solver end states give advice.
+  { title: 'solve: the cross-check backend\'s infeasible point is refused with advice', args: ['solve', join(projectRoot, 'cases', 'kestrel-bay-board-mill.yaml'), '--objective', 'max-power', '--solver', 'jslp'], code: 1, says: /returned a point that is not feasible.*; javascript-lp-solver is the cross-check backend: solve with --solver highs$/m, oneLine: true },
   // Class 5: options.
   { title: 'solve: a doubled --solver', args: ['solve', 'c.yaml', '--solver', 'jslp', '--solver', 'highs'], code: 2, says: /--solver was given 2 times \("jslp", "highs"\); give it once/, oneLine: true },
   { title: 'report: a doubled --out', args: ['report', 'c.yaml', '--out', 'a.html', '--out', 'b.html'], code: 2, says: /--out was given 2 times/, oneLine: true },

@@ -91,5 +91,7 @@ describe('HiGHS backend on textbook LPs', () => {
     expect(result.status).toBe('time_limit');
     expect(result.objective).not.toBeNull();
     expect(result.primal.size).toBeGreaterThan(0);
+    // The message gives the gap and what to change.
+    expect(result.message).toMatch(/^HiGHS reached the time limit of 1 s; the best point found is within [\d.]+ % of the best possible \(MIP gap\); raise solver\.time_limit_seconds or solver\.mip_gap to accept it$/);
   });
 });

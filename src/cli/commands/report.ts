@@ -7,6 +7,7 @@ import { plantResult, solvePlant } from '../../plant/index.js';
 import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, type ScenarioSection } from '../../report/index.js';
 import { compareScenarios } from '../../scenarios/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { solveFailure } from '../solveFailure.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 import { OBJECTIVE_WORDS } from './solve.js';
@@ -70,7 +71,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     }
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
     const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw new CliError(`${args.case}${args.scenario ? ` scenario "${args.scenario}"` : ''}: ${outcome.message}`, EXIT_PROBLEMS);
+    if (!outcome.ok) throw solveFailure(args.case, args.scenario, outcome, args.solver);
     const result = plantResult(outcome);
     const format = plantDisplayFormat(plant);
 

@@ -7,6 +7,7 @@ import { plantResult, solvePlant } from '../../plant/index.js';
 import { solveSummary } from '../../report/index.js';
 import { planOutputs, writeOutputs } from '../outputFiles.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { solveFailure } from '../solveFailure.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 
 interface SolveArgs {
@@ -55,7 +56,7 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       plant = scenario.plant;
     }
     const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw new CliError(`${args.case}${args.scenario ? ` scenario "${args.scenario}"` : ''}: ${outcome.message}`, EXIT_PROBLEMS);
+    if (!outcome.ok) throw solveFailure(args.case, args.scenario, outcome, args.solver);
     const result = plantResult(outcome);
     const summary = args.json ? `${JSON.stringify(result, null, 2)}\n` : solveSummary(result, { atmosphericPressure_MPa: loaded.plant.site.atmosphericPressure });
     const lp = args['export-lp'] !== undefined ? toLpFormat(outcome.pass.context.model).text : '';
