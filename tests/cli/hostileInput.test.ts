@@ -98,6 +98,7 @@ const cases: HostileCase[] = [
   { title: 'init: into a file that is not a folder', args: ['init', 'plain.txt/new.yaml'], code: 2, says: /cannot write plain\.txt\/new\.yaml: plain\.txt is not a folder/, oneLine: true },
   { title: 'init: over an existing file', args: ['init', 'c.yaml'], code: 2, says: /c\.yaml already exists/, oneLine: true },
   { title: 'state --batch: a folder', args: ['state', '--batch', 'folder'], code: 2, says: /--batch: "folder" is a folder/, oneLine: true },
+  { title: 'state --batch: a file that cannot be opened', args: ['state', '--batch', 'plain.txt/points.jsonl'], code: 2, says: /--batch: cannot read "plain\.txt\/points\.jsonl": a part of the path is not a folder/, oneLine: true },
   { title: 'state --batch -: standard input from a folder', args: ['state', '--batch', '-'], stdin: 'folder', code: 2, says: /--batch -: standard input is a folder/, oneLine: true },
   // Class 4: bounded reads.
   { title: 'check: /dev/zero is read no further than 2 MB', args: ['check', '/dev/zero'], code: 1, says: /reading stopped after 2,000,000 bytes; a case file may be at most 2 MB/ },
