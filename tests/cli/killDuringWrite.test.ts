@@ -6,9 +6,9 @@ import { mkdtempSync, readFileSync, readdirSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { projectRoot } from '../helpers/cli.js';
+import { smallCase } from '../plant/helpers/cases.js';
 
 const binary = join(projectRoot, 'dist', 'src', 'cli', 'main.js');
-const CASE = join(projectRoot, 'cases', 'millbrook-creamery.yaml');
 
 /** Runs the command with the write hold on, sends `signal` once it holds, and resolves its exit. */
 function killWhileWriting(args: string[], signal: NodeJS.Signals): Promise<{ code: number | null; stderr: string }> {
@@ -32,20 +32,22 @@ describe('killed during a write', () => {
   for (const [signal, code] of [['SIGTERM', 143], ['SIGINT', 130]] as const) {
     it(`report with two outputs, ${signal}: old file kept, no new file, no temporary file`, async () => {
       const dir = mkdtempSync(join(tmpdir(), 'steamwright-kill-'));
+      writeFileSync(join(dir, 'c.yaml'), smallCase());
       writeFileSync(join(dir, 'r.html'), 'old report');
-      const run = await killWhileWriting(['report', CASE, '--out', join(dir, 'r.html'), '--svg', join(dir, 'r.svg')], signal);
+      const run = await killWhileWriting(['report', join(dir, 'c.yaml'), '--out', join(dir, 'r.html'), '--svg', join(dir, 'r.svg')], signal);
       expect(run.code).toBe(code);
       expect(run.stderr).toMatch(new RegExp(`steamwright: stopped by ${signal}; no output was written\\n$`));
       expect(run.stderr).not.toMatch(/\n\s+at /);
-      expect(readdirSync(dir)).toEqual(['r.html']);
+      expect(readdirSync(dir).sort()).toEqual(['c.yaml', 'r.html']);
       expect(readFileSync(join(dir, 'r.html'), 'utf8')).toBe('old report');
     });
   }
 
   it('solve --export-lp, SIGTERM: no LP file and no temporary file', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'steamwright-kill-'));
-    const run = await killWhileWriting(['solve', CASE, '--export-lp', join(dir, 'm.lp')], 'SIGTERM');
+    writeFileSync(join(dir, 'c.yaml'), smallCase());
+    const run = await killWhileWriting(['solve', join(dir, 'c.yaml'), '--export-lp', join(dir, 'm.lp')], 'SIGTERM');
     expect(run.code).toBe(143);
-    expect(readdirSync(dir)).toEqual([]);
+    expect(readdirSync(dir)).toEqual(['c.yaml']);
   });
 });
