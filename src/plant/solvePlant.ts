@@ -241,12 +241,14 @@ function keyOf(onOff: ReadonlyMap<string, number>): string {
   return [...onOff].map(([name, value]) => `${name}=${value}`).join(',');
 }
 
-/** Whether a converged candidate beats the best so far by more than the MIP gap. */
+/** Whether a converged candidate beats the best so far beyond round-off. */
 function improves(candidate: Converged, best: Converged, objective: Objective): boolean {
   const value = candidate.result.objective;
   const held = best.result.objective;
   if (value === null || held === null) return false;
-  const margin = Math.max(1e-9, candidate.pass.context.plant.solver.mipGap) * Math.max(1, Math.abs(held));
+  // Converged objectives are linear programs' optima with every integer held:
+  // no MIP gap applies, only round-off.
+  const margin = 1e-9 * Math.max(1, Math.abs(held));
   return objective === 'maximumPower' ? value > held + margin : value < held - margin;
 }
 
