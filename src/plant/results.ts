@@ -2,6 +2,7 @@
 // the audit, in SI numbers. The report layer formats it; `--json` prints it.
 import { statePH } from '../properties/index.js';
 import type { Audit } from './audit.js';
+import type { IndependentAudit } from './verify/index.js';
 import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
 import type { UnitReport } from './contribution.js';
 import { ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
@@ -91,6 +92,8 @@ export interface PlantResult {
     worst: string;
     balances: Audit['balances'];
     site_energy_balance: Audit['site'];
+    /** every stream and unit worked out again from the case with IF97: per unit mass, energy, entropy generation */
+    independent: IndependentAudit;
   };
   passes: PassRecord[];
   marginal_power_value_per_kWh: number | null;
@@ -215,6 +218,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       worst: audit.worstDescription,
       balances: audit.balances,
       site_energy_balance: audit.site,
+      independent: outcome.independentAudit,
     },
     passes: outcome.passes,
     marginal_power_value_per_kWh: solution.shadowPrice('site.power'),

@@ -10,6 +10,7 @@ import { contributionsOf } from './contributions.js';
 import { diagnose, type Diagnosis } from './diagnose.js';
 import { passSolution, type PassSolution } from './passSolution.js';
 import { PlantPhysicsError } from './units/user.js';
+import { auditSolve, type IndependentAudit } from './verify/index.js';
 
 export interface SolvePlantOptions {
   objective?: Objective;
@@ -30,7 +31,7 @@ export interface PassRecord {
 }
 
 export type PlantOutcome =
-  | { ok: true; plant: Plant; objective: Objective; pass: Pass; solution: PassSolution; result: SolveResult; headerEnthalpy: Map<string, number>; contributions: UnitContribution[]; passes: PassRecord[]; audit: Audit; backend: string }
+  | { ok: true; plant: Plant; objective: Objective; pass: Pass; solution: PassSolution; result: SolveResult; headerEnthalpy: Map<string, number>; contributions: UnitContribution[]; passes: PassRecord[]; audit: Audit; independentAudit: IndependentAudit; backend: string }
   | { ok: false; plant: Plant; reason: 'infeasible' | 'not_converged' | 'physics' | 'audit' | 'solver'; message: string; diagnosis?: Diagnosis; passes: PassRecord[] };
 
 /** Audit residuals above this relative size fail the solve. */
@@ -109,12 +110,16 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
         result = keptResult;
         solution = passSolution(keptResult);
       }
-      const audit = auditPass(pass, solution, contributions.map((unit) => unit.report(solution)));
+      const reports = contributions.map((unit) => unit.report(solution));
+      const audit = auditPass(pass, solution, reports);
       if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
         if (audit.worstRelative > AUDIT_TOLERANCE) {
           return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes };
         }
-        return { ok: true, plant, objective, pass, solution, result, headerEnthalpy: pointsOf(pass), contributions, passes, audit, backend: result.backend };
+        // The independent audit: the solve's flows and header states through the case's own physics.
+        const independentAudit = auditSolve(plant, pass.context.headerEnthalpy, reports);
+        if (!independentAudit.ok) return { ok: false, plant, reason: 'audit', message: independentAudit.summary, passes };
+        return { ok: true, plant, objective, pass, solution, result, headerEnthalpy: pointsOf(pass), contributions, passes, audit, independentAudit, backend: result.backend };
       }
     }
     const last = passes[passes.length - 1]?.largestChange;
