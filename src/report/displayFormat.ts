@@ -40,6 +40,12 @@ export interface DisplayFormat {
   fuelPerPower(kJ_kWh: number | null): string;
   fuelPerPowerUnit: string;
   fuelPerPowerValue(kJ_kWh: number): number;
+  /** a mass residual in exponent form, t/h or klb/h */
+  massResidual(kg_s: number): string;
+  /** entropy generation rate: kW/K (SI) or Btu/(h R) (US) */
+  entropyRate(kW_K: number): string;
+  /** a heat rate or an energy residual: kW (SI) or Btu/h (US), to `digits` significant figures in exponent form */
+  heatResidual(kW: number): string;
 }
 
 /** Values within solver round-off of zero show as zero. */
@@ -83,6 +89,10 @@ export function displayFormat(system: UnitSystem, currency: string, atmosphericP
     },
     fuelPerPowerUnit: system === 'si' ? 'MJ/kWh' : 'Btu/kWh',
     fuelPerPowerValue: (kJ_kWh) => (system === 'si' ? kJ_kWh / 1000 : kJ_kWh / KJ_PER_BTU),
+    massResidual: (kg_s) => `${fromSI(kg_s, 'massFlow', displayUnit('massFlow', system)).toExponential(2)} ${displayUnit('massFlow', system)}`,
+    // 1 kW/K = 3412.1416 Btu/h per 1.8 R
+    entropyRate: (kW_K) => (system === 'si' ? `${kW_K.toPrecision(4)} kW/K` : `${((kW_K * BTU_PER_H_PER_KW) / 1.8).toPrecision(4)} Btu/(h R)`),
+    heatResidual: (kW) => (system === 'si' ? `${kW.toExponential(2)} kW` : `${(kW * BTU_PER_H_PER_KW).toExponential(2)} Btu/h`),
   };
 }
 

@@ -182,11 +182,36 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       balance.id,
       balance.kind,
       `${fromSI(balance.mass, 'massFlow', massUnit).toExponential(2)} ${massUnit}`,
-      balance.energy === null ? '-' : `${balance.energy.toExponential(2)} kW`,
+      balance.energy === null ? '-' : format.heatResidual(balance.energy),
       `${balance.massRelative.toExponential(1)} / ${balance.energyRelative === null ? '-' : balance.energyRelative.toExponential(1)}`,
     ]),
   });
+  tables.push(independentAuditTable(result, format));
   return tables;
+}
+
+/** The independent audit per unit and node: residuals, entropy generation, the unit's own relations. */
+export function independentAuditTable(result: PlantResult, format: DisplayFormat): ReportTable {
+  const audit = result.audit.independent;
+  const rows = audit.units.map((unit) => {
+    const worst = unit.checks.reduce<(typeof unit.checks)[number] | null>((found, check) => (found === null || check.relative > found.relative ? check : found), null);
+    return [
+      unit.id,
+      kindWords(unit.kind),
+      unit.mass_relative.toExponential(1),
+      unit.energy_relative === null ? '-' : unit.energy_relative.toExponential(1),
+      unit.entropy_generation_kW_K === null ? '-' : format.entropyRate(unit.entropy_generation_kW_K),
+      worst ? `${worst.what} ${worst.relative.toExponential(1)}` : '-',
+      unit.problems.length === 0 ? 'passes' : `FAILS: ${unit.problems.join('; ')}`,
+    ];
+  });
+  return {
+    id: 'independent-audit',
+    title: 'Independent audit (states and relations recomputed with IF97)',
+    headings: ['unit', 'kind', 'mass (relative)', 'energy (relative)', 'entropy generation', 'largest relation difference', 'result'],
+    rows,
+    alarmRows: audit.units.flatMap((unit, index) => (unit.problems.length > 0 ? [index] : [])),
+  };
 }
 
 /** "heatRecoveryBoiler" -> "heat recovery boiler". */

@@ -2,6 +2,7 @@
 import type { PlantResult } from '../plant/index.js';
 import { displayFormat } from './displayFormat.js';
 import { SAFETY_CAUTION } from './safety.js';
+import { independentAuditTable } from './reportTables.js';
 import { table } from './table.js';
 
 export interface SummaryOptions {
@@ -136,8 +137,11 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const audit = result.audit;
   lines.push(
     '',
-    `Audit: largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, largest energy residual ${audit.max_energy_residual_kW.toExponential(2)} kW (${audit.worst}).`,
+    `Audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, largest energy residual ${format.heatResidual(audit.max_energy_residual_kW)} (${audit.worst}).`,
   );
+  const independent = independentAuditTable(result, format);
+  lines.push('', `${independent.title}: ${result.audit.independent.summary}`);
+  lines.push(table(independent.headings, independent.rows));
   lines.push('', SAFETY_CAUTION, '');
   return lines.join('\n');
 }
