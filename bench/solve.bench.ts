@@ -5,7 +5,8 @@ import { spawnSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { loadCaseText } from '../src/model/index.js';
-import { solvePlant } from '../src/plant/index.js';
+import { plantResult, solvePlant } from '../src/plant/index.js';
+import { auditPlant, solvedPlantFromReports } from '../src/plant/verify/index.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const cli = fileURLToPath(new URL('../src/cli/main.js', import.meta.url));
@@ -42,8 +43,21 @@ for (const name of cases) {
     inProcess.push(ms);
     perPass.push(ms / Math.max(1, passes));
   }
+  // The independent audit alone, on the last solve's flows (it runs once per solve).
+  const last = await solvePlant(loaded.plant);
+  if (!last.ok) throw new Error(`${name}: ${last.message}`);
+  const result = plantResult(last);
+  const solved = solvedPlantFromReports(result.headers, result.units);
+  const auditMs: number[] = [];
+  for (let round = 0; round < rounds; round += 1) {
+    const start = process.hrtime.bigint();
+    const repeats = 20;
+    for (let repeat = 0; repeat < repeats; repeat += 1) auditPlant(loaded.plant, solved);
+    auditMs.push(Number(process.hrtime.bigint() - start) / 1e6 / repeats);
+  }
   const figures = {
     case: name,
+    audit_ms_median: median(auditMs),
     end_to_end_ms_median: median(wall),
     warm_solve_ms_median: median(inProcess),
     passes,
@@ -55,5 +69,6 @@ for (const name of cases) {
     console.log(`${name}`);
     console.log(`  end to end (new process, solve --json): ${figures.end_to_end_ms_median.toFixed(0)} ms median of ${rounds}`);
     console.log(`  warm in-process solve: ${figures.warm_solve_ms_median.toFixed(1)} ms, ${passes} passes, ${figures.ms_per_pass_median.toFixed(1)} ms per pass`);
+    console.log(`  independent audit (part of every solve): ${figures.audit_ms_median.toFixed(2)} ms, ${((100 * figures.audit_ms_median) / figures.warm_solve_ms_median).toFixed(1)} % of the warm solve`);
   }
 }
