@@ -71,7 +71,7 @@ export interface AddEntry {
 export interface ScenarioEntry {
   id: string;
   name?: string;
-  hours: number;
+  hours: number | string;
   base?: string;
   changes?: ChangesEntry;
 }

@@ -190,7 +190,7 @@ const defs: Record<string, Schema> = {
   }, ['intercept', 'slope']),
   stage: object('one turbine stage: the section from the previous point to this exhaust or extraction', {
     to: reference('header the steam leaves to'),
-    condenser_pressure: quantity('pressure', '0.1 bar', 'condenser pressure of a condensing stage'),
+    condenser_pressure: quantity('pressure', '0.1 bara', 'condenser pressure of a condensing stage'),
     isentropic_efficiency: percent('isentropic efficiency of the section', '75 %'),
     exhaust_enthalpy: quantity('specificEnthalpy', '2950 kJ/kg', 'exhaust enthalpy'),
     exhaust_temperature: quantity('temperature', '260 degC', 'exhaust temperature'),
@@ -298,7 +298,7 @@ const defs: Record<string, Schema> = {
   scenario: object('a season or production case: an overlay on the plant or on another scenario', {
     id: reference('scenario id, unique among scenarios'),
     name,
-    hours: { type: 'number', exclusiveMinimum: 0, maximum: 8784, description: 'operating hours per year in this scenario' },
+    hours: { type: ['number', 'string'], exclusiveMinimum: 0, maximum: 8784, description: 'operating hours per year in this scenario: a number of hours or a quantity such as "3000 h"', examples: [3000, '3000 h'] },
     base: reference('plant (the default: the case as written) or the id of another scenario'),
     changes: ref('changes'),
   }, ['id', 'hours']),
