@@ -28,10 +28,12 @@ export interface FuelCurve {
 /**
  * Largest relative difference between the straight pieces and the curve the
  * builder accepts. Fuel = steam x heat / efficiency(load) bends between table
- * points, so each span is cut into equal pieces until every chord is within
- * this of the curve; half the 0.1 % the audit allows (verify/tolerances.ts).
+ * points, so each span is cut into pieces, each as long as its chord stays
+ * within this of the curve; just inside the 0.1 % the audit allows
+ * (verify/tolerances.ts). Fewer pieces mean fewer binaries for a curve that
+ * is not convex.
  */
-export const FUEL_CURVE_ACCURACY = 5e-4;
+export const FUEL_CURVE_ACCURACY = 9e-4;
 
 /** Most pieces one span of the table is cut into. */
 const MOST_PIECES_PER_SPAN = 64;
@@ -50,8 +52,7 @@ export function fuelCurve(table: readonly EfficiencyPoint[], minSteam: number, m
   for (let index = 1; index < spans.length; index += 1) {
     const from = spans[index - 1];
     const to = spans[index];
-    const pieces = piecesFor(from, to, fuelAt);
-    for (let k = 1; k <= pieces; k += 1) sorted.push(k === pieces ? to : from + ((to - from) * k) / pieces);
+    sorted.push(...breakpointsFor(from, to, fuelAt));
   }
   const steam = sorted.map((load) => load * maxSteam);
   const fuel = sorted.map(fuelAt);
@@ -64,17 +65,33 @@ export function fuelCurve(table: readonly EfficiencyPoint[], minSteam: number, m
   return { steam, fuel, convex };
 }
 
-/** Fewest equal pieces of [from, to] whose chords stay within FUEL_CURVE_ACCURACY of the curve. */
-function piecesFor(from: number, to: number, fuelAt: (load: number) => number): number {
-  for (let pieces = 1; pieces < MOST_PIECES_PER_SPAN; pieces += 1) {
-    if (chordError(from, to, pieces, fuelAt) <= FUEL_CURVE_ACCURACY) return pieces;
+/**
+ * Breakpoints inside [from, to], greedily: each piece runs as far as its chord
+ * stays within FUEL_CURVE_ACCURACY (found by bisection), which gives the
+ * fewest pieces for a curve that bends one way within the span.
+ */
+function breakpointsFor(from: number, to: number, fuelAt: (load: number) => number): number[] {
+  const points: number[] = [];
+  let start = from;
+  while (points.length < MOST_PIECES_PER_SPAN) {
+    if (chordError(start, to, 1, fuelAt) <= FUEL_CURVE_ACCURACY) break;
+    let good = start;
+    let bad = to;
+    for (let step = 0; step < 40 && bad - good > 1e-9 * (to - from); step += 1) {
+      const middle = (good + bad) / 2;
+      if (chordError(start, middle, 1, fuelAt) <= FUEL_CURVE_ACCURACY) good = middle;
+      else bad = middle;
+    }
+    if (good <= start) break;
+    points.push(good);
+    start = good;
   }
-  return MOST_PIECES_PER_SPAN;
+  return [...points, to];
 }
 
 /** Largest relative chord error over equal pieces, sampled finely inside each piece. */
 export function chordError(from: number, to: number, pieces: number, fuelAt: (load: number) => number): number {
-  const SAMPLES = 16;
+  const SAMPLES = 32;
   let worst = 0;
   for (let k = 0; k < pieces; k += 1) {
     const a = from + ((to - from) * k) / pieces;

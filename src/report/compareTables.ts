@@ -32,7 +32,7 @@ function rowsOf(runs: ScenarioRun[], format: DisplayFormat): FigureRow[] {
     pick(`let down, ${flowUnit}`, 2, (run) => flowValue(run.totals.let_down_kg_s)),
     pick(`vented, ${flowUnit}`, 3, (run) => flowValue(run.totals.vented_kg_s)),
     pick(`makeup, ${flowUnit}`, 2, (run) => flowValue(run.totals.makeup_kg_s)),
-    pick('CO2, t/h', 3, (run) => run.totals.co2_kg_per_h / 1000),
+    pick(`CO2, ${format.co2RateUnit}`, 3, (run) => format.co2RateValue(run.totals.co2_kg_per_h)),
   ];
   const unitIds = [...new Set(solved.flatMap((run) => run.units.map((unit) => `${unit.kind}:${unit.id}`)))];
   for (const key of unitIds) {

@@ -45,7 +45,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       flow(header.inflow_kg_s),
       flow(header.outflow_kg_s),
       header.vent_kg_s > TINY ? flow(header.vent_kg_s) : '-',
-      header.heat_loss_kW !== undefined ? power(header.heat_loss_kW) : '-',
+      header.heat_loss_kW !== undefined ? format.heatRate(header.heat_loss_kW) : '-',
       format.valuePerMass(header.marginal_value_per_t),
     ]),
   });
@@ -121,7 +121,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       unit.id,
       inletOf(unit.id),
       flow(number(unit, 'steam_kg_s')),
-      power(number(unit, 'heat_kW')),
+      format.heatRate(number(unit, 'heat_kW')),
       flow(number(unit, 'condensate_returned_kg_s')),
       flow(number(unit, 'condensate_lost_kg_s')),
     ]),
@@ -155,7 +155,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       ['steam let down', flow(totals.let_down_kg_s)],
       ['steam vented', flow(totals.vented_kg_s)],
       ['makeup water', flow(totals.makeup_kg_s)],
-      ['CO2', `${(totals.co2_kg_per_h / 1000).toFixed(2)} t/h`],
+      ['CO2', format.co2Rate(totals.co2_kg_per_h)],
     ],
   });
 

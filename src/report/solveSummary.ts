@@ -93,7 +93,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   lines.push(
     table(
       ['unit', 'steam', 'heat', 'condensate returned'],
-      users.map((unit) => [unit.id, flow(Number(unit.values.steam_kg_s)), power(Number(unit.values.heat_kW)), flow(Number(unit.values.condensate_returned_kg_s))]),
+      users.map((unit) => [unit.id, flow(Number(unit.values.steam_kg_s)), format.heatRate(Number(unit.values.heat_kW)), flow(Number(unit.values.condensate_returned_kg_s))]),
     ),
   );
 
@@ -111,7 +111,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         ['steam let down', flow(totals.let_down_kg_s)],
         ['steam vented', flow(totals.vented_kg_s)],
         ['makeup water', flow(totals.makeup_kg_s)],
-        ['CO2', `${(totals.co2_kg_per_h / 1000).toFixed(2)} t/h`],
+        ['CO2', format.co2Rate(totals.co2_kg_per_h)],
       ],
       false,
     ),
@@ -137,13 +137,21 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const audit = result.audit;
   lines.push(
     '',
-    `Audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, largest energy residual ${format.heatResidual(audit.max_energy_residual_kW)} (${audit.worst}).`,
+    `Audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, largest energy residual ${format.heatResidual(audit.max_energy_residual_kW)} (${inCaseUnits(audit.worst, format)}).`,
   );
   const independent = independentAuditTable(result, format);
   lines.push('', `${independent.title}: ${result.audit.independent.summary}`);
   lines.push(table(independent.headings, independent.rows));
   lines.push('', SAFETY_CAUTION, '');
   return lines.join('\n');
+}
+
+/** The audit's description, its kW and kg/s figures restated in the case's units. */
+function inCaseUnits(text: string, format: ReturnType<typeof displayFormat>): string {
+  if (format.system === 'si') return text;
+  return text
+    .replace(/(-?\d[\d.e+-]*) kW\b/g, (_, value: string) => format.heatResidual(Number(value)))
+    .replace(/(-?\d[\d.e+-]*) kg\/s\b/g, (_, value: string) => format.massResidual(Number(value)));
 }
 
 /** "flashLiquid" -> "flash liquid". */
