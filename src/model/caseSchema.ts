@@ -73,7 +73,7 @@ const blowdown: Schema = {
 const defs: Record<string, Schema> = {
   site: object('the site: atmosphere, makeup water, currency, display units', {
     atmospheric_pressure: quantity('pressure', '101.325 kPa', 'atmospheric pressure, the zero of gauge pressures; default 101.325 kPa'),
-    ambient_temperature: quantity('temperature', '15 degC', 'ambient air temperature'),
+    ambient_temperature: quantity('temperature', '15 degC', 'ambient air temperature: where header losses and condenser heat go, for the audit\'s entropy generation'),
     makeup_water: ref('makeupWater'),
     currency: { type: 'string', pattern: '^[A-Z]{3}$', description: 'currency code every price is stated in, e.g. EUR, USD, GBP', examples: ['EUR'] },
     units: choice(['si', 'us'], 'unit system for display: si (barg, degC, t/h) or us (psig, degF, klb/h)'),

@@ -1,5 +1,6 @@
 // The resolver proper: the raw case (the file's, or a scenario's merged copy)
 // held by a ResolveContext, turned into the plant in SI with every check.
+import { checkFuelBasis } from './checkFuelBasis.js';
 import { checkSecondLaw } from './checkSecondLaw.js';
 import { checkSources, checkVenting, linkDrives, linkFlashTanks } from './plantChecks.js';
 import type { Plant } from './plantTypes.js';
@@ -65,6 +66,7 @@ export function resolvePlant(context: ResolveContext): Plant | null {
   linkFlashTanks(context, plant);
   checkSources(context, plant);
   checkSecondLaw(context, plant);
+  checkFuelBasis(context, plant);
   checkVenting(context, plant);
   return { ...plant, defaults: context.defaults };
 }
