@@ -26,6 +26,10 @@ export interface HeaderResult {
   T_K: number;
   h_kJ_kg: number;
   state: 'controlled' | 'floating';
+  /** vapour quality x (kg vapour per kg) when the header is wet or just saturated; null when superheated */
+  quality: number | null;
+  /** T - Tsat, K, when superheated (0 at dry saturation); null when wet */
+  superheat_K: number | null;
   /** d(objective)/d(one more tonne used at this header): currency per t for min-cost */
   marginal_value_per_t: number | null;
   inflow_kg_s: number;
@@ -121,6 +125,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
 
   const headers: HeaderResult[] = plant.headers.map((header) => {
     const h = context.h(header.id);
+    const steam = statePH(header.pressure, h);
     const inflows = streams.filter((stream) => stream.to === header.id);
     const outflows = streams.filter((stream) => stream.from === header.id);
     // One more kg/s drawn at h moves the mass row by 1 and, where the header has
@@ -132,7 +137,9 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       id: header.id,
       name: header.name,
       pressure_MPa: header.pressure,
-      T_K: statePH(header.pressure, h).T,
+      T_K: steam.T,
+      quality: steam.x ?? (steam.superheat === 0 ? 1 : null),
+      superheat_K: steam.x !== null ? (steam.x >= 1 ? 0 : null) : steam.superheat,
       h_kJ_kg: h,
       state: header.state.kind,
       marginal_value_per_t: dual === null ? null : dual / T_PER_H_PER_KG_S,

@@ -4,6 +4,7 @@ import type { PlantResult } from '../plant/index.js';
 import type { UnitReport } from '../plant/index.js';
 import { displayUnit, fromSI } from '../units/index.js';
 import type { DisplayFormat } from './displayFormat.js';
+import { steamQualityCell, steamQualityWarnings } from './steamQuality.js';
 
 export interface ReportTable {
   /** stable id, used for anchors and CSV section names */
@@ -35,12 +36,13 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
   tables.push({
     id: 'headers',
     title: 'Headers',
-    headings: ['header', 'name', 'pressure', 'temperature', 'enthalpy', 'in', 'out', 'vent', 'heat loss', 'marginal steam value'],
+    headings: ['header', 'name', 'pressure', 'temperature', 'steam', 'enthalpy', 'in', 'out', 'vent', 'heat loss', 'marginal steam value'],
     rows: headers.map((header) => [
       header.id,
       header.name,
       format.pressure(header.pressure_MPa),
       format.temperature(header.T_K),
+      steamQualityCell(header, format),
       format.enthalpy(header.h_kJ_kg),
       flow(header.inflow_kg_s),
       flow(header.outflow_kg_s),
@@ -49,6 +51,11 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       format.valuePerMass(header.marginal_value_per_t),
     ]),
   });
+
+  const warnings = steamQualityWarnings(headers, format);
+  if (warnings.length > 0) {
+    tables.push({ id: 'steam-quality', title: 'Steam quality warnings', headings: ['warning'], rows: warnings.map((warning) => [warning]), alarmRows: warnings.map((_, index) => index) });
+  }
 
   tables.push({
     id: 'sources',

@@ -3,6 +3,7 @@ import type { PlantResult } from '../plant/index.js';
 import { displayFormat } from './displayFormat.js';
 import { SAFETY_CAUTION } from './safety.js';
 import { independentAuditTable } from './reportTables.js';
+import { steamQualityCell, steamQualityWarnings } from './steamQuality.js';
 import { table } from './table.js';
 
 export interface SummaryOptions {
@@ -19,11 +20,12 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   lines.push('Headers');
   lines.push(
     table(
-      ['header', 'pressure', 'temperature', 'in', 'out', 'vent', 'marginal steam value'],
+      ['header', 'pressure', 'temperature', 'steam', 'in', 'out', 'vent', 'marginal steam value'],
       result.headers.map((header) => [
         header.id,
         format.pressure(header.pressure_MPa),
         format.temperature(header.T_K),
+        steamQualityCell(header, format),
         flow(header.inflow_kg_s),
         flow(header.outflow_kg_s),
         header.vent_kg_s > 1e-9 ? flow(header.vent_kg_s) : '-',
@@ -31,6 +33,9 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
       ]),
     ),
   );
+
+  const qualityWarnings = steamQualityWarnings(result.headers, format);
+  if (qualityWarnings.length > 0) lines.push(...qualityWarnings.map((warning) => `warning: ${warning}`));
 
   // Vents first, then drains; flows of one kind from one unit are added up.
   const losses = new Map<string, number>();
