@@ -79,6 +79,12 @@ export function resolveBoilers(context: ResolveContext, headers: Map<string, Hea
     if (steam.max === 0) context.error('out-of-range', [...path, 'steam', 'max'], 'expected a maximum steam flow above zero, found "0"');
     const outlet = header && steamAt(context, [...path, 'outlet_temperature'], header.pressure, 'boiler outlet temperature');
     const efficiency = efficiencyTable(context, [...path, 'efficiency']);
+    if (efficiency && Array.isArray(item.efficiency) && steam.max > 0 && steam.min / steam.max < efficiency[0].load - 1e-12) {
+      // Below the table the efficiency is held at the first point's: the case is extrapolated there.
+      const stated = context.raw([...path, 'steam', 'min']) !== undefined;
+      context.warn('below-efficiency-table', stated ? [...path, 'steam', 'min'] : [...path, 'efficiency', 0, 'load'],
+        `boiler ${String(item.id)} may run down to ${(100 * steam.min / steam.max).toFixed(0)} % load${stated ? '' : ' (no minimum steam stated)'}, below its efficiency table's first point at ${(100 * efficiency[0].load).toFixed(0)} %; there the efficiency is taken as ${(100 * efficiency[0].efficiency).toFixed(1)} %, the first point's. Add a point at the minimum load`);
+    }
     const blowdown = blowdownFraction(context, [...path, 'blowdown']);
     if (item.blowdown_to === undefined) context.addDefault([...path, 'blowdown_to'], 'drain', 'blowdown destination not stated: blowdown goes to drain');
     const blowdownTo = liquidDestination(context, [...path, 'blowdown_to'], ['drain'], { kind: 'drain' });
