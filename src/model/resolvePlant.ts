@@ -2,6 +2,7 @@
 // held by a ResolveContext, turned into the plant in SI with every check.
 import { checkFuelBasis } from './checkFuelBasis.js';
 import { checkSecondLaw } from './checkSecondLaw.js';
+import { checkTopology } from './checkTopology.js';
 import { checkSources, checkVenting, linkDrives, linkFlashTanks } from './plantChecks.js';
 import type { Plant } from './plantTypes.js';
 import { ResolveContext, type IdKind } from './resolveContext.js';
@@ -67,6 +68,7 @@ export function resolvePlant(context: ResolveContext): Plant | null {
   checkSources(context, plant);
   checkSecondLaw(context, plant);
   checkFuelBasis(context, plant);
+  checkTopology(context, plant);
   checkVenting(context, plant);
   return { ...plant, defaults: context.defaults };
 }

@@ -6,7 +6,7 @@ import type { IndependentAudit } from './verify/index.js';
 import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
 import type { UnitReport } from './contribution.js';
 import { ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
-import { ATMOSPHERE } from './network.js';
+import { ATMOSPHERE, DRAIN } from './network.js';
 import type { PassRecord, PlantOutcome } from './solvePlant.js';
 
 export interface StreamResult {
@@ -62,7 +62,7 @@ export interface Totals {
 export interface Kpis {
   /** heat absorbed by fired boilers (and duct firing) over their fuel */
   boiler_fuel_to_steam_efficiency: number | null;
-  /** condensate returned over process steam used */
+  /** condensate returned (to the deaerator or a flash tank, not to drain) over process steam used */
   condensate_return_fraction: number | null;
   /** of the steam stepped down in pressure, the share through letdown valves rather than turbines */
   let_down_fraction: number | null;
@@ -165,6 +165,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
   const vented = streams.filter((stream) => stream.to === ATMOSPHERE).reduce((total, stream) => total + stream.mass_kg_s, 0);
   const steamRaised = sum('boiler', 'steam_kg_s') + sum('heatRecoveryBoiler', 'steam_kg_s') + sum('steamImport', 'steam_kg_s');
   const processSteam = sum('user', 'steam_kg_s');
+  const userIds = new Set(plant.users.map((user) => user.id));
   const processHeat = sum('user', 'heat_kW');
   const generated = num(grid, 'generated_kW');
   const loads = num(grid, 'modelled_loads_kW');
@@ -195,7 +196,11 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
   const ratio = (a: number, b: number): number | null => (b > 1e-12 ? a / b : null);
   const kpis: Kpis = {
     boiler_fuel_to_steam_efficiency: boilerEfficiency,
-    condensate_return_fraction: ratio(sum('user', 'condensate_returned_kg_s'), processSteam),
+    // Condensate a user collects but sends to drain is lost like any other: only what reaches the deaerator or a flash tank counts.
+    condensate_return_fraction: ratio(
+      streams.filter((stream) => stream.kind === 'condensate' && userIds.has(stream.from) && stream.to !== DRAIN).reduce((total, stream) => total + stream.mass_kg_s, 0),
+      processSteam,
+    ),
     let_down_fraction: ratio(totals.let_down_kg_s, totals.let_down_kg_s + throttle),
     vented_fraction: ratio(vented, steamRaised),
     power_per_throttle_t_kWh: ratio(turbinePower, throttle * T_PER_H_PER_KG_S),

@@ -112,6 +112,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         ['  fuel / power / steam / water / carbon', ['fuel', 'power', 'steam', 'water', 'carbon'].map((key) => money(totals.cost_by_component_per_h[key as keyof typeof totals.cost_by_component_per_h])).join(' / ')],
         ['fuel fired', fuelRate(totals.fuel_kW)],
         ['power made / bought / sold', `${power(totals.power_generated_kW)} / ${power(totals.power_imported_kW)} / ${power(totals.power_exported_kW)}`],
+        ...takeOrPay(result, power),
         ['steam raised', flow(totals.steam_raised_kg_s)],
         ['steam let down', flow(totals.let_down_kg_s)],
         ['steam vented', flow(totals.vented_kg_s)],
@@ -149,6 +150,13 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   lines.push(table(independent.headings, independent.rows));
   lines.push('', SAFETY_CAUTION, '');
   return lines.join('\n');
+}
+
+/** The take-or-pay shortfall, when import falls below the minimum billed: power billed but not taken. */
+function takeOrPay(result: PlantResult, power: (kW: number) => string): string[][] {
+  const grid = result.units.find((unit) => unit.kind === 'grid');
+  const shortfall = grid?.values.shortfall_kW;
+  return typeof shortfall === 'number' && shortfall > 1e-6 ? [['  take-or-pay shortfall (billed, not taken)', power(shortfall)]] : [];
 }
 
 /** The audit's description, its kW and kg/s figures restated in the case's units. */
