@@ -220,6 +220,8 @@ export interface WillansLineEntry {
 }
 
 export interface StageEntry {
+  /** unique within its turbine; lets a scenario change this stage alone */
+  id?: string;
   /** a header id */
   to?: string;
   condenser_pressure?: QuantityText;

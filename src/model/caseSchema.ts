@@ -189,6 +189,7 @@ const defs: Record<string, Schema> = {
     slope: quantity('specificEnthalpy', '200 kJ/kg', 'power per unit of flow (kW per kg/s = kJ/kg)'),
   }, ['intercept', 'slope']),
   stage: object('one turbine stage: the section from the previous point to this exhaust or extraction', {
+    id: { type: 'string', pattern: ID_PATTERN, description: 'stage id, unique within its turbine; with an id on every stage a scenario changes one stage alone' },
     to: reference('header the steam leaves to'),
     condenser_pressure: quantity('pressure', '0.1 bara', 'condenser pressure of a condensing stage'),
     isentropic_efficiency: percent('isentropic efficiency of the section', '75 %'),

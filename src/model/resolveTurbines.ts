@@ -74,6 +74,12 @@ export function resolveTurbines(context: ResolveContext, headers: Map<string, He
     let previousPressure = inlet?.pressure;
     let previousLabel = inlet ? `the inlet header ${inlet.id}` : '';
     const stageEntries = context.entries([...path, 'stages']);
+    const stageIds = new Set<string>();
+    for (const { item: stage, path: stagePath } of stageEntries) {
+      if (typeof stage.id !== 'string') continue;
+      if (stageIds.has(stage.id)) context.error('duplicate-id', [...stagePath, 'id'], `stage id "${stage.id}" is used twice in turbine ${String(item.id)}; stage ids must be unique within their turbine`);
+      stageIds.add(stage.id);
+    }
     stageEntries.forEach(({ path: stagePath }, index) => {
       const exhaust = exhaustOf(context, stagePath, headers);
       const performance = performanceOf(context, stagePath, exhaust);

@@ -27,7 +27,7 @@ const fieldLists: Record<string, Record<string, 'required' | 'optional'>> = {
   heatRecoveryBoiler: { id: 'required', name: 'optional', header: 'required', steam: 'required', outlet_temperature: 'required', blowdown: 'required', blowdown_to: 'optional', supplementary_firing: 'optional' } satisfies FieldList<Case.HeatRecoveryBoilerEntry>,
   steamImport: { id: 'required', name: 'optional', header: 'required', price: 'required', min: 'optional', max: 'required', temperature: 'required' } satisfies FieldList<Case.SteamImportEntry>,
   willansLine: { intercept: 'required', slope: 'required' } satisfies FieldList<Case.WillansLineEntry>,
-  stage: { to: 'optional', condenser_pressure: 'optional', isentropic_efficiency: 'optional', exhaust_enthalpy: 'optional', exhaust_temperature: 'optional', willans_line: 'optional', outflow: 'optional', section_flow: 'optional' } satisfies FieldList<Case.StageEntry>,
+  stage: { id: 'optional', to: 'optional', condenser_pressure: 'optional', isentropic_efficiency: 'optional', exhaust_enthalpy: 'optional', exhaust_temperature: 'optional', willans_line: 'optional', outflow: 'optional', section_flow: 'optional' } satisfies FieldList<Case.StageEntry>,
   turbine: { id: 'required', name: 'optional', inlet: 'required', stages: 'required', mechanical_efficiency: 'optional', generator_efficiency: 'optional', power: 'optional', can_switch_off: 'optional', drives: 'optional' } satisfies FieldList<Case.TurbineEntry>,
   desuperheater: { target_temperature: 'required', spray_water: 'required' } satisfies FieldList<Case.DesuperheaterEntry>,
   letdown: { id: 'required', name: 'optional', from: 'required', to: 'required', capacity: 'required', desuperheater: 'optional' } satisfies FieldList<Case.LetdownEntry>,
