@@ -211,7 +211,9 @@ export interface SteamImportEntry {
   price: QuantityText;
   min?: QuantityText;
   max: QuantityText;
-  temperature: QuantityText;
+  /** one of temperature (or "saturated") and enthalpy */
+  temperature?: QuantityText;
+  enthalpy?: QuantityText;
 }
 
 export interface WillansLineEntry {

@@ -183,7 +183,10 @@ const defs: Record<string, Schema> = {
     min: flow('smallest flow; default 0', '0 t/h'),
     max: flow('largest flow', '15 t/h'),
     temperature: quantityOr('saturated', 'temperature', '250 degC', 'delivered temperature, or saturated'),
-  }, ['id', 'header', 'price', 'max', 'temperature']),
+    enthalpy: quantity('specificEnthalpy', '2750 kJ/kg', 'delivered enthalpy, instead of a temperature; below the saturated vapour enthalpy the steam is wet'),
+  }, ['id', 'header', 'price', 'max'], {
+    allOf: [exactlyOne(['temperature', 'enthalpy'], 'a steam import needs a temperature or an enthalpy, one of the two')],
+  }),
   willansLine: object('Willans line: power = slope x flow - intercept', {
     intercept: quantity('power', '250 kW', 'no-load loss'),
     slope: quantity('specificEnthalpy', '200 kJ/kg', 'power per unit of flow (kW per kg/s = kJ/kg)'),

@@ -176,6 +176,8 @@ export interface SteamImport {
   flow: Range;
   /** delivered state at the header pressure */
   delivered: FixedState & { saturated: boolean };
+  /** the case gave the delivered enthalpy (T is then the state's, saturation when wet) */
+  byEnthalpy?: boolean;
 }
 
 export type StageExhaust =

@@ -1,6 +1,7 @@
 // Steam sources: fired boilers, waste-heat boilers and purchased steam.
 import type { CasePath } from './issue.js';
-import type { EfficiencyPoint, FiredBoiler, Header, HeatRecoveryBoiler, LiquidDestination, SteamImport } from './plantTypes.js';
+import type { EfficiencyPoint, FiredBoiler, FixedState, Header, HeatRecoveryBoiler, LiquidDestination, SteamImport } from './plantTypes.js';
+import { saturatedLiquid, statePH } from '../properties/index.js';
 import type { ResolveContext } from './resolveContext.js';
 import { steamAt } from './resolveHeaders.js';
 
@@ -131,8 +132,22 @@ export function resolveSteamImports(context: ResolveContext, headers: Map<string
     const header = headerOf(context, [...path, 'header'], headers);
     const price = context.amount([...path, 'price'], 'massPrice');
     const flow = context.range(path, 'massFlow');
-    const delivered = header && steamAt(context, [...path, 'temperature'], header.pressure, 'delivered steam temperature');
+    const byEnthalpy = context.raw([...path, 'enthalpy']) !== undefined;
+    const delivered = header && (byEnthalpy ? deliveredByEnthalpy(context, [...path, 'enthalpy'], header.pressure) : steamAt(context, [...path, 'temperature'], header.pressure, 'delivered steam temperature'));
     if (!header || price === undefined || !delivered || typeof item.id !== 'string') return [];
-    return [{ id: item.id, kind: 'steamImport' as const, header: header.id, price, flow, delivered }];
+    return [{ id: item.id, kind: 'steamImport' as const, header: header.id, price, flow, delivered, ...(byEnthalpy ? { byEnthalpy } : {}) }];
   });
+}
+
+/** Steam delivered at a stated enthalpy: superheated, or wet below the saturated vapour enthalpy; never liquid. */
+function deliveredByEnthalpy(context: ResolveContext, path: CasePath, pressure: number): (FixedState & { saturated: boolean }) | undefined {
+  const h = context.quantity(path, 'specificEnthalpy');
+  if (h === undefined) return undefined;
+  const state = context.property(path, 'delivered steam', () => statePH(pressure, h));
+  if (!state) return undefined;
+  if (state.x === null && state.superheat === null) {
+    context.error('liquid-import', path, `delivered enthalpy ${context.text(path)} is liquid water at ${context.show(pressure, 'pressure')} (saturated liquid is ${context.show(saturatedLiquid(pressure).h, 'specificEnthalpy')}); a steam import delivers steam`);
+    return undefined;
+  }
+  return { T: state.T, h, saturated: false };
 }

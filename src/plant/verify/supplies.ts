@@ -2,7 +2,7 @@
 // audit sees them: feedwater in, steam and blowdown out, heat from the fire.
 import type { EfficiencyPoint, FiredBoiler, HeatRecoveryBoiler, LiquidDestination, Plant } from '../../model/index.js';
 import { saturatedLiquid } from '../../properties/index.js';
-import { deliveredSteam, point, type AuditStates } from './auditStates.js';
+import { deliveredSteam, point, pointPH, type AuditStates } from './auditStates.js';
 import type { Ledger } from './ledger.js';
 import type { SolvedPlant } from './solvedPlant.js';
 import { BALANCE_TOLERANCE, DRAIN, FEED_PUMPS, FUEL_CURVE_TOLERANCE, OUTSIDE } from './tolerances.js';
@@ -77,7 +77,8 @@ export function auditBoilers(plant: Plant, solved: SolvedPlant, states: AuditSta
     ledger.volume(supply.id, 'steamImport');
     attempt(supply.id, () => {
       const result = find(solved.steamImports, supply.id);
-      const delivered = deliveredSteam(states.headerPressure(supply.header), supply.delivered);
+      const pressure = states.headerPressure(supply.header);
+      const delivered = supply.byEnthalpy ? pointPH(pressure, supply.delivered.h) : deliveredSteam(pressure, supply.delivered);
       ledger.stream({ from: OUTSIDE, to: supply.id, label: 'purchased steam', m: result.steam, ...delivered });
       ledger.stream({ from: supply.id, to: supply.header, label: 'steam', m: result.steam, ...delivered });
     });
