@@ -300,7 +300,7 @@ export interface DeaeratorEntry {
   pressure: QuantityText;
   heating_steam: string;
   vent: QuantityText;
-  feedwater_pumps?: FeedwaterPumpEntry[];
+  feedwater_pumps?: FeedwaterPumpEntry[] | 'none';
 }
 
 export interface MachineEntry {

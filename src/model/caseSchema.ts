@@ -262,7 +262,7 @@ const defs: Record<string, Schema> = {
     pressure: quantity('pressure', '0.3 barg', 'deaerator pressure'),
     heating_steam: reference('header that supplies heating steam'),
     vent: percent('vent as a share of feedwater', '0.5 %'),
-    feedwater_pumps: list('feedwaterPump', 'boiler feedwater pumps'),
+    feedwater_pumps: { description: 'boiler feedwater pumps, or none to leave pump work out; when left out, pump work is counted at 100 % efficiency and bought as electricity', oneOf: [list('feedwaterPump', 'boiler feedwater pumps'), { const: 'none' }] },
   }, ['pressure', 'heating_steam', 'vent']),
   machine: object('a machine a turbine may drive (pump, fan, compressor)', {
     id, name,

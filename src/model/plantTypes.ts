@@ -311,6 +311,8 @@ export interface Deaerator {
   /** vent as a fraction of feedwater */
   ventFraction: number;
   feedwaterPumps: FeedwaterPump[];
+  /** whether feedwater pump work is counted (false when the case says feedwater_pumps: none) */
+  pumpWork: boolean;
 }
 
 export interface DrivenMachine {

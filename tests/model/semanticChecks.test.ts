@@ -114,6 +114,7 @@ describe('defaults are listed, never silent', () => {
         "headers[0].venting = forbidden",
         "boilers[0].blowdown_to = drain",
         "boilers[0].can_switch_off = true",
+        "deaerator.feedwater_pumps = pump work at 100 % efficiency, bought as electricity",
       ]
     `);
   });

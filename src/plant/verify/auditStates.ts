@@ -65,9 +65,11 @@ export class AuditStates {
   /**
    * Feedwater pump work per kg lifted from the deaerator to `pressure`:
    * w = v_f (p - p_da) / eta (incompressible liquid). The plant's convention is
-   * the first listed pump's efficiency for all feedwater, 100 % with no pump.
+   * the first listed pump's efficiency for all feedwater, 100 % with no pump,
+   * and no work at all when the case says feedwater_pumps: none.
    */
   pumpWork(pressure: number): number {
+    if (!this.plant.deaerator.pumpWork) return 0;
     const efficiency = this.plant.deaerator.feedwaterPumps[0]?.pumpEfficiency ?? 1;
     const liquid = saturatedLiquid(this.plant.deaerator.pressure);
     // v [m3/kg] x dp [MPa] x 1000 = kJ/kg
@@ -76,6 +78,8 @@ export class AuditStates {
 
   /** Feedwater at a boiler's inlet: deaerator water plus the pump's work. */
   boilerFeed(pressure: number): Point {
+    // With pump work left out by the case, the lift is left out too: the water keeps the deaerator's state.
+    if (!this.plant.deaerator.pumpWork) return this.feedwater;
     return pointPH(pressure, this.feedwater.h + this.pumpWork(pressure));
   }
 
