@@ -227,6 +227,8 @@ export interface StageEntry {
   /** a header id */
   to?: string;
   condenser_pressure?: QuantityText;
+  /** condensing stage only: deaerator (default), drain or a flash tank id */
+  condensate_to?: string;
   isentropic_efficiency?: QuantityText;
   exhaust_enthalpy?: QuantityText;
   exhaust_temperature?: QuantityText;

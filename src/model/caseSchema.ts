@@ -195,6 +195,7 @@ const defs: Record<string, Schema> = {
     id: { type: 'string', pattern: ID_PATTERN, description: 'stage id, unique within its turbine; with an id on every stage a scenario changes one stage alone' },
     to: reference('header the steam leaves to'),
     condenser_pressure: quantity('pressure', '0.1 bara', 'condenser pressure of a condensing stage'),
+    condensate_to: reference('where a condensing stage\'s condensate goes: deaerator (the default), drain, or a flash tank id'),
     isentropic_efficiency: percent('isentropic efficiency of the section', '75 %'),
     exhaust_enthalpy: quantity('specificEnthalpy', '2950 kJ/kg', 'exhaust enthalpy'),
     exhaust_temperature: quantity('temperature', '260 degC', 'exhaust temperature'),

@@ -19,6 +19,17 @@ export function checkTopology(context: ResolveContext, plant: PlantParts): void 
       `${user.id}'s condensate leaves at ${header.id}'s ${context.show(header.pressure, 'pressure')}, below flash tank ${tank.id} at ${context.show(tank.pressure, 'pressure')}; condensate does not flow up into it without a pump`);
   }
 
+  for (const turbine of plant.turbines) {
+    turbine.stages.forEach((stage, k) => {
+      const exhaust = stage.exhaust;
+      if (exhaust.kind !== 'condenser' || exhaust.condensateTo.kind !== 'flashTank') return;
+      const tank = tanks.get(exhaust.condensateTo.id);
+      if (!tank || tank.pressure <= exhaust.pressure) return;
+      context.warn('uphill-condensate', [...pathOf(turbine.id), 'stages', k, 'condensate_to'],
+        `turbine ${turbine.id}'s condensate leaves its condenser at ${context.show(exhaust.pressure, 'pressure')}, below flash tank ${tank.id} at ${context.show(tank.pressure, 'pressure')}; it does not flow up into it without a pump`);
+    });
+  }
+
   // Blowdown carries the boiler water's dissolved solids; its flash liquid belongs in the drain.
   const blowdownTanks = new Set<string>();
   for (const boiler of [...plant.boilers, ...plant.heatRecoveryBoilers]) if (boiler.blowdownFraction > 0 && boiler.blowdownTo.kind === 'flashTank') blowdownTanks.add(boiler.blowdownTo.id);

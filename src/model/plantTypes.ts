@@ -184,7 +184,7 @@ export type StageExhaust =
   /** exhausts or extracts into a header */
   | { kind: 'header'; id: string; pressure: number }
   /** exhausts to a condenser at this pressure, MPa abs */
-  | { kind: 'condenser'; pressure: number };
+  | { kind: 'condenser'; pressure: number; condensateTo: LiquidDestination };
 
 export type StagePerformance =
   /** isentropic efficiency of the section, fraction */

@@ -33,7 +33,7 @@ describe('checkSecondLaw', () => {
 
   test('a Willans slope of 300 kJ/kg on bpt1 implies at least 136 % from any state its floating inlet can reach', () => {
     const text = millWith('slope: 150 kJ/kg', 'slope: 300 kJ/kg');
-    expect(issuesOf(text)).toMatchInlineSnapshot(`"mill.yaml:156:23  turbines[1].stages[0].willans_line  stage 1 of turbine bpt1: its Willans line (slope 300 kJ/kg, intercept 60 kW) at 20.00 t/h implies an isentropic efficiency of at least 136 % from any state mp can reach; no turbine passes 100 %. Check the figure and its units"`);
+    expect(issuesOf(text)).toMatchInlineSnapshot(`"mill.yaml:157:23  turbines[1].stages[0].willans_line  stage 1 of turbine bpt1: its Willans line (slope 300 kJ/kg, intercept 60 kW) at 20.00 t/h implies an isentropic efficiency of at least 136 % from any state mp can reach; no turbine passes 100 %. Check the figure and its units"`);
   });
 
   test('an exhaust temperature too cold for its stage is refused, naming the stage', () => {
@@ -55,6 +55,6 @@ describe('checkSecondLaw', () => {
   test('a Willans stage allowed below its no-load flow gets a no-load message', () => {
     const text = millWith('section_flow: { min: 4 t/h, max: 20 t/h }', 'section_flow: { min: 1 t/h, max: 20 t/h }');
     // No-load flow = intercept / slope = 60 kW / 150 kJ/kg = 0.4 kg/s = 1.44 t/h.
-    expect(issuesOf(text)).toMatchInlineSnapshot(`"mill.yaml:157:23  turbines[1].stages[0].section_flow  stage 1 of turbine bpt1 may run down to 1.000 t/h, below its Willans line's no-load flow of 1.440 t/h (intercept / slope), where it makes no power; set section_flow min to at least the no-load flow"`);
+    expect(issuesOf(text)).toMatchInlineSnapshot(`"mill.yaml:158:23  turbines[1].stages[0].section_flow  stage 1 of turbine bpt1 may run down to 1.000 t/h, below its Willans line's no-load flow of 1.440 t/h (intercept / slope), where it makes no power; set section_flow min to at least the no-load flow"`);
   });
 });

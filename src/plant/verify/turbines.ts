@@ -5,7 +5,7 @@ import { saturatedLiquid, statePH, statePS, statePT, type SteamState } from '../
 import { point, type AuditStates } from './auditStates.js';
 import type { Ledger } from './ledger.js';
 import type { SolvedPlant } from './solvedPlant.js';
-import { find } from './supplies.js';
+import { find, liquidTarget } from './supplies.js';
 import { BALANCE_TOLERANCE } from './tolerances.js';
 
 /**
@@ -66,7 +66,7 @@ export function auditTurbines(plant: Plant, solved: SolvedPlant, states: AuditSt
         } else {
           // The condenser: exhaust condensed to saturated liquid, its heat to cooling water at ambient.
           const condensate = point(saturatedLiquid(pressure));
-          ledger.stream({ from: turbine.id, to: 'deaerator', label: 'condensate', m: outflow, ...condensate });
+          ledger.stream({ from: turbine.id, to: liquidTarget(stage.exhaust.condensateTo), label: 'condensate', m: outflow, ...condensate });
           ledger.cross({ volume: turbine.id, kind: 'heat', direction: 'out', kW: outflow * (h - condensate.h), temperature: states.ambient });
         }
         state = exhaust;
