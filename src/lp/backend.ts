@@ -18,4 +18,14 @@ export interface SolveOptions {
 export interface SolverBackend {
   readonly name: string;
   solve(model: LinearModel, options?: SolveOptions): Promise<SolveResult>;
+  /**
+   * Solves the model once per variant, each variant setting some variables'
+   * bounds ([name, lower, upper]) on the model as built, and keeping the
+   * solver's state from one to the next where the backend can (warm starts).
+   * Optional: without it, callers build each variant as its own model.
+   */
+  solveBoundVariants?(model: LinearModel, variants: readonly (readonly BoundChange[])[], options?: SolveOptions): Promise<SolveResult[]>;
 }
+
+/** A variable's bounds in one variant of a model: [name, lower, upper]. */
+export type BoundChange = readonly [string, number, number];

@@ -1,4 +1,4 @@
-import type { SolveOptions, SolverBackend } from './backend.js';
+import type { BoundChange, SolveOptions, SolverBackend } from './backend.js';
 import { HighsSession } from './highsSession.js';
 import type { LinearModel } from './linearModel.js';
 import type { SolveResult } from './result.js';
@@ -14,6 +14,24 @@ export const highsBackend: SolverBackend = {
     const session = await HighsSession.open(model, options);
     try {
       return session.solve({ warmStart: false });
+    } finally {
+      session.dispose();
+    }
+  },
+  async solveBoundVariants(model: LinearModel, variants: readonly (readonly BoundChange[])[], options: SolveOptions = {}): Promise<SolveResult[]> {
+    const session = await HighsSession.open(model, options);
+    try {
+      const declared = new Map(model.variables.map((variable) => [variable.name, variable]));
+      const results: SolveResult[] = [];
+      let changed: string[] = [];
+      for (const variant of variants) {
+        // Each variant is set on the model as built: undo the last one first.
+        for (const name of changed) session.setBounds(name, declared.get(name)!.lower, declared.get(name)!.upper);
+        for (const [name, lower, upper] of variant) session.setBounds(name, lower, upper);
+        changed = variant.map(([name]) => name);
+        results.push(session.solve({ warmStart: true }));
+      }
+      return results;
     } finally {
       session.dispose();
     }

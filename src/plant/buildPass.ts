@@ -1,10 +1,10 @@
 // One pass of the successive linearisation: with every property point fixed,
 // the plant becomes a linear model.
-import { expr, type LinearExpression } from '../lp/index.js';
+import { expr, term, type LinearExpression } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
-import { BuildContext, GJ_PER_KWH, T_PER_H_PER_KG_S, type BalanceSlack, type CostComponent } from './context.js';
+import { BuildContext, GJ_PER_KWH, T_PER_H_PER_KG_S, type BalanceSlack, type CostComponent, type PassPoint } from './context.js';
 import type { UnitContribution } from './contribution.js';
-import { MAKEUP } from './network.js';
+import { MAKEUP, PROCESS, type Stream } from './network.js';
 
 /**
  * Penalty of balance slack when diagnosing a case that cannot be met: per kg/s
@@ -39,16 +39,26 @@ export function energyRowName(node: string): string {
   return `${node}.energy`;
 }
 
-export function buildPass(
-  plant: Plant,
-  contributions: readonly UnitContribution[],
-  headerEnthalpy: ReadonlyMap<string, number>,
-  objective: Objective,
-  withSlack = false,
-  fixedIntegers: ReadonlyMap<string, number> | null = null,
-): Pass {
-  const context = new BuildContext(plant, headerEnthalpy, withSlack, fixedIntegers);
+export interface BuildOptions {
+  /** slack on every balance, for diagnosing a case that cannot be met */
+  withSlack?: boolean;
+  /** integer variables held at these values, by name */
+  fixedIntegers?: ReadonlyMap<string, number> | null;
+  /** steam drawn from headers beyond their users' demand, kg/s, by header (variables `<id>.extra_draw` held there): the probe for marginal values */
+  extraDemand?: ReadonlyMap<string, number>;
+  /** a unit whose limits are lifted (its inequalities dropped, its bounds widened), when diagnosing */
+  relaxUnit?: string;
+}
+
+export function buildPass(plant: Plant, contributions: readonly UnitContribution[], point: PassPoint, objective: Objective, options: BuildOptions = {}): Pass {
+  const withSlack = options.withSlack ?? false;
+  const context = new BuildContext(plant, point, withSlack, options.fixedIntegers ?? null, options.relaxUnit ?? null);
   for (const unit of contributions) unit.build(context);
+  for (const [header, flow] of options.extraDemand ?? []) {
+    // A variable held at the draw, so that a solver session can move it without a rebuild.
+    const draw = context.variable(`${header}.extra_draw`, { lower: flow, upper: flow });
+    context.stream({ from: header, to: PROCESS, kind: 'process', flow: term(draw), h: context.h(header), dh: context.headerMove(header), p: context.pressure(header) });
+  }
   for (const unit of contributions) unit.finish?.(context);
 
   // Makeup water is bought wherever it is used.
@@ -64,13 +74,11 @@ export function buildPass(
     const energy = expr();
     for (const stream of context.streamsInto(node.id)) {
       mass.addExpression(stream.flow);
-      if (stream.energy) energy.addExpression(stream.energy);
-      else energy.addExpression(stream.flow, stream.h);
+      energy.addExpression(streamEnergy(context, stream));
     }
     for (const stream of context.streamsOutOf(node.id)) {
       mass.addExpression(stream.flow, -1);
-      if (stream.energy) energy.addExpression(stream.energy, -1);
-      else energy.addExpression(stream.flow, -stream.h);
+      energy.addExpression(streamEnergy(context, stream), -1);
     }
     energy.addConstant(-node.heatLoss);
     const energyMW = expr().addExpression(energy, ENERGY_ROW_SCALE);
@@ -92,6 +100,18 @@ export function buildPass(
   }
   context.model.setObjective(goal.sense, goal.expression);
   return { context, slacks, costs: context.cost };
+}
+
+/**
+ * The energy a stream carries into a node's row, kW: its own expression where it
+ * has one, else m h, plus m0 dh where its enthalpy moves with the pass (the
+ * first-order expansion of m (h + dh) about the point flow m0).
+ */
+function streamEnergy(context: BuildContext, stream: Stream): LinearExpression {
+  if (stream.energy) return stream.energy;
+  const energy = expr().addExpression(stream.flow, stream.h);
+  if (stream.dh && stream.dh.terms.size > 0) energy.addExpression(stream.dh, context.pointValue(stream.flow));
+  return energy;
 }
 
 /** Total cost per hour over every component. */

@@ -1,8 +1,18 @@
 // The builder's workspace for one pass: the linear model being written, the
 // streams, the site power balance and the cost, fuel and CO2 ledgers.
-import { LinearModel, expr, type LinearExpression, type Variable, type VariableOptions } from '../lp/index.js';
+import { LinearModel, expr, term, type LinearExpression, type Variable, type VariableOptions } from '../lp/index.js';
 import type { Plant } from '../model/index.js';
 import type { BalanceNode, Stream } from './network.js';
+
+/** The point a pass linearises about. */
+export interface PassPoint {
+  /** every header's enthalpy, kJ/kg */
+  headerEnthalpy: ReadonlyMap<string, number>;
+  /** variable values of the previous pass, by name; null for a first pass */
+  previous: ReadonlyMap<string, number> | null;
+  /** largest move of each floating header's enthalpy in the pass, kJ/kg */
+  trust: ReadonlyMap<string, number>;
+}
 
 export type CostComponent = 'fuel' | 'power' | 'steam' | 'water' | 'carbon';
 
@@ -43,30 +53,60 @@ export class BuildContext {
   /** shaft power supplied to a driven machine or pump by turbines, kW, by machine id */
   readonly shaftSupply = new Map<string, LinearExpression>();
   /**
-   * For a floating header with heat-duty users: one scale on all their steam
-   * flows (1 at the pass's point), free so that the header's energy row can
-   * charge a colder or hotter inflow to the users who need its heat.
+   * The move of each linearised floating header's enthalpy in this pass,
+   * kJ/kg, bounded by its trust radius (see `PassPoint`).
    */
-  readonly dutyScale = new Map<string, Variable>();
+  readonly headerMoves = new Map<string, Variable>();
   /** rows named per unit, so reports can find a unit's limits */
   readonly unitRows = new Map<string, string[]>();
 
   /** enthalpy of each header for this pass, kJ/kg (a copy: the loop moves its own points on) */
   readonly headerEnthalpy: ReadonlyMap<string, number>;
 
+  /** variable values of the pass this one linearises about, by name; null for a first pass */
+  readonly previous: ReadonlyMap<string, number> | null;
+  /** largest move of each floating header's enthalpy in this pass, kJ/kg */
+  readonly trust: ReadonlyMap<string, number>;
+
   constructor(
     readonly plant: Plant,
-    headerEnthalpy: ReadonlyMap<string, number>,
+    point: PassPoint,
     /** slack on every balance, for diagnosing a case that cannot be met */
     readonly withSlack: boolean,
     /** integer variables held at these values (by name): the pass is then a linear program */
     readonly fixedIntegers: ReadonlyMap<string, number> | null = null,
+    /** a unit whose limits are lifted, when diagnosing: does relaxing them help? */
+    readonly relaxedUnit: string | null = null,
   ) {
     this.model = new LinearModel(plant.name);
-    this.headerEnthalpy = new Map(headerEnthalpy);
+    this.headerEnthalpy = new Map(point.headerEnthalpy);
+    this.previous = point.previous;
+    this.trust = point.trust;
+  }
+
+  /**
+   * Whether a floating header's enthalpy is a variable of this pass: from the
+   * second pass on, once flows through it are known to linearise about.
+   */
+  linearises(headerId: string): boolean {
+    return this.headerMoves.has(headerId);
+  }
+
+  /** The move of a header's enthalpy in this pass: its variable, or nothing where the enthalpy is fixed. */
+  headerMove(headerId: string): LinearExpression {
+    const move = this.headerMoves.get(headerId);
+    return move ? term(move) : expr();
+  }
+
+  /** An expression's value at the point the pass linearises about (0 on a first pass). */
+  pointValue(expression: LinearExpression): number {
+    const previous = this.previous;
+    if (!previous) return 0;
+    return expression.evaluate((variable) => previous.get(variable.name) ?? 0);
   }
 
   variable(name: string, options: VariableOptions = {}): Variable {
+    if (this.relaxes(name)) return this.model.addVariable(name, relaxedBounds(options));
     const fixed = options.type && options.type !== 'continuous' ? this.fixedIntegers?.get(name) : undefined;
     if (fixed !== undefined) return this.model.addVariable(name, { lower: fixed, upper: fixed, type: 'continuous' });
     return this.model.addVariable(name, options);
@@ -78,10 +118,17 @@ export class BuildContext {
   }
 
   row(owner: string, name: string, expression: LinearExpression, sense: '<=' | '>=' | '=', rhs: number): void {
+    // A relaxed unit keeps its equations (its physics) and loses its inequalities (its limits).
+    if (owner === this.relaxedUnit && sense !== '=') return;
     this.model.addRow(name, expression, sense, rhs);
     const rows = this.unitRows.get(owner) ?? [];
     rows.push(name);
     this.unitRows.set(owner, rows);
+  }
+
+  /** Whether a variable belongs to the relaxed unit: every unit names its variables `<id>.<what>`. */
+  private relaxes(name: string): boolean {
+    return this.relaxedUnit !== null && name.startsWith(`${this.relaxedUnit}.`);
   }
 
   /** When diagnosing, lets a balance row be missed at a penalty: adds short - surplus to it. */
@@ -149,3 +196,19 @@ export class BuildContext {
     return cost;
   }
 }
+
+/**
+ * A relaxed unit's variable: continuous, down to zero, and with its upper
+ * bound lifted well past its limit (an on/off may lie anywhere in [0, 1]).
+ * Lifted to a finite bound, not removed, so that a relaxed model stays bounded
+ * where the case leaves some profitable flow open.
+ */
+function relaxedBounds(options: VariableOptions): VariableOptions {
+  const lower = Math.min(0, options.lower ?? 0);
+  if (options.type === 'binary' || options.type === 'integer') return { lower, upper: options.type === 'binary' ? 1 : (options.upper ?? Infinity), type: 'continuous' };
+  const upper = options.upper ?? Infinity;
+  return { lower, upper: Number.isFinite(upper) ? 2 * Math.abs(upper) + RELAXED_HEADROOM : upper };
+}
+
+/** Headroom added to a relaxed upper bound, in the variable's own unit (kg/s, kW). */
+const RELAXED_HEADROOM = 100;

@@ -1,10 +1,13 @@
-export { solvePlant, initialHeaderEnthalpy, AUDIT_TOLERANCE, type PlantOutcome, type SolvePlantOptions, type PassRecord } from './solvePlant.js';
+export { solvePlant, initialHeaderEnthalpy, AUDIT_TOLERANCE, type PlantOutcome, type SolvePlantOptions, type PassRecord, type CommitmentTried } from './solvePlant.js';
+export { marginalValues, PROBE_FLOW, type MarginalValue } from './marginalValues.js';
+export { MARGINAL_VALUE_UNIT } from './results.js';
 export { plantResult, type PlantResult, type HeaderResult, type StreamResult, type Totals, type Kpis } from './results.js';
 export { auditPass, type Audit, type BalanceResidual } from './audit.js';
 export { buildPass, massRowName, energyRowName, type Pass } from './buildPass.js';
 export { contributionsOf } from './contributions.js';
 export type { UnitContribution, UnitReport, PointChange } from './contribution.js';
 export type { Diagnosis, Shortfall } from './diagnose.js';
+export { explainVents, type VentExplanation, type VentInflow, type VentOutlet, type VentWords } from './explainVents.js';
 export { flashSplit, type FlashSplit } from './physics/flash.js';
 export { sprayWaterRatio } from './physics/desuperheater.js';
 export { boilerFuel, blowdownFromCycles, blowdownFromFraction } from './physics/boilerFuel.js';
@@ -12,3 +15,4 @@ export { expandIsentropic, expandToEnthalpy, impliedEfficiency, theoreticalSteam
 export { willansPower } from './physics/willans.js';
 export { PlantPhysicsError } from './units/user.js';
 export type { SiteEnergyBalance } from './siteBalance.js';
+export type { PassPoint } from './context.js';

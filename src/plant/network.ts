@@ -2,6 +2,7 @@
 // deaerator or a flash tank is one stream; the builder turns the streams at each
 // balance node into its mass (and, where needed, energy) row.
 import type { LinearExpression } from '../lp/index.js';
+import type { PassSolution } from './passSolution.js';
 
 /** Ends of streams that are not balance nodes. */
 export const ATMOSPHERE = 'atmosphere';
@@ -33,14 +34,21 @@ export interface Stream {
   kind: StreamKind;
   /** mass flow, kg/s, linear in the pass's variables */
   flow: LinearExpression;
-  /** specific enthalpy, kJ/kg, fixed for the pass */
+  /** specific enthalpy at the pass's point, kJ/kg */
   h: number;
+  /**
+   * First-order move of the enthalpy with the pass's floating-header moves
+   * (zero at the point), kJ/kg. In an energy row the stream then carries
+   * m h + m0 dh, the Taylor expansion of m (h + dh) about the point flow m0.
+   */
+  dh?: LinearExpression;
   /** pressure the stream is at, MPa (for reporting its state) */
   p: number;
   /**
    * Energy the stream carries in its nodes' energy rows, kW, when that is not
-   * flow x h: a heat-duty user on a floating header draws its duty plus its
-   * condensate's enthalpy, whatever the header's enthalpy turns out to be.
+   * flow x h: a heat-duty user draws its duty plus its condensate's enthalpy,
+   * and a Willans-line exhaust carries its inflow's energy less the work, both
+   * exactly linear.
    */
   energy?: LinearExpression;
 }
@@ -52,4 +60,25 @@ export interface BalanceNode {
   energyRow: boolean;
   /** heat lost from the node, kW */
   heatLoss: number;
+}
+
+/**
+ * A stream's enthalpy in a solution, kJ/kg: its energy over its flow where it
+ * carries its own energy, else its point moved by its solved move.
+ */
+export function solvedEnthalpy(stream: Stream, solution: PassSolution): number {
+  if (stream.energy) {
+    const flow = solution.evaluate(stream.flow);
+    if (Math.abs(flow) > 1e-9) return solution.evaluate(stream.energy) / flow;
+  }
+  return stream.h + (stream.dh ? solution.evaluate(stream.dh) : 0);
+}
+
+/**
+ * A header's heat loss while steam flows through it, kW: an idle header is out
+ * of service and loses nothing (the case's loss is the piping's at operating
+ * conditions).
+ */
+export function headerLoss(heatLoss: number, streamsInto: readonly Stream[], solution: PassSolution): number {
+  return streamsInto.some((stream) => solution.evaluate(stream.flow) > 1e-9) ? heatLoss : 0;
 }

@@ -6,8 +6,12 @@ import type { IndependentAudit } from './verify/index.js';
 import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
 import type { UnitReport } from './contribution.js';
 import { ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
-import { ATMOSPHERE, DRAIN } from './network.js';
-import type { PassRecord, PlantOutcome } from './solvePlant.js';
+import { ATMOSPHERE, DRAIN, solvedEnthalpy } from './network.js';
+import type { Objective } from '../model/index.js';
+import type { MarginalValue } from './marginalValues.js';
+import type { CommitmentTried, PassRecord, PlantOutcome } from './solvePlant.js';
+import { explainVents, type VentExplanation } from './explainVents.js';
+import { formatQuantity } from '../units/index.js';
 
 export interface StreamResult {
   from: string;
@@ -30,8 +34,21 @@ export interface HeaderResult {
   quality: number | null;
   /** T - Tsat, K, when superheated (0 at dry saturation); null when wet */
   superheat_K: number | null;
-  /** d(objective)/d(one more tonne used at this header): currency per t for min-cost */
+  /**
+   * What one more tonne drawn at this header (and not returned) costs, in the
+   * objective's units per t (see `marginal_value_unit`): the converged plant's
+   * dual, or where one more and one less differ, the mean of the two
+   */
   marginal_value_per_t: number | null;
+  /** one more and one less tonne, each measured by re-solving, and what sets each */
+  marginal: {
+    more_per_t: number | null;
+    less_per_t: number | null;
+    more_set_by: string[];
+    less_set_by: string[];
+    /** true where one more and one less tonne differ by more than 1 % (0.05 per t at least) */
+    differs: boolean;
+  };
   inflow_kg_s: number;
   outflow_kg_s: number;
   inflows: { from: string; kind: string; mass_kg_s: number }[];
@@ -101,6 +118,14 @@ export interface PlantResult {
   };
   passes: PassRecord[];
   marginal_power_value_per_kWh: number | null;
+  /** the unit marginal steam values are counted in, per t of steam */
+  marginal_value_unit: (typeof MARGINAL_VALUE_UNIT)[Objective];
+  /** on/off decisions tried, each converged on its own */
+  commitments: CommitmentTried[];
+  /** the integer decisions kept (on/off, 1 running, and load segments of non-convex fuel curves), by variable name */
+  commitment: Record<string, number>;
+  /** every vented flow and why that steam has no better use, its flows in the case's units */
+  vents: VentExplanation[];
 }
 
 export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): PlantResult {
@@ -115,24 +140,22 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
 
   const streams: StreamResult[] = context.streams.map((stream) => {
     let temperature: number | null = null;
+    const h = solvedEnthalpy(stream, solution);
     try {
-      temperature = statePH(stream.p, stream.h).T;
+      temperature = statePH(stream.p, h).T;
     } catch {
       temperature = null;
     }
-    return { from: stream.from, to: stream.to, kind: stream.kind, mass_kg_s: solution.evaluate(stream.flow), h_kJ_kg: stream.h, p_MPa: stream.p, T_K: temperature };
+    return { from: stream.from, to: stream.to, kind: stream.kind, mass_kg_s: solution.evaluate(stream.flow), h_kJ_kg: h, p_MPa: stream.p, T_K: temperature };
   });
 
   const headers: HeaderResult[] = plant.headers.map((header) => {
-    const h = context.h(header.id);
+    const h = outcome.headerEnthalpy.get(header.id) ?? context.h(header.id);
     const steam = statePH(header.pressure, h);
     const inflows = streams.filter((stream) => stream.to === header.id);
     const outflows = streams.filter((stream) => stream.from === header.id);
-    // One more kg/s drawn at h moves the mass row by 1 and, where the header has
-    // an energy row, that row by h: its value is the sum of both prices.
-    const massPrice = solution.shadowPrice(massRowName(header.id));
-    const energyPrice = context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
-    const dual = massPrice === null || energyPrice === null ? null : massPrice + h * ENERGY_ROW_SCALE * energyPrice;
+    const value = outcome.marginalValues.find((entry) => entry.header === header.id);
+    const marginal = marginalOf(value, outcome.objective);
     const result: HeaderResult = {
       id: header.id,
       name: header.name,
@@ -142,14 +165,15 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       superheat_K: steam.x !== null ? (steam.x >= 1 ? 0 : null) : steam.superheat,
       h_kJ_kg: h,
       state: header.state.kind,
-      marginal_value_per_t: dual === null ? null : dual / T_PER_H_PER_KG_S,
+      marginal_value_per_t: marginal.headline,
+      marginal: marginal.sides,
       inflow_kg_s: inflows.reduce((total, stream) => total + stream.mass_kg_s, 0),
       outflow_kg_s: outflows.reduce((total, stream) => total + stream.mass_kg_s, 0),
       inflows: inflows.map((stream) => ({ from: stream.from, kind: stream.kind, mass_kg_s: stream.mass_kg_s })),
       outflows: outflows.map((stream) => ({ to: stream.to, kind: stream.kind, mass_kg_s: stream.mass_kg_s })),
       vent_kg_s: outflows.filter((stream) => stream.to === ATMOSPHERE).reduce((total, stream) => total + stream.mass_kg_s, 0),
     };
-    if (header.heatLoss > 0) result.heat_loss_kW = header.heatLoss;
+    if (header.heatLoss > 0) result.heat_loss_kW = result.inflow_kg_s > 1e-9 ? header.heatLoss : 0;
     return result;
   });
 
@@ -234,5 +258,42 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
     },
     passes: outcome.passes,
     marginal_power_value_per_kWh: solution.shadowPrice('site.power'),
+    marginal_value_unit: MARGINAL_VALUE_UNIT[outcome.objective],
+    commitments: outcome.commitments,
+    commitment: Object.fromEntries(outcome.commitment),
+    vents: explainVents({ headers, streams, units }, ventWords(plant.site.unitSystem)),
   };
+}
+
+/** Flows and temperatures in a vent's sentence, as the report shows them: in the case's unit system. */
+function ventWords(system: 'si' | 'us'): { flow(kg_s: number): string; temperature(K: number): string } {
+  return {
+    flow: (kg_s) => formatQuantity(Math.abs(kg_s) < 1e-7 ? 0 : kg_s, 'massFlow', system),
+    temperature: (K) => formatQuantity(K, 'temperature', system),
+  };
+}
+
+/** What a marginal steam value is counted in, per objective (per t of steam). */
+export const MARGINAL_VALUE_UNIT = { minimumCost: 'currency', minimumFuel: 'GJ', minimumCo2: 'kg CO2', maximumPower: 'kWh' } as const;
+
+/**
+ * Per tonne, as a cost of one more tonne in the objective's units: a maximum-power
+ * objective's values are the power given up, so its sign turns.
+ */
+function marginalOf(value: MarginalValue | undefined, objective: Objective): { headline: number | null; sides: HeaderResult['marginal'] } {
+  const sign = objective === 'maximumPower' ? -1 : 1;
+  const perT = (perKgS: number | null | undefined): number | null => (perKgS === null || perKgS === undefined ? null : (sign * perKgS) / T_PER_H_PER_KG_S);
+  const dual = perT(value?.dual);
+  const more = perT(value?.more);
+  const less = perT(value?.less);
+  const differs = more !== null && less !== null && Math.abs(more - less) > Math.max(0.05, 0.01 * Math.max(Math.abs(more), Math.abs(less)));
+  let headline = dual;
+  if (more !== null && less !== null) {
+    const low = Math.min(more, less);
+    const high = Math.max(more, less);
+    const slack = Math.max(0.05, 0.01 * Math.abs(high));
+    if (headline === null || headline < low - slack || headline > high + slack) headline = (more + less) / 2;
+    if (!differs) headline = dual !== null && Math.abs(dual - (more + less) / 2) <= slack ? dual : (more + less) / 2;
+  }
+  return { headline, sides: { more_per_t: more, less_per_t: less, more_set_by: value?.moreSetBy ?? [], less_set_by: value?.lessSetBy ?? [], differs } };
 }

@@ -3,7 +3,7 @@
 // checks the bookkeeping as a whole.
 import type { Pass } from './buildPass.js';
 import type { UnitReport } from './contribution.js';
-import { ATMOSPHERE, DRAIN, MAKEUP } from './network.js';
+import { ATMOSPHERE, DRAIN, MAKEUP, headerLoss, solvedEnthalpy } from './network.js';
 import type { PassSolution } from './passSolution.js';
 
 export interface SiteEnergyBalance {
@@ -32,7 +32,7 @@ export function siteBalance(pass: Pass, solution: PassSolution, reports: readonl
   const sum = (kind: string, key: string): number =>
     reports.filter((unit) => unit.kind === kind).reduce((total, unit) => total + (typeof unit.values[key] === 'number' ? (unit.values[key] as number) : 0), 0);
   const flowEnergy = (predicate: (from: string, to: string) => boolean): number =>
-    context.streams.filter((stream) => predicate(stream.from, stream.to)).reduce((total, stream) => total + solution.evaluate(stream.flow) * stream.h, 0);
+    context.streams.filter((stream) => predicate(stream.from, stream.to)).reduce((total, stream) => total + solution.evaluate(stream.flow) * solvedEnthalpy(stream, solution), 0);
   const importIds = new Set(context.plant.steamImports.map((supply) => supply.id));
 
   let fuel = 0;
@@ -51,7 +51,7 @@ export function siteBalance(pass: Pass, solution: PassSolution, reports: readonl
     stack_kW: fuel - firedAbsorbed,
     vents_kW: flowEnergy((_, to) => to === ATMOSPHERE),
     drains_kW: flowEnergy((_, to) => to === DRAIN),
-    header_losses_kW: context.plant.headers.reduce((total, header) => total + header.heatLoss, 0),
+    header_losses_kW: context.plant.headers.reduce((total, header) => total + headerLoss(header.heatLoss, context.streamsInto(header.id), solution), 0),
   };
   const energyIn = balance.fuel_kW + balance.waste_heat_kW + balance.pump_work_kW + balance.makeup_water_kW + balance.imported_steam_kW;
   const energyOut =

@@ -1,13 +1,16 @@
-// Successive linearisation: fix the property points, solve the linear model,
-// move the points to agree with the flows, and repeat until nothing moves.
+// Solving a plant: converge it (converge.ts), judge the on/off decisions at
+// their own converged points, measure the marginal values, and audit.
 import { highsBackend, type SolveResult, type SolverBackend } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
 import { PropertyRangeError, saturatedVapour } from '../properties/index.js';
 import { auditPass, type Audit } from './audit.js';
-import { buildPass, type Pass } from './buildPass.js';
-import type { PointChange, UnitContribution } from './contribution.js';
+import { buildPass, ENERGY_ROW_SCALE, energyRowName, massRowName, type Pass } from './buildPass.js';
+import type { PassPoint } from './context.js';
+import type { UnitContribution } from './contribution.js';
 import { contributionsOf } from './contributions.js';
+import { AUDIT_TOLERANCE, converge, integerValues, type Converged, type LoopSettings, type NotConverged, type PassRecord } from './converge.js';
 import { diagnose, type Diagnosis } from './diagnose.js';
+import { marginalValues, type MarginalValue } from './marginalValues.js';
 import { passSolution, type PassSolution } from './passSolution.js';
 import { PlantPhysicsError } from './units/user.js';
 import { auditSolve, type IndependentAudit } from './verify/index.js';
@@ -18,117 +21,117 @@ export interface SolvePlantOptions {
   /** largest enthalpy change between passes for convergence, kJ/kg (default from the case) */
   enthalpyTolerance?: number;
   maxPasses?: number;
+  /**
+   * Another plant's integer decisions (a scenario's base, say: on/off and load
+   * segments, by variable name), tried as one more candidate, with the units
+   * it does not have stopped; from `start`, that plant's converged point, when
+   * given, so that a variant that only adds an option reproduces its base.
+   */
+  commitment?: ReadonlyMap<string, number>;
+  start?: PassPoint;
+  /** try single flips of each switchable unit when there are at most this many (default 20; 0 for none) */
+  maxFlips?: number;
+  /** measure each header's one-more and one-less values by re-solving (default true) */
+  probeMarginalValues?: boolean;
 }
 
-export interface PassRecord {
-  pass: number;
-  objective: number;
-  /** the largest change of any property point after this pass */
-  largestChange: PointChange | null;
-  solveMs: number;
-  /** on/off decisions held from earlier passes, so this pass was a linear program */
-  integersHeld: boolean;
+/** One set of on/off decisions tried, converged on its own, and its converged objective. */
+export interface CommitmentTried {
+  /** where the candidate came from */
+  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip' | 'boiler swap';
+  /** on/off of every switchable unit, 1 running */
+  onOff: Record<string, number>;
+  /** converged objective; null when it could not be met or did not settle */
+  objective: number | null;
+  note: string | null;
+  kept: boolean;
 }
 
 export type PlantOutcome =
-  | { ok: true; plant: Plant; objective: Objective; pass: Pass; solution: PassSolution; result: SolveResult; headerEnthalpy: Map<string, number>; contributions: UnitContribution[]; passes: PassRecord[]; audit: Audit; independentAudit: IndependentAudit; backend: string }
+  | {
+      ok: true;
+      plant: Plant;
+      objective: Objective;
+      pass: Pass;
+      solution: PassSolution;
+      result: SolveResult;
+      headerEnthalpy: Map<string, number>;
+      contributions: UnitContribution[];
+      passes: PassRecord[];
+      audit: Audit;
+      /** every stream and unit worked out again from the case with IF97 (src/plant/verify) */
+      independentAudit: IndependentAudit;
+      backend: string;
+      marginalValues: MarginalValue[];
+      commitments: CommitmentTried[];
+      /** integer decisions kept (on/off and load segments), by variable name, for a variant to start from */
+      commitment: Map<string, number>;
+      /** the converged point, linearised about the kept solution, for a variant to start from */
+      start: PassPoint;
+    }
   | { ok: false; plant: Plant; reason: 'infeasible' | 'not_converged' | 'physics' | 'audit' | 'solver'; message: string; diagnosis?: Diagnosis; passes: PassRecord[] };
 
-/** Audit residuals above this relative size fail the solve. */
-export const AUDIT_TOLERANCE = 1e-6;
+export { AUDIT_TOLERANCE, type PassRecord };
 
 export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}): Promise<PlantOutcome> {
   const objective = options.objective ?? plant.objective;
   const backend = options.backend ?? highsBackend;
-  const tolerance = options.enthalpyTolerance ?? plant.solver.enthalpyTolerance;
-  const maxPasses = options.maxPasses ?? plant.solver.maxPasses;
-  const contributions = contributionsOf(plant);
-  const headerEnthalpy = initialHeaderEnthalpy(plant);
-  const passes: PassRecord[] = [];
-  const solveOptions = { timeLimitSeconds: plant.solver.timeLimit, mipRelativeGap: plant.solver.mipGap };
-  // Duals matter only for the pass that is kept; a kept MIP pass gets them from its LP with integers fixed.
-  const passOptions = { ...solveOptions, mipDuals: false };
-
+  const settings: LoopSettings = {
+    plant,
+    objective,
+    backend,
+    tolerance: options.enthalpyTolerance ?? plant.solver.enthalpyTolerance,
+    maxPasses: options.maxPasses ?? plant.solver.maxPasses,
+    solveOptions: { timeLimitSeconds: plant.solver.timeLimit, mipRelativeGap: plant.solver.mipGap },
+  };
+  let passes: PassRecord[] = [];
   try {
-    // On/off decisions usually hold from the first pass. Later passes keep them
-    // fixed and solve linear programs; at convergence one mixed-integer solve at
-    // the final points confirms them, or sends the loop on with better ones.
-    let fixed: Map<string, number> | null = null;
-    let previousIntegers: Map<string, number> | null = null;
-    let converged = false;
-    for (let passNumber = 1; passNumber <= maxPasses; passNumber += 1) {
-      let pass = buildPass(plant, contributions, headerEnthalpy, objective, false, fixed);
-      let result = await backend.solve(pass.context.model, passOptions);
-      if (result.status !== 'optimal') {
-        if (fixed) {
-          // The held decisions no longer fit the moved points: decide them again.
-          fixed = null;
-          previousIntegers = null;
-          converged = false;
-          continue;
-        }
-        if (result.status === 'infeasible' || result.status === 'unbounded') {
-          const diagnosis = await diagnose(plant, contributions, headerEnthalpy, objective, backend, solveOptions);
-          return { ok: false, plant, reason: 'infeasible', message: diagnosis.summary, diagnosis, passes };
-        }
-        return { ok: false, plant, reason: 'solver', message: `the solver (${result.backend}) ended "${result.status}"${result.message ? `: ${result.message}` : ''}`, passes };
+    const first = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), null);
+    passes = first.passes;
+    if (!first.ok) {
+      if (first.reason === 'infeasible') {
+        const diagnosis = await diagnose(plant, first.contributions, first.point, objective, backend, settings.solveOptions);
+        return { ok: false, plant, reason: 'infeasible', message: diagnosis.summary, diagnosis, passes };
       }
-      const integers: Map<string, number> = fixed ?? integerValues(pass, result);
-      let solution = passSolution(result);
-      const changes = updatePoints(plant, pass, solution, contributions, headerEnthalpy);
-      const enthalpyChanges = changes.filter((change) => change.unit === 'kJ/kg');
-      const largest = changes.reduce<PointChange | null>((worst, change) => (worst === null || change.change > worst.change ? change : worst), null);
-      const largestEnthalpy = enthalpyChanges.reduce((worst, change) => Math.max(worst, change.change), 0);
-      passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs, integersHeld: fixed !== null });
-      if (!fixed && integers.size > 0) fixed = integers;
-      previousIntegers = integers;
-      // Converged once the points hold still; the audit then decides whether the
-      // last pass's points were close enough for balances to close.
-      if (largestEnthalpy < tolerance && passNumber > 1) converged = true;
-      if (!converged) continue;
-      if (pass.context.fixedIntegers) {
-        const check = buildPass(plant, contributions, pass.context.headerEnthalpy, objective);
-        const confirmed = await backend.solve(check.context.model, passOptions);
-        const confirmedIntegers = confirmed.status === 'optimal' ? integerValues(check, confirmed) : null;
-        const better = confirmed.status === 'optimal' && result.objective !== null && confirmed.objective !== null && improves(confirmed.objective, result.objective, pass);
-        if (!confirmedIntegers || (better && !sameValues(confirmedIntegers, pass.context.fixedIntegers))) {
-          // A different commitment pays at the final points: iterate on with it.
-          fixed = null;
-          previousIntegers = confirmedIntegers;
-          converged = false;
-          continue;
-        }
-      }
-      // The kept pass is solved once more as the last model built, with its
-      // integers held: a linear program with the same optimum and its duals, and
-      // every unit's report reads the same model as the streams (the check above
-      // rebuilt the units).
-      const kept = buildPass(plant, contributions, pass.context.headerEnthalpy, objective, false, integers);
-      const keptResult = await backend.solve(kept.context.model, solveOptions);
-      if (keptResult.status === 'optimal') {
-        pass = kept;
-        result = keptResult;
-        solution = passSolution(keptResult);
-      }
-      const reports = contributions.map((unit) => unit.report(solution));
-      const audit = auditPass(pass, solution, reports);
-      if (audit.worstRelative <= AUDIT_TOLERANCE || passNumber === maxPasses) {
-        if (audit.worstRelative > AUDIT_TOLERANCE) {
-          return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes };
-        }
-        // The independent audit: the solve's flows and header states through the case's own physics.
-        const independentAudit = auditSolve(plant, pass.context.headerEnthalpy, reports);
-        if (!independentAudit.ok) return { ok: false, plant, reason: 'audit', message: independentAudit.summary, passes };
-        return { ok: true, plant, objective, pass, solution, result, headerEnthalpy: pointsOf(pass), contributions, passes, audit, independentAudit, backend: result.backend };
-      }
+      return { ok: false, plant, reason: first.reason, message: first.message, passes };
     }
-    const last = passes[passes.length - 1]?.largestChange;
+    const { best, tried } = await chooseCommitment(settings, first, options);
+    const probe = options.probeMarginalValues ?? true;
+    const values = probe ? await marginalValues(settings, best) : [];
+    // The kept pass is built once more, last, so that every unit's report reads
+    // the model its solution belongs to (the probes rebuilt the units).
+    const kept = buildPass(plant, best.contributions, best.point, objective, { fixedIntegers: best.integers });
+    const keptResult = await backend.solve(kept.context.model, settings.solveOptions);
+    const useKept = keptResult.status === 'optimal';
+    const pass = useKept ? kept : best.pass;
+    const result = useKept ? keptResult : best.result;
+    const solution = useKept ? passSolution(keptResult) : best.solution;
+    const reports = best.contributions.map((unit) => unit.report(solution));
+    const audit = useKept ? auditPass(pass, solution, reports) : best.audit;
+    if (audit.worstRelative > AUDIT_TOLERANCE) return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes: best.passes };
+    // The independent audit: the solve's flows and header states through the case's own physics.
+    const independentAudit = auditSolve(plant, solvedHeaderEnthalpy(pass, solution), reports);
+    if (!independentAudit.ok) return { ok: false, plant, reason: 'audit', message: independentAudit.summary, passes: best.passes };
+    if (!probe) values.push(...dualValues(pass, solution));
+    const commitment = new Map(best.integers);
+    const start: PassPoint = { headerEnthalpy: solvedHeaderEnthalpy(pass, solution), previous: solutionValues(pass, result), trust: new Map(pass.context.trust) };
     return {
-      ok: false,
+      ok: true,
       plant,
-      reason: 'not_converged',
-      message: `the property points did not settle in ${maxPasses} passes: ${last ? `${last.what} still moved ${last.change.toPrecision(3)} ${last.unit}` : 'no pass finished'} (tolerance ${tolerance} kJ/kg). Raise solver.max_passes or look for a recycle that oscillates.`,
-      passes,
+      objective,
+      pass,
+      solution,
+      result,
+      headerEnthalpy: solvedHeaderEnthalpy(pass, solution),
+      contributions: best.contributions,
+      passes: best.passes,
+      audit,
+      independentAudit,
+      backend: result.backend,
+      marginalValues: values,
+      commitments: tried,
+      commitment,
+      start,
     };
   } catch (error) {
     if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
@@ -138,28 +141,142 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   }
 }
 
-/** Values of the pass's integer variables, rounded, by name. */
-function integerValues(pass: Pass, result: SolveResult): Map<string, number> {
-  const values = new Map<string, number>();
-  for (const variable of pass.context.model.variables) if (variable.isInteger) values.set(variable.name, Math.round(result.value(variable)));
-  return values;
+/**
+ * On/off decisions judged at their own converged points: the first pass's
+ * MIP, the MIP at the converged points, the base plant's decisions where given,
+ * single flips of each switchable unit and swaps of a running boiler for a
+ * stopped one, each converged on its own; the
+ * lowest converged objective is kept. A unit that may switch off can then never
+ * raise the optimum: running it as before is one of the candidates.
+ */
+async function chooseCommitment(settings: LoopSettings, first: Converged, options: SolvePlantOptions): Promise<{ best: Converged; tried: CommitmentTried[] }> {
+  const { plant, objective, backend } = settings;
+  let best = first;
+  const tried: CommitmentTried[] = [];
+  const bestIndex = (): number => tried.findIndex((entry) => entry.kept);
+  const seen = new Set<string>();
+  const record = (source: CommitmentTried['source'], onOff: Map<string, number>, outcome: Converged | NotConverged | null, note: string | null = null): void => {
+    const objectiveValue = outcome?.ok ? (outcome.result.objective ?? null) : null;
+    const entry: CommitmentTried = { source, onOff: Object.fromEntries(onOff), objective: objectiveValue, note: outcome && !outcome.ok ? (outcome.reason === 'infeasible' ? 'cannot meet the demand' : outcome.message) : note, kept: false };
+    if (outcome?.ok && (outcome === first || improves(outcome, best, objective))) {
+      const previous = bestIndex();
+      if (previous >= 0) tried[previous].kept = false;
+      entry.kept = true;
+      best = outcome;
+    }
+    tried.push(entry);
+  };
+  const firstOnOff = onOffOf(first.integers);
+  seen.add(keyOf(firstOnOff));
+  seen.add(keyOf(first.integers));
+  record('first pass', firstOnOff, first);
+
+  const attempt = async (source: CommitmentTried['source'], onOff: Map<string, number>): Promise<void> => {
+    const key = keyOf(onOff);
+    if (seen.has(key)) return;
+    seen.add(key);
+    // Warm from the best point so far, the load segments of unswitched units
+    // held; where that cannot be met, from the cold start with every segment
+    // free, since a point far from this commitment's may be unable to reach it
+    // within the trust radii.
+    let outcome: Converged | NotConverged = await converge(settings, contributionsOf(plant), best.point, withHeldSegments(onOff, best.integers));
+    if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), onOffOf(onOff));
+    record(source, onOffOf(onOff), outcome);
+  };
+
+  // The MIP at the converged points, with every integer free.
+  const check = buildPass(plant, contributionsOf(plant), best.point, objective);
+  const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
+  // Its load segments too (non-convex fuel curves), which the first pass decided far from here.
+  if (confirmed.status === 'optimal') await attempt('MIP at the converged points', integerValues(check, confirmed));
+  if (options.commitment) {
+    // The base plant's decisions, with the units it does not have stopped (and
+    // their segments empty): the base plant itself, from its own point where
+    // given, so an added unit that may stop can never cost more.
+    const base = new Map([...first.integers].map(([name]) => [name, options.commitment!.get(name) ?? 0]));
+    const key = keyOf(base);
+    if (!seen.has(key)) {
+      seen.add(key);
+      let outcome: Converged | NotConverged = await converge(settings, contributionsOf(plant), options.start ?? best.point, base);
+      if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), onOffOf(base));
+      record('base plant', onOffOf(base), outcome);
+    }
+  }
+  const maxFlips = options.maxFlips ?? 20;
+  const boilers = new Set(plant.boilers.map((boiler) => `${boiler.id}.on`));
+  // Flips of the best so far, and swaps of a running boiler for a stopped one
+  // (which boiler carries the load); once more if one of them found a better one.
+  for (let round = 0; round < 2 && firstOnOff.size > 0 && firstOnOff.size <= maxFlips; round += 1) {
+    const around = onOffOf(best.integers);
+    const before = best;
+    for (const name of around.keys()) {
+      const flipped = new Map(around);
+      flipped.set(name, 1 - around.get(name)!);
+      await attempt('single flip', flipped);
+    }
+    for (const [running, on] of around) {
+      for (const [stopped, off] of around) {
+        if (on !== 1 || off !== 0 || !boilers.has(running) || !boilers.has(stopped)) continue;
+        await attempt('boiler swap', new Map(around).set(running, 0).set(stopped, 1));
+      }
+    }
+    if (best === before) break;
+  }
+  return { best, tried };
 }
 
-function sameValues(a: ReadonlyMap<string, number>, b: ReadonlyMap<string, number>): boolean {
-  if (a.size !== b.size) return false;
-  for (const [name, value] of a) if (b.get(name) !== value) return false;
-  return true;
+/**
+ * On/off decisions to try, with the best's other integers (load segments of
+ * non-convex fuel curves) held for every unit whose on/off does not change, so
+ * that only a unit just switched decides its segments again. A full set of
+ * integers (the MIP's) is taken as it is.
+ */
+function withHeldSegments(candidate: ReadonlyMap<string, number>, best: ReadonlyMap<string, number>): Map<string, number> {
+  if ([...candidate.keys()].some((name) => !name.endsWith('.on'))) return new Map(candidate);
+  const switched = [...candidate].filter(([name, value]) => best.get(name) !== value).map(([name]) => name.slice(0, -'.on'.length));
+  const held = new Map([...best].filter(([name]) => !name.endsWith('.on') && !switched.some((unit) => name.startsWith(`${unit}.`))));
+  for (const [name, value] of candidate) held.set(name, value);
+  return held;
 }
 
-/** Whether the unrestricted optimum beats the held one by more than the MIP gap. */
-function improves(free: number, held: number, pass: Pass): boolean {
-  const gap = pass.context.plant.solver.mipGap;
-  const margin = Math.max(1e-9, gap) * Math.max(1, Math.abs(held));
-  return pass.context.model.objective?.sense === 'maximize' ? free > held + margin : free < held - margin;
+function onOffOf(integers: ReadonlyMap<string, number>): Map<string, number> {
+  return new Map([...integers].filter(([name]) => name.endsWith('.on')).sort(([a], [b]) => a.localeCompare(b)));
 }
 
-function pointsOf(pass: Pass): Map<string, number> {
-  return new Map(pass.context.headerEnthalpy);
+function keyOf(onOff: ReadonlyMap<string, number>): string {
+  return [...onOff].map(([name, value]) => `${name}=${value}`).join(',');
+}
+
+/** Whether a converged candidate beats the best so far by more than the MIP gap. */
+function improves(candidate: Converged, best: Converged, objective: Objective): boolean {
+  const value = candidate.result.objective;
+  const held = best.result.objective;
+  if (value === null || held === null) return false;
+  const margin = Math.max(1e-9, candidate.pass.context.plant.solver.mipGap) * Math.max(1, Math.abs(held));
+  return objective === 'maximumPower' ? value > held + margin : value < held - margin;
+}
+
+/** Marginal values from the kept pass's duals alone, when probing is off. */
+function dualValues(pass: Pass, solution: PassSolution): MarginalValue[] {
+  return pass.context.plant.headers.map((header) => {
+    const massPrice = solution.shadowPrice(massRowName(header.id));
+    const energyPrice = pass.context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
+    const dual = massPrice === null || energyPrice === null ? null : massPrice + pass.context.h(header.id) * ENERGY_ROW_SCALE * energyPrice;
+    return { header: header.id, dual, more: null, less: null, moreSetBy: [], lessSetBy: [] };
+  });
+}
+
+/** Every variable's value in a solution, by name, header moves excepted (a next point's moves are 0). */
+function solutionValues(pass: Pass, result: SolveResult): Map<string, number> {
+  const moves = new Set([...pass.context.headerMoves.values()].map((variable) => variable.name));
+  return new Map(pass.context.model.variables.filter((variable) => !moves.has(variable.name)).map((variable) => [variable.name, result.value(variable)]));
+}
+
+/** Each header's enthalpy in the solution: its point plus its solved move. */
+function solvedHeaderEnthalpy(pass: Pass, solution: PassSolution): Map<string, number> {
+  const points = new Map<string, number>();
+  for (const [id, h] of pass.context.headerEnthalpy) points.set(id, h + solution.evaluate(pass.context.headerMove(id)));
+  return points;
 }
 
 /**
@@ -181,30 +298,4 @@ export function initialHeaderEnthalpy(plant: Plant): Map<string, number> {
     else points.set(header.id, direct.get(header.id) ?? saturatedVapour(header.pressure).h);
   }
   return points;
-}
-
-/**
- * Moves floating headers to the mixing enthalpy of what entered them,
- * h = (sum m h - heat loss) / sum m, then lets each unit move its own points.
- */
-function updatePoints(plant: Plant, pass: Pass, solution: PassSolution, contributions: readonly UnitContribution[], headerEnthalpy: Map<string, number>): PointChange[] {
-  const changes: PointChange[] = [];
-  for (const header of plant.headers) {
-    if (header.state.kind === 'controlled') continue;
-    let mass = 0;
-    let energy = -header.heatLoss;
-    for (const stream of pass.context.streamsInto(header.id)) {
-      const flow = solution.evaluate(stream.flow);
-      mass += flow;
-      energy += flow * stream.h;
-    }
-    if (mass <= 1e-9) continue;
-    const next = energy / mass;
-    const previous = headerEnthalpy.get(header.id)!;
-    changes.push({ what: `${header.id}.h`, change: Math.abs(next - previous), unit: 'kJ/kg' });
-    headerEnthalpy.set(header.id, next);
-  }
-  const enthalpyOf = (id: string): number => headerEnthalpy.get(id)!;
-  for (const unit of contributions) changes.push(...(unit.update?.(solution, enthalpyOf) ?? []));
-  return changes;
 }

@@ -4,7 +4,7 @@
 // fuel in MW or MMBtu/h, steam values per t or per klb); power in kW, money
 // in the currency.
 import type { ScenarioRun } from '../scenarios/index.js';
-import { perMassValue, type DisplayFormat } from './displayFormat.js';
+import { perMassValue, steamValueNumber, type DisplayFormat } from './displayFormat.js';
 import { steamQualityWarnings } from './steamQuality.js';
 import { table } from './table.js';
 
@@ -49,9 +49,10 @@ function rowsOf(runs: ScenarioRun[], format: DisplayFormat): FigureRow[] {
   }
   const headerIds = [...new Set(solved.flatMap((run) => run.headers.map((header) => header.id)))];
   for (const id of headerIds) {
-    rows.push(pick(`${id} marginal steam value, ${currency}/${format.perMass}`, 2, (run) => {
+    const valueUnit = solved[0]?.result.marginal_value_unit ?? 'currency';
+    rows.push(pick(`${id} marginal steam value, ${format.valueUnit(valueUnit)}`, 2, (run) => {
       const value = run.headers.find((header) => header.id === id)?.marginal_value_per_t ?? null;
-      return value === null ? null : perMassValue(value, format.system);
+      return value === null ? null : steamValueNumber(value, valueUnit, format.system);
     }));
     rows.push(pick(`${id} vent, ${flowUnit}`, 3, (run) => flowValue(run.headers.find((header) => header.id === id)?.vent_kg_s ?? 0)));
     const steamOf = (run: Extract<ScenarioRun, { ok: true }>) => run.headers.find((header) => header.id === id);

@@ -22,7 +22,10 @@ export interface DisplayFormat {
   enthalpy(kJ_kg: number): string;
   money(amount: number): string;
   /** a value per tonne shown per t (SI) or per klb (US); null as "n/a" */
-  valuePerMass(perT: number | null): string;
+  /** a marginal steam value per t in its objective's unit (currency by default), in the case's units */
+  valuePerMass(perT: number | null, unit?: SteamValueUnit): string;
+  /** the label of a steam value's unit: "EUR/t", "MMBtu/klb" */
+  valueUnit(unit?: SteamValueUnit): string;
   percent(fraction: number | null): string;
   /** For tables whose cells are bare numbers under a heading with the unit. */
   flowUnit: string;
@@ -72,11 +75,12 @@ export function displayFormat(system: UnitSystem, currency: string, atmosphericP
     temperature: (K) => formatQuantity(K, 'temperature', system),
     enthalpy: (kJ_kg) => formatQuantity(kJ_kg, 'specificEnthalpy', system),
     money: (amount) => `${clean(amount).toLocaleString('en-US', { maximumFractionDigits: 0 })} ${currency}`,
-    valuePerMass: (perT) => {
+    valuePerMass: (perT, unit = 'currency') => {
       if (perT === null) return 'n/a';
-      const value = system === 'si' ? perT : perT * KG_PER_LB;
-      return `${value.toFixed(2)} ${currency}/${system === 'si' ? 't' : 'klb'}`;
+      const value = steamValueNumber(perT, unit, system);
+      return `${(Math.abs(value) < 0.005 ? 0 : value).toFixed(2)} ${steamValueLabel(unit, system, currency)}`;
     },
+    valueUnit: (unit = 'currency') => steamValueLabel(unit, system, currency),
     percent: (fraction) => (fraction === null ? 'n/a' : `${(fraction * 100).toFixed(1)} %`),
     flowUnit: displayUnit('massFlow', system),
     flowValue: (kg_s) => fromSI(clean(kg_s), 'massFlow', displayUnit('massFlow', system)),
@@ -104,6 +108,26 @@ export function displayFormat(system: UnitSystem, currency: string, atmosphericP
     entropyRate: (kW_K) => (system === 'si' ? `${kW_K.toPrecision(4)} kW/K` : `${((kW_K * BTU_PER_H_PER_KW) / 1.8).toPrecision(4)} Btu/(h R)`),
     heatResidual: (kW) => (system === 'si' ? `${kW.toExponential(2)} kW` : `${(kW * BTU_PER_H_PER_KW).toExponential(2)} Btu/h`),
   };
+}
+
+/** What a marginal steam value counts: the objective's own unit, per t of steam. */
+export type SteamValueUnit = 'currency' | 'GJ' | 'kg CO2' | 'kWh';
+
+/** A steam value per t in the case's units: per klb in US units, GJ as MMBtu, kg CO2 as lb. */
+export function steamValueNumber(perT: number, unit: SteamValueUnit, system: UnitSystem): number {
+  if (system === 'si') return perT;
+  // per t -> per klb; a kg of CO2 per t is a lb per klb (both 1e-3 of the steam's mass)
+  if (unit === 'kg CO2') return perT;
+  if (unit === 'GJ') return perT * KG_PER_LB * (1e6 / KJ_PER_BTU / 1e6);
+  return perT * KG_PER_LB;
+}
+
+export function steamValueLabel(unit: SteamValueUnit, system: UnitSystem, currency: string): string {
+  const perMass = system === 'si' ? 't' : 'klb';
+  if (unit === 'currency') return `${currency}/${perMass}`;
+  if (unit === 'GJ') return system === 'si' ? 'GJ/t' : 'MMBtu/klb';
+  if (unit === 'kg CO2') return system === 'si' ? 'kg CO2/t' : 'lb CO2/klb';
+  return `kWh/${perMass}`;
 }
 
 /** A value per t converted to per klb in US units (for charts that need the number). */

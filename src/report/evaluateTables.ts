@@ -45,17 +45,19 @@ export function projectsText(projects: ProjectEvaluation[], format: DisplayForma
 
 export function screenText(rows: LetdownScreenRow[], format: DisplayFormat, efficiency: number, generator: number): string {
   const { currency, flowUnit } = format;
-  const heading = `Letdown-to-power screen: a back-pressure turbine in place of each letdown carrying flow, at ${fixed(efficiency * 100, 0)} % isentropic and ${fixed(generator * 100, 0)} % gearbox and generator efficiency`;
+  const heading = `Letdown-to-power screen: a back-pressure turbine beside each letdown carrying flow, sized for that flow, at ${fixed(efficiency * 100, 0)} % isentropic and ${fixed(generator * 100, 0)} % gearbox and generator efficiency`;
   if (rows.length === 0) return `${heading}\n  no letdown carries flow\n`;
   const body = table(
-    ['scenario', 'letdown', `steam ${flowUnit}`, 'power kW', `power ${currency}/yr`, `exhaust - outlet ${format.enthalpyUnit}`, `steam lost ${flowUnit}`, `downstream ${currency}/${format.perMass}`, `net ${currency}/yr`],
+    ['scenario', 'letdown', `steam ${flowUnit}`, 'power kW', `power ${currency}/yr`, `exhaust - outlet ${format.enthalpyUnit}`, `steam lost ${flowUnit}`, `downstream ${format.valueUnit()}`, `first order ${currency}/h`, `solved ${currency}/h`, `net ${currency}/yr`],
     rows.map((row) => [
       row.scenario, row.letdown, fixed(format.flowValue(row.steam_kg_s), 2), fixed(row.power_kW, 0), money(row.power_value_per_year),
       `${fixed(format.enthalpyValue(row.downstream_h_change_kJ_kg), 1)}${row.exhaust_quality !== null ? ` (wet, x ${fixed(row.exhaust_quality, 3)})` : ''}`,
       fixed(format.flowValue(row.steam_equivalent_lost_t_per_h * KG_S_PER_T_H), 2),
       row.downstream_marginal_value_per_t === null ? '-' : fixed(perMassValue(row.downstream_marginal_value_per_t, format.system), 2),
+      row.first_order_net_per_h === null ? '-' : fixed(row.first_order_net_per_h, 2),
+      row.solved_saving_per_h === null ? `not solved: ${row.note ?? ''}` : fixed(row.solved_saving_per_h, 2),
       row.net_benefit_per_year === null ? '-' : money(row.net_benefit_per_year),
     ]),
   );
-  return `${heading}\n\n${body}\n  Marginal values hold for small changes; add the turbine as a project for the true figure.\n`;
+  return `${heading}\n\n${body}\n  "solved" is the scenario solved again with the turbine beside the letdown (sized for its flow); "first order" prices its power and the energy it takes out at the marginal values, which hold for small changes only.\n`;
 }

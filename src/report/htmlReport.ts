@@ -5,7 +5,7 @@ import type { Plant } from '../model/index.js';
 import type { PlantResult } from '../plant/index.js';
 import { barChartSvg } from './barChart.js';
 import { balanceDiagram } from './balanceDiagram.js';
-import { displayFormat, perMassValue, type DisplayFormat } from './displayFormat.js';
+import { displayFormat, steamValueNumber, type DisplayFormat } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
 import { reportAssumptions } from './assumptions.js';
@@ -125,10 +125,10 @@ function valueChart(result: PlantResult, format: DisplayFormat): string {
   const headers = [...result.headers].sort((a, b) => b.pressure_MPa - a.pressure_MPa);
   const bars = headers.map((header) => ({
     label: header.id,
-    value: header.marginal_value_per_t === null ? 0 : perMassValue(header.marginal_value_per_t, format.system),
-    text: format.valuePerMass(header.marginal_value_per_t),
+    value: header.marginal_value_per_t === null ? 0 : steamValueNumber(header.marginal_value_per_t, result.marginal_value_unit, format.system),
+    text: format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit),
   }));
-  return barChartSvg('chart-value', `Marginal steam value per header (${format.currency}/${format.perMass})`, bars);
+  return barChartSvg('chart-value', `Marginal steam value per header (${format.valueUnit(result.marginal_value_unit)})`, bars);
 }
 
 export function objectiveWords(objective: string): string {

@@ -48,7 +48,22 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       flow(header.outflow_kg_s),
       header.vent_kg_s > TINY ? flow(header.vent_kg_s) : '-',
       header.heat_loss_kW !== undefined ? format.heatRate(header.heat_loss_kW) : '-',
-      format.valuePerMass(header.marginal_value_per_t),
+      format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit),
+    ]),
+  });
+
+  // Both sides of each marginal value, measured by re-solving, and what sets them.
+  tables.push({
+    id: 'marginal-values',
+    title: 'Marginal steam values: one tonne more or less drawn at each header',
+    headings: ['header', 'one more costs', 'set by', 'one less saves', 'set by', 'switching point'],
+    rows: headers.map((header) => [
+      header.id,
+      header.marginal.more_per_t === null ? 'no more with the units running' : format.valuePerMass(header.marginal.more_per_t, result.marginal_value_unit),
+      header.marginal.more_set_by.join(', ') || '-',
+      header.marginal.less_per_t === null ? 'cannot take less' : format.valuePerMass(header.marginal.less_per_t, result.marginal_value_unit),
+      header.marginal.less_set_by.join(', ') || '-',
+      header.marginal.differs ? 'yes: the two sides differ' : '-',
     ]),
   });
 
@@ -104,21 +119,27 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
   });
 
   // Vents first: venting is usually the largest avoidable loss. Then drains.
+  // Each vent says why its steam has no better use.
+  const why = (from: string): string => {
+    const reasons = result.vents.filter((vent) => vent.where === from).map((vent) => vent.reason);
+    if (reasons.length > 0) return reasons.join(' ');
+    return from === 'deaerator' ? 'its design share of the feedwater' : '-';
+  };
   const losses: string[][] = [];
   const alarmRows: number[] = [];
   for (const terminal of ['atmosphere', 'drain']) {
-    const byKind = new Map<string, number>();
+    const byKind = new Map<string, { from: string; mass: number }>();
     for (const stream of result.streams.filter((candidate) => candidate.to === terminal)) {
       const label = terminal === 'atmosphere' ? `vent from ${stream.from}` : `${kindWords(stream.kind)} from ${stream.from} to drain`;
-      byKind.set(label, (byKind.get(label) ?? 0) + stream.mass_kg_s);
+      byKind.set(label, { from: stream.from, mass: (byKind.get(label)?.mass ?? 0) + stream.mass_kg_s });
     }
-    for (const [label, mass] of byKind) {
+    for (const [label, { from, mass }] of byKind) {
       if (mass <= TINY) continue;
       if (terminal === 'atmosphere') alarmRows.push(losses.length);
-      losses.push([label, flow(mass)]);
+      losses.push([label, flow(mass), terminal === 'atmosphere' ? why(from) : '-']);
     }
   }
-  tables.push({ id: 'vents', title: 'Vents and losses', headings: ['where', 'flow'], rows: losses, alarmRows });
+  tables.push({ id: 'vents', title: 'Vents and losses', headings: ['where', 'flow', 'why'], rows: losses, alarmRows });
 
   tables.push({
     id: 'users',

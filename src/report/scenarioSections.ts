@@ -30,7 +30,7 @@ export function comparisonTable(sections: ScenarioSection[]): ReportTable {
   const headerIds = [...sections[0].result.headers].sort((a, b) => b.pressure_MPa - a.pressure_MPa).map((header) => header.id);
   const rows = sections.map((section) => {
     const totals = section.result.totals;
-    const value = (id: string): string => format.valuePerMass(section.result.headers.find((header) => header.id === id)?.marginal_value_per_t ?? null);
+    const value = (id: string): string => format.valuePerMass(section.result.headers.find((header) => header.id === id)?.marginal_value_per_t ?? null, section.result.marginal_value_unit);
     return [
       section.id,
       section.name,

@@ -29,13 +29,23 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         flow(header.inflow_kg_s),
         flow(header.outflow_kg_s),
         header.vent_kg_s > 1e-9 ? flow(header.vent_kg_s) : '-',
-        valuePerMass(header.marginal_value_per_t),
+        valuePerMass(header.marginal_value_per_t, result.marginal_value_unit),
       ]),
     ),
   );
 
   const qualityWarnings = steamQualityWarnings(result.headers, format);
   if (qualityWarnings.length > 0) lines.push(...qualityWarnings.map((warning) => `warning: ${warning}`));
+  // Each side of the marginal value, measured by re-solving, and what sets it.
+  lines.push('', `Marginal steam values (${objectiveWords(result.objective)}; one tonne drawn at the header and not returned)`);
+  for (const header of result.headers) {
+    const marginal = header.marginal;
+    if (marginal.more_per_t === null && marginal.less_per_t === null) continue;
+    const by = (causes: string[]): string => (causes.length > 0 ? ` (${causes.join(', ')})` : '');
+    const more = marginal.more_per_t === null ? 'no more can be raised with the units running' : `one more costs ${valuePerMass(marginal.more_per_t, result.marginal_value_unit)}${by(marginal.more_set_by)}`;
+    const less = marginal.less_per_t === null ? 'it cannot take less' : `one less saves ${valuePerMass(marginal.less_per_t, result.marginal_value_unit)}${by(marginal.less_set_by)}`;
+    lines.push(`  ${header.id}: ${more}; ${less}${marginal.differs ? '  <- a switching point: the two differ' : ''}`);
+  }
 
   // Vents first, then drains; flows of one kind from one unit are added up.
   const losses = new Map<string, number>();
@@ -49,6 +59,11 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const lossRows = [...losses].filter(([, value]) => value > 1e-9).map(([label, value]) => [label, flow(value)]);
   lines.push('', 'Losses (vents first: venting is usually the largest avoidable loss)');
   lines.push(lossRows.length > 0 ? table(['where', 'flow'], lossRows) : '  none');
+  // Why each vented flow has no better use, worded by the plant layer in the case's units.
+  if (result.vents.length > 0) {
+    lines.push('', '  Why each vent has no better use:');
+    for (const vent of result.vents) lines.push(`  - ${vent.reason}`);
+  }
 
   const units = result.units;
   const sources = units.filter((unit) => ['boiler', 'heatRecoveryBoiler', 'steamImport'].includes(unit.kind));

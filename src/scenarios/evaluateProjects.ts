@@ -3,6 +3,7 @@
 // physical change. A saving is the base's cost less the project's, so the
 // figures equal the difference of the two separate solves.
 import type { CaseVariants, ProjectDefinition } from '../model/index.js';
+import type { PassPoint } from '../plant/index.js';
 import { COST_COMPONENTS, scenarioRun, type CostComponentName, type ScenarioRun } from './annual.js';
 import { internalRateOfReturn, netPresentValue, projectCashFlows, simplePayback } from './economics.js';
 import { solvePlants, type PoolOptions } from './solvePool.js';
@@ -51,8 +52,15 @@ export async function evaluateProjects(variants: CaseVariants, projectIds: strin
     if (!project) throw new ProjectLookupError(`no project "${id}" in the case; known: ${variants.projects.map((entry) => entry.id).join(', ') || 'none'}`);
     return project;
   });
-  const plants = [...variants.scenarios.map((scenario) => scenario.plant), ...projects.flatMap((project) => project.plants.map((entry) => entry.plant))];
-  const outcomes = await solvePlants(plants, options);
+  // The scenarios first: each project on a scenario then also tries that
+  // scenario's on/off decisions, so an added option never shows a loss.
+  const baseOutcomes = await solvePlants(variants.scenarios.map((scenario) => scenario.plant), options);
+  const warmOf = (scenario: string): { commitment: Record<string, number>; start?: PassPoint } | undefined => {
+    const outcome = baseOutcomes[variants.scenarios.findIndex((entry) => entry.id === scenario)];
+    return outcome?.ok ? { commitment: outcome.result.commitment, ...(outcome.start ? { start: outcome.start } : {}) } : undefined;
+  };
+  const projectEntries = projects.flatMap((project) => project.plants);
+  const outcomes = [...baseOutcomes, ...(await solvePlants(projectEntries.map((entry) => entry.plant), options, projectEntries.map((entry) => warmOf(entry.scenario))))];
   const base = variants.scenarios.map((scenario, index) => scenarioRun(scenario.id, scenario.name, scenario.hours, outcomes[index]));
   let next = variants.scenarios.length;
   const evaluations = projects.map((project) => {

@@ -2,7 +2,7 @@
 // step of a sweep. Each names its plant; the outcome is plain data that
 // crosses a worker boundary unchanged.
 import type { CaseVariants, Objective, Plant } from '../model/index.js';
-import type { PlantResult } from '../plant/index.js';
+import type { PassPoint, PlantResult } from '../plant/index.js';
 
 export type Job =
   | { kind: 'scenario'; scenario: string }
@@ -10,12 +10,16 @@ export type Job =
   | { kind: 'sweep'; sweep: string; step: number };
 
 export type JobOutcome =
-  | { ok: true; result: PlantResult }
+  | { ok: true; result: PlantResult; start?: PassPoint }
   | { ok: false; reason: string; message: string };
 
 export interface JobOptions {
   objective?: Objective;
   backend?: 'highs' | 'jslp';
+  /** another solve's integer decisions (the base scenario's, for a project), tried as a candidate */
+  commitment?: Record<string, number>;
+  /** that solve's converged point, to start the candidate from (Maps cross a worker boundary intact) */
+  start?: PassPoint;
 }
 
 /** The plant a job solves; throws for a job that names nothing in the variants (a programming error). */

@@ -1,9 +1,12 @@
 // Letdown-to-power screening: for every letdown carrying flow, what a
-// back-pressure turbine in its place would make, what that power is worth,
-// and what the drier-or-wetter exhaust costs at the downstream header's
-// marginal steam value. The table planners use to see where a turbine pays.
-import type { Plant } from '../model/index.js';
-import { expandIsentropic, type PlantResult } from '../plant/index.js';
+// back-pressure turbine beside it would make, and what the plant saves with
+// it: the scenario solved again with the turbine added, never a product of
+// duals. The first-order figures (power at the marginal power value, the
+// energy taken out priced as downstream steam) are shown beside it to explain
+// it. The table planners use to see where a turbine pays.
+import { getBackend, type BackendName } from '../lp/index.js';
+import type { Objective, Plant, Turbine } from '../model/index.js';
+import { expandIsentropic, plantResult, solvePlant, type PlantResult } from '../plant/index.js';
 import { statePH } from '../properties/index.js';
 
 /**
@@ -18,6 +21,8 @@ const T_PER_H_PER_KG_S = 3.6;
 export interface ScreenOptions {
   isentropicEfficiency?: number;
   generatorEfficiency?: number;
+  objective?: Objective;
+  backend?: BackendName;
 }
 
 export interface LetdownScreenRow {
@@ -44,8 +49,14 @@ export interface LetdownScreenRow {
   /** header-steam equivalent the downstream header loses (the energy taken out as power), t/h */
   steam_equivalent_lost_t_per_h: number;
   downstream_marginal_value_per_t: number | null;
-  /** power value less the lost steam at its marginal value, per year; null without marginal values */
+  /** first order: power value less the lost steam at its marginal value, per hour; null without marginal values */
+  first_order_net_per_h: number | null;
+  /** the scenario's cost less its cost with the turbine added (each solved), per hour; null when the variant could not be solved */
+  solved_saving_per_h: number | null;
+  /** the solved saving over the scenario's hours; null when it could not be solved */
   net_benefit_per_year: number | null;
+  /** why the variant could not be solved, where it could not */
+  note: string | null;
 }
 
 /**
@@ -57,7 +68,7 @@ export interface LetdownScreenRow {
  * turbine moves them, and a solve with the turbine added (a project) is the
  * true figure.
  */
-export function screenLetdowns(scenario: string, hours: number, plant: Plant, result: PlantResult, options: ScreenOptions = {}): LetdownScreenRow[] {
+export async function screenLetdowns(scenario: string, hours: number, plant: Plant, result: PlantResult, options: ScreenOptions = {}): Promise<LetdownScreenRow[]> {
   const efficiency = options.isentropicEfficiency ?? SCREEN_DEFAULTS.isentropicEfficiency;
   const generator = options.generatorEfficiency ?? SCREEN_DEFAULTS.generatorEfficiency;
   const rows: LetdownScreenRow[] = [];
@@ -75,6 +86,8 @@ export function screenLetdowns(scenario: string, hours: number, plant: Plant, re
     const feedwaterH = plant.deaerator.feedwaterH;
     const lost = (steam * expansion.enthalpyDrop) / (to.h_kJ_kg - feedwaterH) * T_PER_H_PER_KG_S;
     const value = to.marginal_value_per_t;
+    const firstOrder = value === null ? null : power * powerValue - lost * value;
+    const solved = await solveWithTurbine(plant, result, letdown.id, letdown.from, letdown.to, to.pressure_MPa, steam, efficiency, generator, options);
     rows.push({
       scenario,
       hours,
@@ -92,8 +105,37 @@ export function screenLetdowns(scenario: string, hours: number, plant: Plant, re
       downstream_h_change_kJ_kg: expansion.exhaust.h - outletH,
       steam_equivalent_lost_t_per_h: lost,
       downstream_marginal_value_per_t: value,
-      net_benefit_per_year: value === null ? null : (power * powerValue - lost * value) * hours,
+      first_order_net_per_h: firstOrder,
+      solved_saving_per_h: solved.saving,
+      net_benefit_per_year: solved.saving === null ? null : solved.saving * hours,
+      note: solved.note,
     });
   }
   return rows;
+}
+
+/**
+ * The scenario solved again with a back-pressure turbine generator beside the
+ * letdown, sized for the flow it carries (the turbine may run anywhere from
+ * stopped to that flow, so it never costs more than the plant without it),
+ * trying the scenario's own on/off decisions too.
+ */
+async function solveWithTurbine(plant: Plant, result: PlantResult, letdown: string, from: string, to: string, toPressure: number, flow: number, efficiency: number, generator: number, options: ScreenOptions): Promise<{ saving: number | null; note: string | null }> {
+  const turbine: Turbine = {
+    id: `screen_${letdown}`,
+    kind: 'turbine',
+    inlet: from,
+    stages: [{ exhaust: { kind: 'header', id: to, pressure: toPressure }, performance: { kind: 'isentropic', efficiency }, outflow: { min: 0, max: Infinity }, sectionFlow: { min: 0, max: flow } }],
+    inletFlow: { min: 0, max: flow },
+    mechanicalEfficiency: 1,
+    generatorEfficiency: generator,
+    power: { min: 0, max: Infinity },
+    canSwitchOff: false,
+    drives: { kind: 'generator' },
+  };
+  const variant: Plant = { ...plant, turbines: [...plant.turbines, turbine] };
+  const outcome = await solvePlant(variant, { objective: options.objective, backend: getBackend(options.backend ?? 'highs'), commitment: new Map(Object.entries(result.commitment)), probeMarginalValues: false });
+  if (!outcome.ok) return { saving: null, note: outcome.message };
+  // In money, whatever the objective: what a planner banks.
+  return { saving: result.totals.cost_per_h - plantResult(outcome).totals.cost_per_h, note: null };
 }

@@ -7,9 +7,10 @@ import type { JobOptions, JobOutcome } from './jobs.js';
 
 export async function solveOne(plant: Plant, options: JobOptions): Promise<JobOutcome> {
   try {
-    const outcome = await solvePlant(plant, { objective: options.objective, backend: getBackend(options.backend ?? 'highs') });
+    const commitment = options.commitment ? new Map(Object.entries(options.commitment)) : undefined;
+    const outcome = await solvePlant(plant, { objective: options.objective, backend: getBackend(options.backend ?? 'highs'), commitment, ...(options.start ? { start: options.start } : {}) });
     if (!outcome.ok) return { ok: false, reason: outcome.reason, message: outcome.message };
-    return { ok: true, result: plantResult(outcome) };
+    return { ok: true, result: plantResult(outcome), start: outcome.start };
   } catch (error) {
     // A property call outside IF97 or a solver fault: one failed scenario, not a crashed batch.
     return { ok: false, reason: 'error', message: error instanceof Error ? error.message : String(error) };

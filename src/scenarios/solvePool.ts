@@ -28,15 +28,19 @@ export function workerCount(jobs: number, options: PoolOptions = {}): number {
   return workersAvailable() ? Math.min(most, jobs) : 1;
 }
 
-/** Solves every plant; outcomes come back in the order given. */
-export async function solvePlants(plants: Plant[], options: PoolOptions = {}): Promise<JobOutcome[]> {
-  const jobOptions: JobOptions = { objective: options.objective, backend: options.backend };
+/**
+ * Solves every plant; outcomes come back in the order given. `warm[i]`, where
+ * given, is another solve's decisions and point, tried for plant i.
+ */
+export async function solvePlants(plants: Plant[], options: PoolOptions = {}, warm: (Pick<JobOptions, 'commitment' | 'start'> | undefined)[] = []): Promise<JobOutcome[]> {
+  const baseOptions: JobOptions = { objective: options.objective, backend: options.backend };
+  const optionsOf = (index: number): JobOptions => (warm[index] ? { ...baseOptions, ...warm[index] } : baseOptions);
   const count = workerCount(plants.length, options);
   const outcomes: JobOutcome[] = new Array(plants.length);
   let done = 0;
   if (count <= 1) {
     for (const [index, plant] of plants.entries()) {
-      outcomes[index] = await solveOne(plant, jobOptions);
+      outcomes[index] = await solveOne(plant, optionsOf(index));
       options.onProgress?.(++done, plants.length);
     }
     return outcomes;
@@ -54,7 +58,7 @@ export async function solvePlants(plants: Plant[], options: PoolOptions = {}): P
                 return;
               }
               const index = next++;
-              worker.postMessage({ index, plant: plants[index], options: jobOptions });
+              worker.postMessage({ index, plant: plants[index], options: optionsOf(index) });
             };
             worker.on('message', (reply: { index: number; outcome: JobOutcome }) => {
               outcomes[reply.index] = reply.outcome;

@@ -21,6 +21,22 @@ describe('steamwright solve', () => {
     expect(run.stdout).toMatch(/ASME B31\.1/);
   });
 
+  it('labels marginal values in the objective\'s own units, with both sides and what sets them', async () => {
+    const fuel = await runCli(['solve', DEMO, '--objective', 'min-fuel']);
+    expect(fuel.code).toBe(0);
+    expect(fuel.stdout).toMatch(/hp +42\.0 barg .* \d+\.\d\d GJ\/t/);
+    expect(fuel.stdout).not.toMatch(/EUR\/t/);
+    const co2 = await runCli(['solve', DEMO, '--objective', 'min-co2']);
+    expect(co2.stdout).toMatch(/\d+\.\d\d kg CO2\/t/);
+    const cost = await runCli(['solve', DEMO]);
+    expect(cost.stdout).toMatch(/hp: one more costs \d+\.\d\d EUR\/t \([a-z_0-9]+ (fuel|power given up)/);
+    expect(cost.stdout).toMatch(/one less saves \d+\.\d\d EUR\/t/);
+    const json = JSON.parse((await runCli(['solve', DEMO, '--json'])).stdout);
+    expect(json.marginal_value_unit).toBe('currency');
+    for (const header of json.headers) expect(header.marginal).toHaveProperty('more_set_by');
+    expect(json.commitments.filter((candidate: { kept: boolean }) => candidate.kept)).toHaveLength(1);
+  }, 300_000);
+
   it('--json gives headers, streams, units, totals and the audit in SI numbers', async () => {
     const run = await runCli(['solve', DEMO, '--json']);
     expect(run.code).toBe(0);

@@ -25,6 +25,10 @@ describe('solvePlant on perturbed demo plants', () => {
           }
           expect(outcome.audit.worstRelative).toBeLessThan(1e-6);
           const result = plantResult(outcome);
+          // Every vented header says why, and about the flow it vents.
+          for (const header of result.headers.filter((candidate) => candidate.vent_kg_s > 1e-6)) {
+            expect(result.vents.find((vent) => vent.where === header.id)?.flow_kg_s).toBe(header.vent_kg_s);
+          }
           expect(balanceDiagram(result, plantDisplayFormat(loaded.plant))).toMatch(/^<svg/);
           expect(htmlReport(loaded.plant, result)).toMatch(/<\/html>\s*$/);
         },

@@ -13,7 +13,7 @@ describe('htmlReport of the board-mill demo', () => {
   it('is one HTML document with the diagram, tables, charts, audit, assumptions and cautions', () => {
     expect(html.startsWith('<!doctype html>')).toBe(true);
     for (const section of ['diagram', 'tables', 'charts', 'audit', 'assumptions', 'safety']) expect(html).toContain(`<section id="${section}">`);
-    for (const table of ['headers', 'sources', 'turbines', 'letdowns', 'vents', 'users', 'totals', 'audit']) expect(html).toContain(`data-table="${table}"`);
+    for (const table of ['headers', 'marginal-values', 'sources', 'turbines', 'letdowns', 'vents', 'users', 'totals', 'audit']) expect(html).toContain(`data-table="${table}"`);
     expect(html).toContain('class="balance-diagram"');
     expect(html).toContain('id="chart-cost"');
     expect(html).toContain('id="chart-value"');

@@ -60,7 +60,7 @@ export const evaluateCommand: CommandModule<object, EvaluateArgs> = {
     if (args.screen) {
       for (const run of outcome.base) {
         const scenario = loaded.variants.scenarios.find((entry) => entry.id === run.id)!;
-        if (run.ok) screen.push(...screenLetdowns(run.id, run.hours, scenario.plant, run.result, { isentropicEfficiency: efficiency, generatorEfficiency: generator }));
+        if (run.ok) screen.push(...(await screenLetdowns(run.id, run.hours, scenario.plant, run.result, { isentropicEfficiency: efficiency, generatorEfficiency: generator, backend: args.solver })));
       }
     }
     const currency = loaded.plant.site.currency;

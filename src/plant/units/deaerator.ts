@@ -29,7 +29,7 @@ export class DeaeratorContribution implements UnitContribution {
     // Returns hotter than the deaerator's saturation flash inside it: what the
     // feedwater cannot absorb leaves through the vent, above its design share.
     this.excessVent = context.variable('deaerator.excess_vent');
-    context.stream({ from: deaerator.heatingSteam, to: 'deaerator', kind: 'heatingSteam', flow: term(this.steam), h: context.h(deaerator.heatingSteam), p: context.pressure(deaerator.heatingSteam) });
+    context.stream({ from: deaerator.heatingSteam, to: 'deaerator', kind: 'heatingSteam', flow: term(this.steam), h: context.h(deaerator.heatingSteam), dh: context.headerMove(deaerator.heatingSteam), p: context.pressure(deaerator.heatingSteam) });
     context.stream({ from: MAKEUP, to: 'deaerator', kind: 'makeup', flow: term(this.makeup), h: plant.site.makeupWater.h, p: plant.site.atmosphericPressure });
   }
 

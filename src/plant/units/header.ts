@@ -22,16 +22,17 @@ export class HeaderContribution implements UnitContribution {
   build(context: BuildContext): void {
     const header = this.header;
     const controlled = header.state.kind === 'controlled';
-    // A floating header's enthalpy is set by mixing, which the loop settles; but
-    // heat-duty users need energy, not mass, so with any of them the header gets
-    // an energy row too, and their flows one free scale (see BuildContext.dutyScale).
-    const dutyUsers = !controlled && context.plant.users.some((user) => user.header === header.id && user.demand.kind === 'duty');
-    context.node({ id: header.id, energyRow: controlled || dutyUsers, heatLoss: header.heatLoss });
-    if (dutyUsers) context.dutyScale.set(header.id, context.variable(`${header.id}.duty_scale`));
+    // A floating header's enthalpy is set by mixing. From the second pass it is
+    // a variable of the pass: its move, within the trust radius the loop gives,
+    // and an energy row with every stream's m h linearised about the point.
+    const radius = controlled ? undefined : context.trust.get(header.id);
+    if (radius !== undefined) context.headerMoves.set(header.id, context.variable(`${header.id}.move`, { lower: -radius, upper: radius }));
+    context.node({ id: header.id, energyRow: controlled || radius !== undefined, heatLoss: header.heatLoss });
     const h = context.h(header.id);
+    const dh = context.headerMove(header.id);
     if (header.venting) {
       this.vent = context.variable(`${header.id}.vent`);
-      context.stream({ from: header.id, to: ATMOSPHERE, kind: 'vent', flow: term(this.vent), h, p: header.pressure });
+      context.stream({ from: header.id, to: ATMOSPHERE, kind: 'vent', flow: term(this.vent), h, dh, p: header.pressure });
     } else {
       this.vent = null;
     }

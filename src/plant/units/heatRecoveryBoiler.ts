@@ -47,6 +47,10 @@ export class HeatRecoveryBoilerContribution implements UnitContribution {
     if (this.boiler.steam.max > this.boiler.steam.min && Math.abs(unfired - this.boiler.steam.max) < 1e-7 * Math.max(1, this.boiler.steam.max)) {
       binding.push('at maximum unfired steam');
     }
+    // Waste heat the process makes is raised whether the steam plant wants it or not.
+    if (this.boiler.steam.min > 0 && Math.abs(unfired - this.boiler.steam.min) < 1e-7 * Math.max(1, this.boiler.steam.min)) {
+      binding.push(this.boiler.steam.max > this.boiler.steam.min ? 'at minimum unfired steam' : 'unfired steam fixed by its process');
+    }
     if (firing && this.fired && Math.abs(fired - firing.maxSteam) < 1e-7 * Math.max(1, firing.maxSteam)) binding.push('at maximum supplementary firing');
     return {
       id: this.boiler.id,

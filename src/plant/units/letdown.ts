@@ -1,5 +1,5 @@
 // A letdown (pressure-reducing) station, with or without a desuperheater.
-import { term, type Variable } from '../../lp/index.js';
+import { expr, term, type LinearExpression, type Variable } from '../../lp/index.js';
 import type { Letdown } from '../../model/index.js';
 import type { BuildContext } from '../context.js';
 import type { UnitContribution, UnitReport } from '../contribution.js';
@@ -14,6 +14,8 @@ export class LetdownContribution implements UnitContribution {
   private inletH = 0;
   private outletH = 0;
   private waterH = 0;
+  /** spray water, kg/s */
+  private spray: LinearExpression = expr();
 
   constructor(private readonly letdown: Letdown) {}
 
@@ -24,24 +26,34 @@ export class LetdownContribution implements UnitContribution {
   build(context: BuildContext): void {
     const letdown = this.letdown;
     this.flow = context.variable(`${letdown.id}.steam`, { upper: letdown.capacity });
-    // Throttling is isenthalpic: the valve's outlet has the inlet's enthalpy.
+    // Throttling is isenthalpic: the valve's outlet has the inlet's enthalpy,
+    // and moves with it.
     this.inletH = context.h(letdown.from);
+    const inletMove = context.headerMove(letdown.from);
     this.outletH = this.inletH;
+    let outletMove = inletMove;
     this.sprayPerKg = 0;
+    this.spray = expr();
     const desuperheater = letdown.desuperheater;
     const deaerator = context.plant.deaerator;
     if (desuperheater) {
       this.waterH = desuperheater.water === 'feedwater' ? deaerator.feedwaterH : context.plant.site.makeupWater.h;
       this.sprayPerKg = sprayWaterRatio(this.inletH, desuperheater.targetH, this.waterH);
-      if (this.sprayPerKg > 0) this.outletH = desuperheater.targetH;
+      if (this.sprayPerKg > 0) {
+        // Spray m (h_in - h_t) / (h_t - h_w): bilinear where the inlet floats,
+        // so taken to first order about the point flow.
+        this.outletH = desuperheater.targetH;
+        outletMove = expr();
+        this.spray = term(this.flow, this.sprayPerKg).addExpression(inletMove, context.pointValue(term(this.flow)) / (desuperheater.targetH - this.waterH));
+      }
     }
     const toPressure = context.pressure(letdown.to);
-    context.stream({ from: letdown.from, to: letdown.id, kind: 'letdown', flow: term(this.flow), h: this.inletH, p: context.pressure(letdown.from) });
-    context.stream({ from: letdown.id, to: letdown.to, kind: 'letdown', flow: term(this.flow, 1 + this.sprayPerKg), h: this.outletH, p: toPressure });
+    context.stream({ from: letdown.from, to: letdown.id, kind: 'letdown', flow: term(this.flow), h: this.inletH, dh: inletMove, p: context.pressure(letdown.from) });
+    context.stream({ from: letdown.id, to: letdown.to, kind: 'letdown', flow: term(this.flow).addExpression(this.spray), h: this.outletH, dh: outletMove, p: toPressure });
     if (this.sprayPerKg > 0 && desuperheater) {
       const source = desuperheater.water === 'feedwater' ? 'deaerator' : MAKEUP;
       const sourcePressure = desuperheater.water === 'feedwater' ? deaerator.pressure : context.plant.site.atmosphericPressure;
-      context.stream({ from: source, to: letdown.id, kind: 'spray', flow: term(this.flow, this.sprayPerKg), h: this.waterH, p: sourcePressure });
+      context.stream({ from: source, to: letdown.id, kind: 'spray', flow: this.spray.clone(), h: this.waterH, p: sourcePressure });
     }
   }
 
@@ -53,8 +65,8 @@ export class LetdownContribution implements UnitContribution {
       kind: this.kind,
       values: {
         steam_kg_s: flow,
-        spray_kg_s: flow * this.sprayPerKg,
-        outlet_kg_s: flow * (1 + this.sprayPerKg),
+        spray_kg_s: solution.evaluate(this.spray),
+        outlet_kg_s: flow + solution.evaluate(this.spray),
         inlet_h_kJ_kg: this.inletH,
         outlet_h_kJ_kg: this.outletH,
         spray_h_kJ_kg: this.sprayPerKg > 0 ? this.waterH : null,

@@ -29,7 +29,10 @@ export class SteamImportContribution implements UnitContribution {
       id: this.supply.id,
       kind: this.kind,
       values: { steam_kg_s: flow, cost_per_h: flow * T_PER_H_PER_KG_S * this.supply.price },
-      binding: atMax && this.supply.flow.max > this.supply.flow.min ? ['at its contract limit'] : [],
+      binding: [
+        ...(atMax && this.supply.flow.max > this.supply.flow.min ? ['at its contract limit'] : []),
+        ...(this.supply.flow.min > 0 && Math.abs(flow - this.supply.flow.min) < 1e-7 * Math.max(1, this.supply.flow.min) ? ['at its contract minimum'] : []),
+      ],
     };
   }
 }

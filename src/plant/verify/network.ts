@@ -36,7 +36,12 @@ export function auditLetdowns(plant: Plant, solved: SolvedPlant, states: AuditSt
           ledger.stream({ from: desuperheater.water === 'feedwater' ? 'deaerator' : MAKEUP, to: letdown.id, label: 'spray water', m: result.spray, ...water });
         }
       }
-      ledger.check(letdown.id, 'spray water', expectedSpray, result.spray, 'kg/s', BALANCE_TOLERANCE, 1e-6 * letdown.capacity);
+      // The loop linearises spray about the last pass's inlet state and flow; it stops once header
+      // states move less than solver.enthalpy_tolerance, so the spray can be off by about that share
+      // of the superheat it removes (a second-order term, measured at 1.3e-6 on the board mill).
+      const superheatRemoved = Math.max(inlet.h - outletH, 1e-9);
+      const sprayTolerance = Math.max(BALANCE_TOLERANCE, expectedSpray > 0 ? plant.solver.enthalpyTolerance / superheatRemoved : 0);
+      ledger.check(letdown.id, 'spray water', expectedSpray, result.spray, 'kg/s', sprayTolerance, 1e-6 * letdown.capacity);
       ledger.stream({ from: letdown.id, to: letdown.to, label: 'steam', m: result.outlet, ...pointPH(outletPressure, outletH) });
     });
   }

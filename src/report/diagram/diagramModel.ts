@@ -70,7 +70,7 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
     lines: [
       header.name && header.name !== header.id ? `${header.id} · ${header.name}` : header.id,
       `${format.pressure(header.pressure_MPa)} · ${format.temperature(header.T_K)}`,
-      `flow ${flow(header.inflow_kg_s)} · steam value ${format.valuePerMass(header.marginal_value_per_t)}`,
+      `flow ${flow(header.inflow_kg_s)} · steam value ${format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit)}`,
     ],
     throughput_kg_s: header.inflow_kg_s,
   }));
