@@ -134,15 +134,15 @@ export function checkSecondLaw(context: ResolveContext, plant: PlantParts): void
     const turbinePath = context.ids.get(turbine.id)?.path;
     if (!header || !turbinePath) continue;
     const stagePath = (k: number): (string | number)[] => [...turbinePath, 'stages', k];
-    // Below its no-load flow a Willans section makes negative power: refuse a minimum flow there.
+    // Below its no-load flow a Willans section makes negative power; the optimiser runs it at
+    // least at that flow, so a stated minimum below it is not what the plant will do: say so.
     turbine.stages.forEach((stage, k) => {
       const performance = stage.performance;
       if (performance.kind !== 'willans' || performance.intercept <= 0) return;
       const noLoad = performance.intercept / performance.slope;
-      if (stage.sectionFlow.min < noLoad * (1 - 1e-9)) {
-        const stated = context.raw([...stagePath(k), 'section_flow']) !== undefined;
-        context.error('below-no-load', [...stagePath(k), stated ? 'section_flow' : 'willans_line'],
-          `stage ${k + 1} of turbine ${turbine.id} may run ${stated ? `down to ${context.show(stage.sectionFlow.min, 'massFlow')}` : 'at any flow'}, below its Willans line's no-load flow of ${context.show(noLoad, 'massFlow')} (intercept / slope), where it makes no power; set section_flow min to at least the no-load flow`);
+      if (context.raw([...stagePath(k), 'section_flow']) !== undefined && stage.sectionFlow.min < noLoad * (1 - 1e-9)) {
+        context.warn('below-no-load', [...stagePath(k), 'section_flow'],
+          `stage ${k + 1} of turbine ${turbine.id} may run down to ${context.show(stage.sectionFlow.min, 'massFlow')}, below its Willans line's no-load flow of ${context.show(noLoad, 'massFlow')} (intercept / slope), where it makes no power; running, it passes at least the no-load flow. Set section_flow min to it`);
       }
     });
     let findings: StageFinding[];

@@ -52,9 +52,9 @@ describe('checkSecondLaw', () => {
     expect(statePH(0.1013 + 1.2, isentropic + 1).s).toBeGreaterThan(inlet.s);
   });
 
-  test('a Willans stage allowed below its no-load flow gets a no-load message', () => {
+  test('a Willans stage allowed below its no-load flow gets a no-load warning', () => {
     const text = millWith('section_flow: { min: 4 t/h, max: 20 t/h }', 'section_flow: { min: 1 t/h, max: 20 t/h }');
     // No-load flow = intercept / slope = 60 kW / 150 kJ/kg = 0.4 kg/s = 1.44 t/h.
-    expect(issuesOf(text)).toMatchInlineSnapshot(`"mill.yaml:158:23  turbines[1].stages[0].section_flow  stage 1 of turbine bpt1 may run down to 1.000 t/h, below its Willans line's no-load flow of 1.440 t/h (intercept / slope), where it makes no power; set section_flow min to at least the no-load flow"`);
+    expect(issuesOf(text)).toMatchInlineSnapshot(`"mill.yaml:158:23  turbines[1].stages[0].section_flow  warning: stage 1 of turbine bpt1 may run down to 1.000 t/h, below its Willans line's no-load flow of 1.440 t/h (intercept / slope), where it makes no power; running, it passes at least the no-load flow. Set section_flow min to it"`);
   });
 });

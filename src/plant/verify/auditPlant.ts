@@ -90,7 +90,7 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
     }
     const hasStreams = into.length + outOf.length > 0;
     const massResidual = massIn - massOut;
-    const massRelative = Math.abs(massResidual) / Math.max(massIn, massOut, 1e-9);
+    const massRelative = Math.abs(massResidual) / Math.max(Math.abs(massIn), Math.abs(massOut), 1e-9);
     const energyResidual = hasStreams && volume.energyCloses ? energyIn - energyOut : null;
     const energyRelative = energyResidual === null ? null : Math.abs(energyResidual) / Math.max(Math.abs(energyIn), Math.abs(energyOut), 1e-9);
     const generation = hasStreams ? entropy : null;

@@ -61,10 +61,12 @@ export function auditUsers(plant: Plant, solved: SolvedPlant, states: AuditState
       const condensate = liquidAt(steam.p, user.condensate.temperature);
       const returned = result.steam * user.condensate.returnFraction;
       ledger.stream({ from: user.header, to: user.id, label: 'steam', m: result.steam, ...steam });
-      if (returned > 0) ledger.stream({ from: user.id, to: liquidTarget(user.condensate.to), label: 'condensate', m: returned, ...condensate });
-      if (result.steam - returned > 0) ledger.stream({ from: user.id, to: DRAIN, label: 'condensate lost', m: result.steam - returned, ...condensate });
+      if (returned !== 0) ledger.stream({ from: user.id, to: liquidTarget(user.condensate.to), label: 'condensate', m: returned, ...condensate });
+      if (result.steam - returned !== 0) ledger.stream({ from: user.id, to: DRAIN, label: 'condensate lost', m: result.steam - returned, ...condensate });
       const heat = result.steam * (steam.h - condensate.h);
-      ledger.cross({ volume: user.id, kind: 'heat', direction: 'out', kW: heat, temperature: condensate.T });
+      // A negative draw exists only in plants built in code (probes of marginal values): its heat
+      // comes from a source at a temperature nobody states, so it adds no entropy term.
+      ledger.cross({ volume: user.id, kind: 'heat', direction: 'out', kW: heat, temperature: result.steam >= 0 ? condensate.T : null });
       if (user.demand.kind === 'duty') {
         // The loop stops once header states move less than solver.enthalpy_tolerance; a duty
         // user's steam was sized at the last state, so its heat can be off by that share of its drop.
