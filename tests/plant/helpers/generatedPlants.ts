@@ -101,7 +101,7 @@ export function plantText(shape: PlantShape, without: number | null = null): Gen
     const performance =
       turbine.kind === 'isentropic'
         ? `isentropic_efficiency: ${turbine.efficiency} %`
-        : `willans_line: { intercept: ${20 + turbine.min * 5} kW, slope: ${willansSlope(turbine.efficiency, PRESSURES[turbine.from], PRESSURES[to])} kJ/kg }`;
+        : `willans_line: { intercept: ${20 + turbine.min * 5} kW, slope: ${Math.min(Math.round(40 + 2 * turbine.efficiency * (to - turbine.from)), willansSlope(turbine.efficiency, PRESSURES[turbine.from], PRESSURES[to]))} kJ/kg }`;
     turbines.push(`  - id: ${id}
     inlet: h${turbine.from}
     stages:
@@ -154,7 +154,7 @@ objective: minimum_cost
 }
 
 /**
- * A Willans slope the second law allows: the stated share of the isentropic
+ * The largest Willans slope the second law allows here: the stated share of the isentropic
  * drop from dry saturated steam at the inlet pressure (the coldest a floating
  * header holds dry) to the outlet, through 98 % x 96 % mechanical and
  * generator efficiency. Pressures in barg on 101.325 kPa.
