@@ -5,6 +5,8 @@ import { hideBin } from 'yargs/helpers';
 import { commands } from './commands/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
 import { joinNegativeValues } from './negativeValues.js';
+import { removePendingOnExit } from './pendingFiles.js';
+import { handleStdoutErrors } from './stdout.js';
 
 /** yargs reads a lone "-" as an unknown argument, not as an option's value ("--batch -" for stdin). */
 function joinStdinValues(argv: string[]): string[] {
@@ -19,6 +21,30 @@ function joinStdinValues(argv: string[]): string[] {
 
 /** Options that take no value: a negative number after one is not its value. */
 const BOOLEAN_FLAGS = new Set(['json', 'verbose', 'screen', 'help', 'version']);
+/** Options whose empty value means something ("--md" alone: standard output). */
+const EMPTY_ALLOWED = new Set(['md', 'csv']);
+
+/**
+ * Every command: an option given twice, or given an empty value, is a usage
+ * error (exit 2) rather than an array or an empty string reaching a handler.
+ */
+function checkOptionValues(argv: Record<string, unknown>): true {
+  const problems: string[] = [];
+  // yargs also stores "export-lp" as "exportLp", and "--out" under its alias "o".
+  const keys = Object.keys(argv).filter((key) => key !== '_' && key !== '$0' && !(key.length > 1 && /[A-Z]/.test(key)));
+  const long = keys.filter((key) => key.length > 1);
+  const isAlias = (key: string): boolean => key.length === 1 && long.some((other) => JSON.stringify(argv[other]) === JSON.stringify(argv[key]));
+  for (const key of keys) {
+    const value = argv[key];
+    if (!(Array.isArray(value) || (value === '' && !EMPTY_ALLOWED.has(key))) || isAlias(key)) continue;
+    const flag = `--${key}`;
+    problems.push(Array.isArray(value)
+      ? `${flag} was given ${value.length} times (${value.map((item) => JSON.stringify(item)).join(', ')}); give it once`
+      : `${flag} needs a value, found an empty one`);
+  }
+  if (problems.length > 0) throw new CliError(problems.join('; '), EXIT_USAGE);
+  return true;
+}
 
 export async function main(argv: string[]): Promise<number> {
   const parser = yargs(joinNegativeValues(joinStdinValues(argv), BOOLEAN_FLAGS))
@@ -27,6 +53,7 @@ export async function main(argv: string[]): Promise<number> {
     .strict()
     .demandCommand(1, 'Name a command, for example: steamwright state --p "10 barg" --x 1')
     .recommendCommands()
+    .check(checkOptionValues, true)
     .help()
     .version()
     .wrap(Math.min(100, process.stdout.columns ?? 100))
@@ -48,11 +75,8 @@ export async function main(argv: string[]): Promise<number> {
   return (process.exitCode as number | undefined) ?? 0;
 }
 
-// A reader that closes early (`steamwright solve x.yaml | head`) is not an error.
-process.stdout.on('error', (error: NodeJS.ErrnoException) => {
-  if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
-  throw error;
-});
+handleStdoutErrors();
+removePendingOnExit();
 
 main(hideBin(process.argv)).then(
   (code) => {

@@ -1,7 +1,7 @@
 import type { Highs, Model as HighsModel } from 'highs';
 import type { SolveOptions } from './backend.js';
 import type { CompiledModel } from './compile.js';
-import { highsStatusNames, mapHighsStatus } from './highsStatus.js';
+import { highsStatusAdvice, highsStatusNames, mapHighsStatus } from './highsStatus.js';
 import { buildResult, type RawOutcome, type SolveResult } from './result.js';
 
 const backendName = 'highs';
@@ -74,7 +74,10 @@ function solveOnce(
   }
   const status = mapHighsStatus(code);
   if (code === unboundedOrInfeasible) notes.push('HiGHS could not tell infeasible from unbounded even without presolve');
-  if (status === 'unknown' || status === 'error') notes.push(`HiGHS model status ${code} (${highsStatusNames.get(code) ?? 'not listed'})`);
+  if (status === 'unknown' || status === 'error') {
+    const advice = highsStatusAdvice.get(code);
+    notes.push(`HiGHS model status ${code} (${highsStatusNames.get(code) ?? 'not listed'})${advice ? `: ${advice}` : ''}`);
+  }
 
   const primalStatus = Number(model.info.get('primal_solution_status'));
   const hasPoint = primalStatus === feasibleSolution && (status === 'optimal' || status === 'time_limit' || status === 'iteration_limit');
@@ -108,9 +111,21 @@ function solveOnce(
       outcome.dualsMissingReason = `HiGHS gives no duals when the solve ends "${status}"`;
     }
   }
+  if (status === 'time_limit' || status === 'iteration_limit') notes.push(limitNote(model, compiled, status, options, hasPoint));
   outcome.timeMs = performance.now() - started;
   if (notes.length > 0) outcome.message = notes.join('; ');
   return outcome;
+}
+
+/** A stop at a limit: the best point's gap for a MIP, and what to change. */
+function limitNote(model: HighsModel, compiled: CompiledModel, status: 'time_limit' | 'iteration_limit', options: SolveOptions, hasPoint: boolean): string {
+  const limit = status === 'time_limit' ? `the time limit of ${options.timeLimitSeconds ?? 'unlimited'} s` : 'the iteration limit';
+  const raise = status === 'time_limit' ? 'raise solver.time_limit_seconds' : 'simplify the case';
+  if (!hasPoint) return `HiGHS reached ${limit} before it found any feasible point; ${raise}`;
+  if (!compiled.isMip) return `HiGHS reached ${limit}; the point returned is feasible but may not be optimal; ${raise}`;
+  const gap = Number(model.info.get('mip_gap'));
+  const gapText = Number.isFinite(gap) ? `within ${(gap * 100).toPrecision(3)} % of the best possible (MIP gap)` : 'of unknown distance from the best possible';
+  return `HiGHS reached ${limit}; the best point found is ${gapText}; ${raise} or solver.mip_gap to accept it`;
 }
 
 function lpIterations(model: HighsModel): number {

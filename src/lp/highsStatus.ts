@@ -37,3 +37,15 @@ export const highsStatusNames: ReadonlyMap<number, string> = new Map([
 export function mapHighsStatus(code: number): SolveStatus {
   return highsStatusTable.get(code) ?? 'unknown';
 }
+
+/** What a HiGHS status means for the user, and what to change; empty for the statuses that need none. */
+export const highsStatusAdvice: ReadonlyMap<number, string> = new Map([
+  [0, 'HiGHS did not run the model; this is a bug in steamwright, please report it with the case'],
+  [6, 'the model has no variables; the case describes no equipment to decide'],
+  [9, 'the model is infeasible or unbounded and HiGHS could not tell which; check for a demand no source can meet, or a price that pays for unlimited flow'],
+  [11, 'HiGHS stopped at an objective bound it was given'],
+  [12, 'HiGHS stopped at an objective target it was given'],
+  [15, 'HiGHS ended without saying why; try --solver jslp as a cross-check, or simplify the case'],
+  [16, 'HiGHS stopped at a limit on the number of solutions'],
+  [17, 'the solve was interrupted'],
+]);

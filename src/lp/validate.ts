@@ -42,8 +42,8 @@ export function validateModel(model: LinearModel): ModelIssue[] {
     issues.push({ where: 'objective', message: 'the model has no objective; call setObjective first' });
   } else {
     checkExpression(model, objective.expression, 'objective', issues);
-    const hasTerm = [...objective.expression.terms.values()].some((coefficient) => coefficient !== 0);
-    if (!hasTerm) issues.push({ where: 'objective', message: 'the objective has no terms with a non-zero coefficient' });
+    // An objective with no non-zero term is legal: the model asks for any
+    // feasible point (a plant whose prices are all zero under minimum cost).
   }
 
   for (const row of model.rows) {

@@ -2,6 +2,7 @@
 // positions, the issues found so far, the defaults applied, and readers that
 // parse quantities with src/units and report exactly what went wrong.
 import { formatQuantity, parseQuantity, type QuantityKind } from '../units/index.js';
+import { MIN_POSITIVE_FRACTION, PHYSICAL_RANGES } from './physicalRanges.js';
 import { PropertyRangeError } from '../properties/index.js';
 import { displayPath, type CasePath, type Issue, type Severity } from './issue.js';
 import type { DefaultApplied, Range, UnitSystem } from './plantTypes.js';
@@ -87,6 +88,11 @@ export class ResolveContext {
       this.error('bad-quantity', path, `expected a finite number, found "${value}"`);
       return undefined;
     }
+    const limits = PHYSICAL_RANGES[kind];
+    if (parsed.value < limits.min || parsed.value > limits.max) {
+      this.error('out-of-range', path, `expected a value ${limits.words}, found "${value}"`);
+      return undefined;
+    }
     if (parsed.currency !== undefined && this.currency !== '' && parsed.currency !== this.currency) {
       this.error('wrong-currency', path, `expected a price in ${this.currency} (the site currency), found "${value}" in ${parsed.currency}`);
       return undefined;
@@ -108,9 +114,9 @@ export class ResolveContext {
   fraction(path: CasePath, options: { zeroAllowed: boolean } = { zeroAllowed: true }): number | undefined {
     const value = this.quantity(path, 'percent');
     if (value === undefined) return undefined;
-    const zeroOk = options.zeroAllowed ? value >= 0 : value > 0;
+    const zeroOk = options.zeroAllowed ? value >= 0 : value >= MIN_POSITIVE_FRACTION;
     if (!zeroOk || value > 1) {
-      const range = options.zeroAllowed ? 'from 0 % to 100 %' : 'above 0 % and at most 100 %';
+      const range = options.zeroAllowed ? 'from 0 % to 100 %' : `of at least ${MIN_POSITIVE_FRACTION * 100} % and at most 100 %`;
       this.error('percent-range', path, `expected a percentage ${range}, found "${this.text(path)}"`);
       return undefined;
     }

@@ -3,6 +3,7 @@
 // resolver as the base, so every check applies to every variant.
 import type { CasePath, Issue } from './issue.js';
 import { parseHours, parseMoney, parseYears } from './money.js';
+import { MAX_MONEY } from './physicalRanges.js';
 import { applyOverlay, OverlayOrigins, variantBase } from './overlay.js';
 import type { Plant } from './plantTypes.js';
 import { ResolveContext } from './resolveContext.js';
@@ -198,6 +199,10 @@ function readProject(context: ResolveContext, item: Raw, path: CasePath, currenc
     }
     if (parsed.value < 0) {
       context.error('negative', [...path, key], `expected zero or more, found "${value}"`);
+      return undefined;
+    }
+    if (!(parsed.value <= MAX_MONEY)) {
+      context.error('out-of-range', [...path, key], `expected a sum of at most ${MAX_MONEY.toExponential()} ${currency}, found "${value}"`);
       return undefined;
     }
     return parsed.value;

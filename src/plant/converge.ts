@@ -20,6 +20,8 @@ export interface PassRecord {
   solveMs: number;
   /** on/off decisions held from earlier passes, so this pass was a linear program */
   integersHeld: boolean;
+  /** where the solver stopped short of optimal but with a point that was used: why, and the gap */
+  note?: string;
 }
 
 /** Audit residuals above this relative size fail the solve. */
@@ -81,7 +83,10 @@ export async function converge(settings: LoopSettings, contributions: UnitContri
     const pass = buildPass(plant, contributions, point, objective, { fixedIntegers: fixed });
     // Duals are asked for only where the pass is a linear program; a MIP pass is never the kept one.
     const result = await backend.solve(pass.context.model, pass.context.model.isMip ? passOptions : settings.solveOptions);
-    if (result.status !== 'optimal') {
+    // A MIP stopped by its time limit with a point: take the point (its on/off
+    // decisions are then held and judged like any other), and say so.
+    const limited = result.status === 'time_limit' && result.hasSolution && pass.context.model.isMip;
+    if (result.status !== 'optimal' && !limited) {
       if (held) {
         // The held decisions no longer fit the moved points: decide the free ones again.
         fixed = commitment;
@@ -101,7 +106,7 @@ export async function converge(settings: LoopSettings, contributions: UnitContri
     const changes = movePoints(plant, pass, solution, contributions, headerEnthalpy, trust, lastMove);
     history.push(changes);
     const largest = changes.reduce<PointChange | null>((worst, change) => (worst === null || change.change > worst.change ? change : worst), null);
-    passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs, integersHeld: wasHeld });
+    passes.push({ pass: passNumber, objective: result.objective ?? NaN, largestChange: largest, solveMs: result.timeMs, integersHeld: wasHeld, ...(limited ? { note: `${result.message ?? 'the solver stopped at its time limit'}; its on/off decisions were used` } : {}) });
     previous = pointValues(pass, result);
     // A pass whose integers were still free is a MIP without duals: go on at least once.
     if (pass.context.model.isMip) continue;

@@ -195,7 +195,9 @@ async function chooseCommitment(settings: LoopSettings, first: Converged, option
     // given, so an added unit that may stop can never cost more.
     const base = new Map([...first.integers].map(([name]) => [name, options.commitment!.get(name) ?? 0]));
     const key = keyOf(base);
-    if (!seen.has(key)) {
+    // From the base's own point it may reach a better point than the same
+    // decisions reached from the cold start, so it is tried even if seen.
+    if (!seen.has(key) || options.start) {
       seen.add(key);
       let outcome: Converged | NotConverged = await converge(settings, contributionsOf(plant), options.start ?? best.point, base);
       if (!outcome.ok && outcome.reason === 'infeasible') outcome = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), onOffOf(base));

@@ -3,6 +3,7 @@
 // come from the same rows, in the case's unit system (flows in t/h or klb/h,
 // fuel in MW or MMBtu/h, steam values per t or per klb); power in kW, money
 // in the currency.
+import { csvCell, markdownCell } from './safeCells.js';
 import type { ScenarioRun } from '../scenarios/index.js';
 import { perMassValue, steamValueNumber, type DisplayFormat } from './displayFormat.js';
 import { steamQualityWarnings } from './steamQuality.js';
@@ -135,9 +136,7 @@ export function compareText(title: string, runs: ScenarioRun[], format: DisplayF
   return `${title}\n\n${table(headings, rows)}\n\n${footer}\n${qualityWarnings(runs, format)}${failures(runs)}`;
 }
 
-function csvField(text: string): string {
-  return /[",\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
-}
+const csvField = csvCell;
 
 export function compareCsv(runs: ScenarioRun[], format: DisplayFormat): string {
   const { headings, rows } = grid(runs, format);
@@ -148,7 +147,7 @@ export function compareCsv(runs: ScenarioRun[], format: DisplayFormat): string {
 
 export function compareMarkdown(runs: ScenarioRun[], format: DisplayFormat): string {
   const { headings, rows } = grid(runs, format);
-  const line = (row: string[]): string => `| ${row.map((text) => text.replace(/\|/g, '\\|')).join(' | ')} |`;
+  const line = (row: string[]): string => `| ${row.map(markdownCell).join(' | ')} |`;
   const rule = `|${headings.map((_, index) => (index === 0 ? ' --- ' : ' ---: ')).join('|')}|`;
   return [line(headings), rule, ...rows.map(line)].join('\n') + '\n' + failures(runs);
 }

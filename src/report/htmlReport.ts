@@ -9,8 +9,12 @@ import { displayFormat, steamValueNumber, type DisplayFormat } from './displayFo
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
 import { reportAssumptions } from './assumptions.js';
+import { createHash } from 'node:crypto';
 import { REPORT_SCRIPT, REPORT_STYLE } from './htmlAssets.js';
 import { SAFETY_CAUTION } from './safety.js';
+
+/** CSP source for the inline script: sha256 of its exact text (CSP Level 2, hash-source). */
+const SCRIPT_HASH = `sha256-${createHash('sha256').update(REPORT_SCRIPT, 'utf8').digest('base64')}`;
 import { annualCostChart, comparisonTable, scenarioCostChart, scenarioSectionHtml, type ScenarioSection } from './scenarioSections.js';
 
 export interface ReportOptions {
@@ -85,8 +89,9 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     '<html lang="en">',
     '<head>',
     '<meta charset="utf-8">',
-    // Nothing may be fetched: inline style and script only.
-    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; script-src 'unsafe-inline'; img-src data:">`,
+    // Nothing may be fetched: inline style, and only the report's own script
+    // (by its hash), so no script that reached the page by any other road runs.
+    `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; script-src '${SCRIPT_HASH}'; img-src data:">`,
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
     `<title>${e(result.plant)}: steam balance report</title>`,
     `<style>${REPORT_STYLE}</style>`,

@@ -1,7 +1,6 @@
 export { solveSummary, type SummaryOptions } from './solveSummary.js';
 export { SAFETY_CAUTION } from './safety.js';
 export { table } from './table.js';
-export { writeFileAtomic } from './writeFileAtomic.js';
 export { escapeMarkup } from './escape.js';
 export { displayFormat, clean, perMassValue, type DisplayFormat } from './displayFormat.js';
 export { reportTables, kindWords, type ReportTable } from './reportTables.js';

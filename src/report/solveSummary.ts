@@ -15,6 +15,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const { flow, power, fuelRate, money, valuePerMass, percent } = format;
   const lines: string[] = [];
   lines.push(`${result.plant}: ${objectiveWords(result.objective)} balance, ${result.passes.length} passes (${result.backend})`);
+  for (const pass of result.passes) if (pass.note) lines.push(`  pass ${pass.pass}: ${pass.note}`);
   lines.push('');
 
   lines.push('Headers');

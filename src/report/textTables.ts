@@ -1,12 +1,13 @@
 // The report's tables as Markdown and as CSV.
 import type { ReportTable } from './reportTables.js';
+import { csvCell, markdownCell } from './safeCells.js';
 
-/** Markdown: one `##` section per table; pipes in cells are escaped. */
+/** Markdown: one `##` section per table; cells are HTML escaped and pipes escaped. */
 export function tablesMarkdown(title: string, tables: ReportTable[], notes: string[] = []): string {
-  const cell = (text: string): string => text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\r?\n/g, ' ');
+  const cell = markdownCell;
   const lines: string[] = [`# ${cell(title)}`, ''];
   for (const table of tables) {
-    lines.push(`## ${table.title}`, '');
+    lines.push(`## ${cell(table.title)}`, '');
     if (table.rows.length === 0) {
       lines.push('none', '');
       continue;
@@ -25,7 +26,7 @@ export function tablesMarkdown(title: string, tables: ReportTable[], notes: stri
  * units ("42.0 barg"), exactly as the report shows them.
  */
 export function tablesCsv(tables: ReportTable[]): string {
-  const field = (text: string): string => (/[",\r\n]/.test(text) || /^[=+\-@]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text);
+  const field = csvCell;
   const lines: string[] = [];
   for (const table of tables) {
     lines.push(['table', ...table.headings].map(field).join(','));

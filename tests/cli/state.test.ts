@@ -61,7 +61,7 @@ describe('steamwright state', () => {
     const run = await runCli(['state', '--p', '1 MPa', '--p', '2 MPa', '--x', '0']);
     expect(run.code).toBe(2);
     expect(run.stderr).toMatchInlineSnapshot(`
-      "steamwright: --p was given more than once; give it once
+      "steamwright: --p was given 2 times ("1 MPa", "2 MPa"); give it once
       "
     `);
   });

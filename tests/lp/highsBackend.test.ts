@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { LinearModel, expr, getBackend } from '../../src/lp/index.js';
 import { expectClose } from '../helpers/expectClose.js';
+import { marketSplit } from './hardModels.js';
 import { textbookCases, wyndorInfeasible, wyndorUnbounded } from './textbookModels.js';
 
 const highs = getBackend('highs');
@@ -80,5 +81,17 @@ describe('HiGHS backend on textbook LPs', () => {
       const result = await highs.solve(model, { timeLimitSeconds: 5 });
       expect(result.status).toBe('optimal');
     }
+  });
+
+  it('ends a hard MIP at its time limit with the best point found', async () => {
+    // Hard by construction (tests/lp/hardModels.ts), so a 1 s limit is reached
+    // on any machine; every point is feasible, so HiGHS has one to return.
+    const { model } = marketSplit();
+    const result = await highs.solve(model, { timeLimitSeconds: 1 });
+    expect(result.status).toBe('time_limit');
+    expect(result.objective).not.toBeNull();
+    expect(result.primal.size).toBeGreaterThan(0);
+    // The message gives the gap and what to change.
+    expect(result.message).toMatch(/^HiGHS reached the time limit of 1 s; the best point found is within [\d.]+ % of the best possible \(MIP gap\); raise solver\.time_limit_seconds or solver\.mip_gap to accept it$/);
   });
 });

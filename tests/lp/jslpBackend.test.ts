@@ -83,7 +83,7 @@ describe('javascript-lp-solver and HiGHS agree', () => {
       const model = randomFeasibleLp(seed);
       const reference = await highs.solve(model);
       expect(reference.status, `seed ${seed} highs`).toBe('optimal');
-      const other = await jslp.solve(model, { timeLimitSeconds: 1 });
+      const other = await jslp.solve(model, { timeLimitSeconds: 5 });
       if (other.status === 'did_not_finish') {
         skipped.push(seed);
         continue;

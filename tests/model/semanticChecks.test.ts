@@ -58,7 +58,7 @@ describe('limits', () => {
   });
   test('percentages outside 0 to 100', () => {
     expect(issuesOf(edited(['efficiency: 84 %', 'efficiency: 184 %'], ['return: 80 %', 'return: -5 %']))).toMatchInlineSnapshot(`
-      "case.yaml:43:17  boilers[0].efficiency  expected a percentage above 0 % and at most 100 %, found "184 %"
+      "case.yaml:43:17  boilers[0].efficiency  expected a percentage of at least 0.1 % and at most 100 %, found "184 %"
       case.yaml:57:27  users[0].condensate.return  expected a percentage from 0 % to 100 %, found "-5 %""
     `);
   });

@@ -43,7 +43,9 @@ interface Check {
  * than that leaves one side, which the value must match.
  */
 async function oracle(plant: Plant, header: HeaderResult, stepTph: number, warm: Pick<SolvePlantOptions, 'commitment' | 'start'>): Promise<Check[] | null> {
-  const base = await optimum(plant);
+  // The base re-solved too, from its own decisions and point, as the drawn plants are:
+  // on/off choices make the optimum depend on where the search starts, and all three must start alike.
+  const base = await optimum(plant, warm);
   if (base === null) return null;
   const label = `${plant.name} ${header.id}`;
   for (let step = stepTph; ; step /= 10) {

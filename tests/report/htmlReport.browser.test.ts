@@ -87,7 +87,7 @@ beforeAll(async () => {
     viewport: { width: 1400, height: 900 },
     args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
   });
-}, 60_000);
+});
 
 afterAll(async () => {
   await context?.close();

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { htmlReport } from '../../src/report/index.js';
 import { hostileCaseText, solveDemo, solveText, type Solved } from './helpers/solvedCases.js';
@@ -31,6 +32,14 @@ describe('htmlReport of the board-mill demo', () => {
     for (const [, target] of html.matchAll(/href="([^"]*)"/g)) expect(target.startsWith('#')).toBe(true);
     expect(html).toContain(`default-src 'none'`);
     expect(html).not.toMatch(/@import|url\(/);
+  });
+
+  it('allows only its own script, by hash: no unsafe-inline for scripts (CSP Level 2 hash-source)', () => {
+    const policy = /script-src '([^']+)'/.exec(html)?.[1];
+    const scripts = [...html.matchAll(/<script>([\s\S]*?)<\/script>/g)].map((match) => match[1]);
+    expect(scripts).toHaveLength(1);
+    expect(policy).toBe(`sha256-${createHash('sha256').update(scripts[0], 'utf8').digest('base64')}`);
+    expect(html).not.toMatch(/script-src[^;]*unsafe-inline/);
   });
 
   it('writes the vent row in the vent style and figures in the case units', () => {

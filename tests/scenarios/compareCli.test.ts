@@ -18,7 +18,7 @@ describe('steamwright compare (the built binary, on worker threads)', () => {
     expect(runs.map((run) => run.id)).toEqual(['winter', 'summer', 'reduced']);
     expect(runs).toEqual(strip(serial.stdout));
     for (const run of runs) expect(run.cost_per_year).toBeCloseTo(run.hours * run.cost_per_h, 6);
-  }, 120_000);
+  });
   test('an unknown scenario is bad usage naming the known ones', async () => {
     const run = await runCli(['compare', 'cases/kestrel-bay-board-mill.yaml', '--scenarios', 'winter,spring']);
     expect(run.code).toBe(2);
@@ -28,7 +28,7 @@ describe('steamwright compare (the built binary, on worker threads)', () => {
     const run = await runCli(['solve', 'cases/kestrel-bay-board-mill.yaml', '--scenario', 'reduced', '--json']);
     expect(run.code).toBe(0);
     expect(JSON.parse(run.stdout).units.find((unit: { id: string }) => unit.id === 'boiler_1')).toBeUndefined();
-  }, 60_000);
+  });
   test('a US-units case is compared in klb/h, MMBtu/h and USD/klb; --json stays in SI', async () => {
     const text = await runCli(['compare', 'cases/millbrook-creamery.yaml']);
     expect(text.code).toBe(0);
@@ -41,14 +41,14 @@ describe('steamwright compare (the built binary, on worker threads)', () => {
     expect(csv.stdout).toMatch(/^"steam raised, klb\/h",/m);
     const json = JSON.parse((await runCli(['compare', 'cases/millbrook-creamery.yaml', '--json'])).stdout);
     expect(typeof json.scenarios[0].totals.steam_raised_kg_s).toBe('number');
-  }, 120_000);
+  });
   test('evaluate on a US-units case prints its projects and screen in US units', async () => {
     const run = await runCli(['evaluate', 'cases/millbrook-creamery.yaml']);
     expect(run.code).toBe(0);
     expect(run.stdout).toMatch(/^blowdown_flash: /m);
     expect(run.stdout).toMatch(/vented less klb\/h/);
     expect(run.stdout).toMatch(/fuel less MMBtu\/h/);
-  }, 120_000);
+  });
   test('a scenario that cannot be met is NOT SOLVED with its short header, the others print, and the exit code is 1', async () => {
     const folder = mkdtempSync(join(tmpdir(), 'steamwright-compare-'));
     const file = join(folder, 'shortfall.yaml');
@@ -59,7 +59,7 @@ describe('steamwright compare (the built binary, on worker threads)', () => {
     expect(run.stdout).toMatch(/cost per hour, USD\s+[\d,]+\.\d\d/);
     expect(run.stdout).toMatch(/Annual cost over 8,000 h: not available/);
     expect(run.stderr).toMatch(/1 of 2 could not be solved: overload/);
-  }, 60_000);
+  });
   test('a sweep prints per-step costs and no annual total, and --json names the sweep', async () => {
     const text = await runCli(['compare', 'cases/kestrel-bay-board-mill.yaml', '--sweep', 'import_price']);
     expect(text.code).toBe(0);
@@ -69,5 +69,5 @@ describe('steamwright compare (the built binary, on worker threads)', () => {
     expect(json.annual).toBeNull();
     expect(json.sweep).toEqual({ id: 'import_price', target: 'power.import.price', scenario: 'summer' });
     expect(json.scenarios).toHaveLength(9);
-  }, 120_000);
+  });
 });

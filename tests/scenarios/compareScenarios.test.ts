@@ -89,14 +89,14 @@ describe('runSweep', () => {
       if (step.price < expected.pricePerMWh) expect(step.throttle_t_h, `turbine flow at ${step.price} USD/MWh`).toBeLessThan(1e-6);
       else expectClose(step.throttle_t_h, 15, 1e-6, `turbine flow at ${step.price} USD/MWh, t/h`);
     }
-  }, 60_000);
+  });
 
   test('a finer sweep puts the switch within 0.2 USD/MWh of the hand-computed price', async () => {
     const [below, above] = bracket(await sweepSteps('near_switch'));
     expect(below.price).toBeLessThan(expected.pricePerMWh);
     expect(above.price).toBeGreaterThan(expected.pricePerMWh);
     expectClose(above.price - below.price, 0.2, 1e-9, 'bracket width, USD/MWh');
-  }, 60_000);
+  });
 });
 
 describe('compareScenarios', () => {
@@ -110,5 +110,5 @@ describe('compareScenarios', () => {
     if (!overload.ok) expect(overload.message).toMatch(/cannot be met: lp is short of/);
     expect(comparison.annual.failed).toEqual(['overload']);
     expect(comparison.annual.cost_per_year).toBeNull();
-  }, 60_000);
+  });
 });

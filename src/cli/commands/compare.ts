@@ -6,6 +6,7 @@ import { compareCsv, compareMarkdown, compareText, plantDisplayFormat } from '..
 import { compareScenarios, progressLine, runSweep, ScenarioLookupError, type Comparison } from '../../scenarios/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { checkOneOf, checkWorkers } from '../optionChecks.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
 interface CompareArgs {
@@ -36,8 +37,8 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
       .option('workers', { type: 'number', describe: 'most worker threads (default: one per core; 1 solves in process)' })
       .conflicts('scenarios', 'sweep')
       .check((args) => {
-        if ([args.json, args.csv, args.md].filter(Boolean).length > 1) throw new Error('choose one of --json, --csv, --md');
-        if (args.workers !== undefined && !(Number.isInteger(args.workers) && args.workers >= 1)) throw new Error(`--workers expects a whole number of 1 or more, found ${args.workers}`);
+        checkOneOf(args, ['json', 'csv', 'md']);
+        checkWorkers(args.workers);
         return true;
       })
       .example('$0 compare cases/mill.yaml', 'every scenario side by side')

@@ -7,6 +7,7 @@ import { evaluateProjects, ProjectLookupError, progressLine, SCREEN_DEFAULTS, sc
 import { parseQuantity } from '../../units/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { checkWorkers } from '../optionChecks.js';
 
 interface EvaluateArgs {
   case: string;
@@ -40,6 +41,10 @@ export const evaluateCommand: CommandModule<object, EvaluateArgs> = {
       .option('generator-efficiency', { type: 'string', describe: `gearbox and generator efficiency for the screen; default ${SCREEN_DEFAULTS.generatorEfficiency * 100} %` })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
       .option('workers', { type: 'number', describe: 'most worker threads (default: one per core; 1 solves in process)' })
+      .check((args) => {
+        checkWorkers(args.workers);
+        return true;
+      })
       .example('$0 evaluate cases/mill.yaml', 'every project and the letdown screen')
       .example('$0 evaluate cases/mill.yaml --project bpt_mp_lp --json', 'one project as JSON') as Argv<EvaluateArgs>,
   handler: async (args) => {

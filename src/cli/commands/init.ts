@@ -1,9 +1,11 @@
 // `steamwright init FILE`: a commented starter case, never over an existing file.
 import { link, unlink, writeFile } from 'node:fs/promises';
-import { basename, dirname, join, relative, sep } from 'node:path';
+import { dirname, relative, sep } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
 import { schemaFilePath, starterCase } from '../../model/index.js';
 import { CliError, EXIT_USAGE } from '../errors.js';
+import { temporaryName } from '../outputFiles.js';
+import { holdPending, releasePending } from '../pendingFiles.js';
 
 interface InitArgs {
   file: string;
@@ -11,6 +13,17 @@ interface InitArgs {
 
 function errorCode(error: unknown): string | undefined {
   return (error as NodeJS.ErrnoException).code;
+}
+
+function folderProblem(code: string | undefined, folder: string): string {
+  if (code === 'ENOENT') return `the folder ${folder} does not exist`;
+  if (code === 'ENOTDIR') return `${folder} is not a folder`;
+  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
+  if (code === 'EROFS') return 'the file system is read-only';
+  if (code === 'ENOSPC') return 'no space left on the device';
+  if (code === 'ENAMETOOLONG') return 'the name is too long';
+  if (code === 'EISDIR') return 'it is a folder';
+  return `the system refused (${code ?? 'unknown error'})`;
 }
 
 export const initCommand: CommandModule<object, InitArgs> = {
@@ -22,25 +35,28 @@ export const initCommand: CommandModule<object, InitArgs> = {
       .example('$0 init plant.yaml', 'start a new case') as Argv<InitArgs>,
   handler: async (args) => {
     const target = args.file;
+    if (target.trim() === '') throw new CliError('init needs a file name, found an empty one', EXIT_USAGE);
     const folder = dirname(target);
     const schema = relative(folder, schemaFilePath()).split(sep).join('/');
-    const temporary = join(folder, `.${basename(target)}.${process.pid}.tmp`);
+    const temporary = temporaryName(target);
+    holdPending(temporary);
     try {
       await writeFile(temporary, starterCase(schema), { flag: 'wx' });
     } catch (error) {
-      const code = errorCode(error);
-      if (code === 'ENOENT') throw new CliError(`cannot write ${target}: the folder ${folder} does not exist`, EXIT_USAGE);
-      if (code === 'EACCES' || code === 'EROFS') throw new CliError(`cannot write ${target}: permission denied`, EXIT_USAGE);
-      throw error;
+      releasePending(temporary);
+      await unlink(temporary).catch(() => undefined);
+      throw new CliError(`cannot write ${target}: ${folderProblem(errorCode(error), folder)}`, EXIT_USAGE);
     }
     try {
       // link() refuses an existing target, so a file created meanwhile is never overwritten.
       await link(temporary, target);
     } catch (error) {
-      if (errorCode(error) === 'EEXIST') throw new CliError(`${target} already exists; choose another name or remove it first`, EXIT_USAGE);
-      throw new CliError(`cannot write ${target}: ${(error as Error).message}`, EXIT_USAGE);
+      const code = errorCode(error);
+      if (code === 'EEXIST') throw new CliError(`${target} already exists; choose another name or remove it first`, EXIT_USAGE);
+      throw new CliError(`cannot write ${target}: ${folderProblem(code, folder)}`, EXIT_USAGE);
     } finally {
       await unlink(temporary).catch(() => undefined);
+      releasePending(temporary);
     }
     process.stdout.write(`wrote ${target}; edit it, then run: steamwright check ${target}\n`);
   },

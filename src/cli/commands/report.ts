@@ -4,10 +4,12 @@ import { basename, extname } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
 import { getBackend, type BackendName } from '../../lp/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
-import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, writeFileAtomic, type ScenarioSection } from '../../report/index.js';
+import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, type ScenarioSection } from '../../report/index.js';
 import { compareScenarios } from '../../scenarios/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { solveFailure } from '../solveFailure.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
 interface ReportArgs {
@@ -46,9 +48,14 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .example('$0 report cases/mill.yaml --scenario winter', 'one scenario: mill.winter.report.html')
       .example('$0 report cases/mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
   handler: async (args) => {
-    for (const option of ['out', 'svg'] as const) {
-      if (args[option] !== undefined && args[option].trim() === '') throw new CliError(`--${option} needs a file name`);
-    }
+    // Every output is named and checked before any work is done.
+    const requests: OutputRequest[] = [];
+    const wantsHtml = args.out !== undefined || (args.svg === undefined && args.md === undefined && args.csv === undefined);
+    if (wantsHtml) requests.push({ option: args.out === undefined ? 'the report' : '--out', path: args.out ?? defaultReportName(args.case, args.scenario) });
+    if (args.svg !== undefined) requests.push({ option: '--svg', path: args.svg });
+    if (args.md !== undefined) requests.push({ option: '--md', path: toStdout(args.md) ? '-' : args.md });
+    if (args.csv !== undefined) requests.push({ option: '--csv', path: toStdout(args.csv) ? '-' : args.csv });
+    const planned = await planOutputs([{ option: 'case file', path: args.case }], requests);
     const loaded = await loadCaseOrFail(args.case, 'no report was written');
     const variants = loaded.variants;
     let plant = loaded.plant;
@@ -64,7 +71,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     }
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
     const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw new CliError(`${args.case}${args.scenario ? ` scenario "${args.scenario}"` : ''}: ${outcome.message}`, EXIT_PROBLEMS);
+    if (!outcome.ok) throw solveFailure(args.case, args.scenario, outcome, args.solver);
     const result = plantResult(outcome);
     const format = plantDisplayFormat(plant);
 
@@ -81,31 +88,20 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
-    const outputs: { path: string; text: string }[] = [];
-    const printed: string[] = [];
-    const wantsHtml = args.out !== undefined || (args.svg === undefined && args.md === undefined && args.csv === undefined);
-    if (wantsHtml) outputs.push({ path: args.out ?? defaultReportName(args.case, args.scenario), text: htmlReport(plant, result, { subtitle, scenarios: sections }) });
-    if (args.svg !== undefined) outputs.push({ path: args.svg, text: `${balanceDiagram(result, format)}\n` });
-    if (args.md !== undefined) {
-      const text = tablesMarkdown(result.plant, tables);
-      if (toStdout(args.md)) printed.push(text);
-      else outputs.push({ path: args.md, text });
-    }
-    if (args.csv !== undefined) {
-      const text = tablesCsv(tables);
-      if (toStdout(args.csv)) printed.push(text);
-      else outputs.push({ path: args.csv, text });
-    }
-    for (const output of outputs) {
-      try {
-        await writeFileAtomic(output.path, output.text);
-      } catch (error) {
-        throw new CliError(`cannot write "${output.path}": ${(error as Error).message}`, EXIT_PROBLEMS);
-      }
-    }
-    for (const text of printed) process.stdout.write(text.endsWith('\n') ? text : `${text}\n`);
-    const notice = outputs.map((output) => `wrote ${output.path}\n`).join('');
-    if (printed.length > 0) process.stderr.write(notice);
+    const texts: Record<string, () => string> = {
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections }),
+      '--svg': () => `${balanceDiagram(result, format)}\n`,
+      '--md': () => tablesMarkdown(result.plant, tables),
+      '--csv': () => tablesCsv(tables),
+    };
+    texts['--out'] = texts['the report'];
+    const outputs = planned.map((output) => {
+      const text = texts[output.option]();
+      return { ...output, text: output.kind === 'stdout' && !text.endsWith('\n') ? `${text}\n` : text };
+    });
+    await writeOutputs(outputs);
+    const notice = outputs.filter((output) => output.kind !== 'stdout').map((output) => `wrote ${output.path}\n`).join('');
+    if (outputs.some((output) => output.kind === 'stdout')) process.stderr.write(notice);
     else process.stdout.write(notice);
   },
 };

@@ -4,8 +4,10 @@ import type { Argv, CommandModule } from 'yargs';
 import { getBackend, toLpFormat, type BackendName } from '../../lp/index.js';
 import type { Objective } from '../../model/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
-import { solveSummary, writeFileAtomic } from '../../report/index.js';
+import { solveSummary } from '../../report/index.js';
+import { planOutputs, writeOutputs } from '../outputFiles.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { solveFailure } from '../solveFailure.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 
 interface SolveArgs {
@@ -39,6 +41,9 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       .example('$0 solve cases/mill.yaml', 'solve the demo plant')
       .example('$0 solve cases/mill.yaml --objective max-power --json', 'most on-site power, as JSON') as Argv<SolveArgs>,
   handler: async (args) => {
+    const requests = [{ option: 'the summary', path: '-' }];
+    if (args['export-lp'] !== undefined) requests.push({ option: '--export-lp', path: args['export-lp'] });
+    const planned = await planOutputs([{ option: 'case file', path: args.case }], requests);
     const loaded = await loadCaseOrFail(args.case);
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
     let plant = loaded.plant;
@@ -51,17 +56,10 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       plant = scenario.plant;
     }
     const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw new CliError(`${args.case}${args.scenario ? ` scenario "${args.scenario}"` : ''}: ${outcome.message}`, EXIT_PROBLEMS);
+    if (!outcome.ok) throw solveFailure(args.case, args.scenario, outcome, args.solver);
     const result = plantResult(outcome);
-    if (args['export-lp']) {
-      try {
-        await writeFileAtomic(args['export-lp'], toLpFormat(outcome.pass.context.model).text);
-      } catch (error) {
-        throw new CliError(`--export-lp: cannot write "${args['export-lp']}": ${(error as Error).message}`, EXIT_PROBLEMS);
-      }
-    }
-    process.stdout.write(
-      args.json ? `${JSON.stringify(result, null, 2)}\n` : solveSummary(result, { atmosphericPressure_MPa: loaded.plant.site.atmosphericPressure }),
-    );
+    const summary = args.json ? `${JSON.stringify(result, null, 2)}\n` : solveSummary(result, { atmosphericPressure_MPa: loaded.plant.site.atmosphericPressure });
+    const lp = args['export-lp'] !== undefined ? toLpFormat(outcome.pass.context.model).text : '';
+    await writeOutputs(planned.map((output) => ({ ...output, text: output.option === '--export-lp' ? lp : summary })));
   },
 };

@@ -1,11 +1,11 @@
 // `steamwright state`: one water or steam state, or a stream of them (--batch).
-import { createReadStream } from 'node:fs';
-import { access } from 'node:fs/promises';
-import { createInterface } from 'node:readline';
+import { fstatSync } from 'node:fs';
+import { open } from 'node:fs/promises';
 import type { Argv, CommandModule } from 'yargs';
 import { formatQuantity, parseQuantity, type ParseOptions, type UnitSystem } from '../../units/index.js';
 import type { SteamState } from '../../properties/index.js';
-import { CliError } from '../errors.js';
+import { batchLines, jsonTooDeep, MAX_BATCH_DEPTH, MAX_BATCH_LINE } from '../batchLines.js';
+import { CliError, EXIT_PROBLEMS } from '../errors.js';
 import { evaluateState, stateRecord, type StateInputs } from '../stateRequest.js';
 
 interface StateArgs {
@@ -102,27 +102,62 @@ function regionName(state: SteamState): string {
   return '2 (superheated or saturated vapour)';
 }
 
+/** The batch input, opened and checked: one clear line (exit 2) for a folder, a missing or unreadable file. */
+async function openBatch(source: string): Promise<AsyncIterable<Buffer | string>> {
+  if (source === '-') {
+    let info;
+    try {
+      info = fstatSync(0);
+    } catch {
+      throw new CliError('--batch -: standard input is closed; pipe JSON lines into it, or give a file');
+    }
+    if (info.isDirectory()) throw new CliError('--batch -: standard input is a folder; give a file of JSON lines');
+    return process.stdin;
+  }
+  let handle;
+  try {
+    handle = await open(source, 'r');
+  } catch (error) {
+    throw new CliError(`--batch: cannot read "${source}"${readReason(error)}; give a file of JSON lines, or - for stdin`);
+  }
+  const info = await handle.stat();
+  if (info.isDirectory()) {
+    await handle.close();
+    throw new CliError(`--batch: "${source}" is a folder; give a file of JSON lines, or - for stdin`);
+  }
+  return handle.createReadStream();
+}
+
+function readReason(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException).code;
+  if (code === 'EACCES' || code === 'EPERM') return ': permission denied';
+  if (code === 'EISDIR') return ': it is a folder';
+  if (code === 'ENOTDIR') return ': a part of the path is not a folder';
+  if (code === 'EIO') return ': input/output error';
+  return '';
+}
+
 /** Streams JSON lines in, one JSON line out per input line; a bad line gets {"error"} and the rest go on. */
 async function runBatch(source: string, options: ParseOptions): Promise<void> {
-  if (source !== '-') {
-    try {
-      await access(source);
-    } catch {
-      throw new CliError(`--batch: cannot read "${source}"; give a file of JSON lines, or - for stdin`);
-    }
-  }
-  const input = source === '-' ? process.stdin : createReadStream(source, { encoding: 'utf8' });
-  const lines = createInterface({ input, crlfDelay: Infinity });
+  const input = await openBatch(source);
   let lineNumber = 0;
-  for await (const line of lines) {
-    lineNumber += 1;
-    const out = `${JSON.stringify(batchLine(line, lineNumber, options))}\n`;
-    // Respect back-pressure so a million lines need no more memory than ten.
-    if (!process.stdout.write(out)) await new Promise((resolve) => process.stdout.once('drain', resolve));
+  try {
+    for await (const line of batchLines(input)) {
+      lineNumber += 1;
+      const answer = 'text' in line
+        ? batchLine(line.text, lineNumber, options)
+        : { error: `line ${lineNumber}: the line has ${line.tooLong} characters; a batch line may have at most ${MAX_BATCH_LINE}` };
+      // Respect back-pressure so a million lines need no more memory than ten.
+      if (!process.stdout.write(`${JSON.stringify(answer)}\n`)) await new Promise((resolve) => process.stdout.once('drain', resolve));
+    }
+  } catch (error) {
+    if (error instanceof CliError) throw error;
+    throw new CliError(`--batch: reading stopped after line ${lineNumber}${readReason(error) || `: ${(error as Error).message}`}`, EXIT_PROBLEMS);
   }
 }
 
 function batchLine(line: string, lineNumber: number, options: ParseOptions): Record<string, unknown> {
+  if (jsonTooDeep(line)) return { error: `line ${lineNumber}: arrays and objects nest more than ${MAX_BATCH_DEPTH} deep; expected one flat object such as {"p":"3 MPa","T":"300 K"}` };
   let inputs: unknown;
   try {
     inputs = JSON.parse(line);
