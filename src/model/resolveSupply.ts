@@ -80,7 +80,7 @@ export function resolveBoilers(context: ResolveContext, headers: Map<string, Hea
     if (steam.max === 0) context.error('out-of-range', [...path, 'steam', 'max'], 'expected a maximum steam flow above zero, found "0"');
     const outlet = header && steamAt(context, [...path, 'outlet_temperature'], header.pressure, 'boiler outlet temperature');
     const efficiency = efficiencyTable(context, [...path, 'efficiency']);
-    if (efficiency && Array.isArray(item.efficiency) && steam.max > 0 && steam.min / steam.max < efficiency[0].load - 1e-12) {
+    if (efficiency && efficiency.length > 1 && Array.isArray(item.efficiency) && steam.max > 0 && steam.min / steam.max < efficiency[0].load - 1e-12) {
       // Below the table the efficiency is held at the first point's: the case is extrapolated there.
       const stated = context.raw([...path, 'steam', 'min']) !== undefined;
       context.warn('below-efficiency-table', stated ? [...path, 'steam', 'min'] : [...path, 'efficiency', 0, 'load'],
