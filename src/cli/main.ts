@@ -4,6 +4,7 @@ import yargs from 'yargs';
 import { hideBin } from 'yargs/helpers';
 import { commands } from './commands/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
+import { joinNegativeValues } from './negativeValues.js';
 import { removePendingOnExit } from './pendingFiles.js';
 import { handleStdoutErrors } from './stdout.js';
 
@@ -18,6 +19,8 @@ function joinStdinValues(argv: string[]): string[] {
   return joined;
 }
 
+/** Options that take no value: a negative number after one is not its value. */
+const BOOLEAN_FLAGS = new Set(['json', 'verbose', 'screen', 'help', 'version']);
 /** Options whose empty value means something ("--md" alone: standard output). */
 const EMPTY_ALLOWED = new Set(['md', 'csv']);
 
@@ -44,7 +47,7 @@ function checkOptionValues(argv: Record<string, unknown>): true {
 }
 
 export async function main(argv: string[]): Promise<number> {
-  const parser = yargs(joinStdinValues(argv))
+  const parser = yargs(joinNegativeValues(joinStdinValues(argv), BOOLEAN_FLAGS))
     .scriptName('steamwright')
     .usage('$0 <command> [options]\n\nIndustrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.')
     .strict()

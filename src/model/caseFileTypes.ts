@@ -71,7 +71,7 @@ export interface AddEntry {
 export interface ScenarioEntry {
   id: string;
   name?: string;
-  hours: number;
+  hours: number | string;
   base?: string;
   changes?: ChangesEntry;
 }
@@ -211,7 +211,9 @@ export interface SteamImportEntry {
   price: QuantityText;
   min?: QuantityText;
   max: QuantityText;
-  temperature: QuantityText;
+  /** one of temperature (or "saturated") and enthalpy */
+  temperature?: QuantityText;
+  enthalpy?: QuantityText;
 }
 
 export interface WillansLineEntry {
@@ -220,9 +222,13 @@ export interface WillansLineEntry {
 }
 
 export interface StageEntry {
+  /** unique within its turbine; lets a scenario change this stage alone */
+  id?: string;
   /** a header id */
   to?: string;
   condenser_pressure?: QuantityText;
+  /** condensing stage only: deaerator (default), drain or a flash tank id */
+  condensate_to?: string;
   isentropic_efficiency?: QuantityText;
   exhaust_enthalpy?: QuantityText;
   exhaust_temperature?: QuantityText;
@@ -296,7 +302,7 @@ export interface DeaeratorEntry {
   pressure: QuantityText;
   heating_steam: string;
   vent: QuantityText;
-  feedwater_pumps?: FeedwaterPumpEntry[];
+  feedwater_pumps?: FeedwaterPumpEntry[] | 'none';
 }
 
 export interface MachineEntry {

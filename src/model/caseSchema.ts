@@ -73,7 +73,7 @@ const blowdown: Schema = {
 const defs: Record<string, Schema> = {
   site: object('the site: atmosphere, makeup water, currency, display units', {
     atmospheric_pressure: quantity('pressure', '101.325 kPa', 'atmospheric pressure, the zero of gauge pressures; default 101.325 kPa'),
-    ambient_temperature: quantity('temperature', '15 degC', 'ambient air temperature'),
+    ambient_temperature: quantity('temperature', '15 degC', 'ambient air temperature: where header losses and condenser heat go, for the audit\'s entropy generation'),
     makeup_water: ref('makeupWater'),
     currency: { type: 'string', pattern: '^[A-Z]{3}$', description: 'currency code every price is stated in, e.g. EUR, USD, GBP', examples: ['EUR'] },
     units: choice(['si', 'us'], 'unit system for display: si (barg, degC, t/h) or us (psig, degF, klb/h)'),
@@ -183,14 +183,19 @@ const defs: Record<string, Schema> = {
     min: flow('smallest flow; default 0', '0 t/h'),
     max: flow('largest flow', '15 t/h'),
     temperature: quantityOr('saturated', 'temperature', '250 degC', 'delivered temperature, or saturated'),
-  }, ['id', 'header', 'price', 'max', 'temperature']),
+    enthalpy: quantity('specificEnthalpy', '2750 kJ/kg', 'delivered enthalpy, instead of a temperature; below the saturated vapour enthalpy the steam is wet'),
+  }, ['id', 'header', 'price', 'max'], {
+    allOf: [exactlyOne(['temperature', 'enthalpy'], 'a steam import needs a temperature or an enthalpy, one of the two')],
+  }),
   willansLine: object('Willans line: power = slope x flow - intercept', {
     intercept: quantity('power', '250 kW', 'no-load loss'),
     slope: quantity('specificEnthalpy', '200 kJ/kg', 'power per unit of flow (kW per kg/s = kJ/kg)'),
   }, ['intercept', 'slope']),
   stage: object('one turbine stage: the section from the previous point to this exhaust or extraction', {
+    id: { type: 'string', pattern: ID_PATTERN, description: 'stage id, unique within its turbine; with an id on every stage a scenario changes one stage alone' },
     to: reference('header the steam leaves to'),
-    condenser_pressure: quantity('pressure', '0.1 bar', 'condenser pressure of a condensing stage'),
+    condenser_pressure: quantity('pressure', '0.1 bara', 'condenser pressure of a condensing stage'),
+    condensate_to: reference('where a condensing stage\'s condensate goes: deaerator (the default), drain, or a flash tank id'),
     isentropic_efficiency: percent('isentropic efficiency of the section', '75 %'),
     exhaust_enthalpy: quantity('specificEnthalpy', '2950 kJ/kg', 'exhaust enthalpy'),
     exhaust_temperature: quantity('temperature', '260 degC', 'exhaust temperature'),
@@ -258,7 +263,7 @@ const defs: Record<string, Schema> = {
     pressure: quantity('pressure', '0.3 barg', 'deaerator pressure'),
     heating_steam: reference('header that supplies heating steam'),
     vent: percent('vent as a share of feedwater', '0.5 %'),
-    feedwater_pumps: list('feedwaterPump', 'boiler feedwater pumps'),
+    feedwater_pumps: { description: 'boiler feedwater pumps, or none to leave pump work out; when left out, pump work is counted at 100 % efficiency and bought as electricity', oneOf: [list('feedwaterPump', 'boiler feedwater pumps'), { const: 'none' }] },
   }, ['pressure', 'heating_steam', 'vent']),
   machine: object('a machine a turbine may drive (pump, fan, compressor)', {
     id, name,
@@ -298,7 +303,7 @@ const defs: Record<string, Schema> = {
   scenario: object('a season or production case: an overlay on the plant or on another scenario', {
     id: reference('scenario id, unique among scenarios'),
     name,
-    hours: { type: 'number', exclusiveMinimum: 0, maximum: 8784, description: 'operating hours per year in this scenario' },
+    hours: { type: ['number', 'string'], exclusiveMinimum: 0, maximum: 8784, description: 'operating hours per year in this scenario: a number of hours or a quantity such as "3000 h"', examples: [3000, '3000 h'] },
     base: reference('plant (the default: the case as written) or the id of another scenario'),
     changes: ref('changes'),
   }, ['id', 'hours']),

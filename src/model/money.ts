@@ -41,3 +41,12 @@ export function parseYears(value: unknown): { ok: true; years: number } | { ok: 
   if (!(years > 0 && years <= 100)) return { ok: false, message: `expected a life from above 0 to 100 years, found ${JSON.stringify(value)}` };
   return { ok: true, years };
 }
+
+/** Hours a year: a number (3000) or a quantity in hours ("3000 h", "3000 hours", "3000 h/yr"). */
+export function parseHours(value: unknown): { ok: true; hours: number } | { ok: false; message: string } {
+  const match = typeof value === 'number' ? [String(value), String(value)] : typeof value === 'string' ? /^\s*([0-9][0-9,]*(?:\.[0-9]*)?)\s*(?:h|hr|hrs|hours?)(?:\s*\/\s*(?:yr|year|a))?\s*$/.exec(value) : null;
+  const number = match ? Number(match[1].replace(/,(?=\d{3}(\D|$))/g, '')) : NaN;
+  if (!match || !Number.isFinite(number)) return { ok: false, message: `expected hours a year such as 3000 or "3000 h", found ${JSON.stringify(value)}` };
+  if (!(number > 0 && number <= 8784)) return { ok: false, message: `expected hours a year above 0 and at most 8784 (a leap year), found ${JSON.stringify(value)}` };
+  return { ok: true, hours: number };
+}

@@ -37,6 +37,7 @@ export function linkFlashTanks(context: ResolveContext, plant: PlantParts): void
   for (const boiler of plant.boilers) send(boiler.id, boiler.blowdownTo);
   for (const boiler of plant.heatRecoveryBoilers) send(boiler.id, boiler.blowdownTo);
   for (const tank of plant.flashTanks) send(tank.id, tank.liquidTo);
+  for (const turbine of plant.turbines) for (const stage of turbine.stages) if (stage.exhaust.kind === 'condenser') send(turbine.id, stage.exhaust.condensateTo);
   // Read from the case as written, so a user that failed its own checks still counts.
   const named = new Set<unknown>();
   for (const { item } of context.entries(['users'])) named.add((item.condensate as Record<string, unknown> | undefined)?.to);

@@ -176,13 +176,15 @@ export interface SteamImport {
   flow: Range;
   /** delivered state at the header pressure */
   delivered: FixedState & { saturated: boolean };
+  /** the case gave the delivered enthalpy (T is then the state's, saturation when wet) */
+  byEnthalpy?: boolean;
 }
 
 export type StageExhaust =
   /** exhausts or extracts into a header */
   | { kind: 'header'; id: string; pressure: number }
   /** exhausts to a condenser at this pressure, MPa abs */
-  | { kind: 'condenser'; pressure: number };
+  | { kind: 'condenser'; pressure: number; condensateTo: LiquidDestination };
 
 export type StagePerformance =
   /** isentropic efficiency of the section, fraction */
@@ -309,6 +311,8 @@ export interface Deaerator {
   /** vent as a fraction of feedwater */
   ventFraction: number;
   feedwaterPumps: FeedwaterPump[];
+  /** whether feedwater pump work is counted (false when the case says feedwater_pumps: none) */
+  pumpWork: boolean;
 }
 
 export interface DrivenMachine {

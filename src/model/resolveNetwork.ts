@@ -165,9 +165,14 @@ export function resolveDeaerator(context: ResolveContext, headers: Map<string, H
     if (efficiency === undefined || motor === undefined || typeof item.id !== 'string') pumpsOk = false;
     else pumps.push({ id: item.id, kind: 'feedwaterPump', pumpEfficiency: efficiency, motor, turbine: null });
   }
+  const pumpWork = context.raw([...path, 'feedwater_pumps']) !== 'none';
+  if (context.raw([...path, 'feedwater_pumps']) === undefined) {
+    context.addDefault([...path, 'feedwater_pumps'], 'pump work at 100 % efficiency, bought as electricity',
+      'feedwater pumps not stated: lifting feedwater to each boiler still takes work, v dp; say feedwater_pumps: none to leave it out');
+  }
   if (pressure === undefined || !heating || heating.pressure <= pressure || vent === undefined || !pumpsOk) return null;
   const liquid = saturatedLiquid(pressure);
-  return { id: 'deaerator', kind: 'deaerator', pressure, saturationTemperature: liquid.T, feedwaterH: liquid.h, heatingSteam: heating.id, ventFraction: vent, feedwaterPumps: pumps };
+  return { id: 'deaerator', kind: 'deaerator', pressure, saturationTemperature: liquid.T, feedwaterH: liquid.h, heatingSteam: heating.id, ventFraction: vent, feedwaterPumps: pumps, pumpWork };
 }
 
 export function resolveMachines(context: ResolveContext): DrivenMachine[] {

@@ -1,5 +1,8 @@
 // The resolver proper: the raw case (the file's, or a scenario's merged copy)
 // held by a ResolveContext, turned into the plant in SI with every check.
+import { checkFuelBasis } from './checkFuelBasis.js';
+import { checkSecondLaw } from './checkSecondLaw.js';
+import { checkTopology } from './checkTopology.js';
 import { checkSources, checkVenting, linkDrives, linkFlashTanks } from './plantChecks.js';
 import type { Plant } from './plantTypes.js';
 import { ResolveContext, type IdKind } from './resolveContext.js';
@@ -63,6 +66,9 @@ export function resolvePlant(context: ResolveContext): Plant | null {
   linkDrives(context, plant);
   linkFlashTanks(context, plant);
   checkSources(context, plant);
+  checkSecondLaw(context, plant);
+  checkFuelBasis(context, plant);
+  checkTopology(context, plant);
   checkVenting(context, plant);
   return { ...plant, defaults: context.defaults };
 }

@@ -1,6 +1,7 @@
 // Steam sources: fired boilers, waste-heat boilers and purchased steam.
 import type { CasePath } from './issue.js';
-import type { EfficiencyPoint, FiredBoiler, Header, HeatRecoveryBoiler, LiquidDestination, SteamImport } from './plantTypes.js';
+import type { EfficiencyPoint, FiredBoiler, FixedState, Header, HeatRecoveryBoiler, LiquidDestination, SteamImport } from './plantTypes.js';
+import { saturatedLiquid, statePH } from '../properties/index.js';
 import type { ResolveContext } from './resolveContext.js';
 import { steamAt } from './resolveHeaders.js';
 
@@ -79,6 +80,12 @@ export function resolveBoilers(context: ResolveContext, headers: Map<string, Hea
     if (steam.max === 0) context.error('out-of-range', [...path, 'steam', 'max'], 'expected a maximum steam flow above zero, found "0"');
     const outlet = header && steamAt(context, [...path, 'outlet_temperature'], header.pressure, 'boiler outlet temperature');
     const efficiency = efficiencyTable(context, [...path, 'efficiency']);
+    if (efficiency && efficiency.length > 1 && Array.isArray(item.efficiency) && steam.max > 0 && steam.min / steam.max < efficiency[0].load - 1e-12) {
+      // Below the table the efficiency is held at the first point's: the case is extrapolated there.
+      const stated = context.raw([...path, 'steam', 'min']) !== undefined;
+      context.warn('below-efficiency-table', stated ? [...path, 'steam', 'min'] : [...path, 'efficiency', 0, 'load'],
+        `boiler ${String(item.id)} may run down to ${(100 * steam.min / steam.max).toFixed(0)} % load${stated ? '' : ' (no minimum steam stated)'}, below its efficiency table's first point at ${(100 * efficiency[0].load).toFixed(0)} %; there the efficiency is taken as ${(100 * efficiency[0].efficiency).toFixed(1)} %, the first point's. Add a point at the minimum load`);
+    }
     const blowdown = blowdownFraction(context, [...path, 'blowdown']);
     if (item.blowdown_to === undefined) context.addDefault([...path, 'blowdown_to'], 'drain', 'blowdown destination not stated: blowdown goes to drain');
     const blowdownTo = liquidDestination(context, [...path, 'blowdown_to'], ['drain'], { kind: 'drain' });
@@ -125,8 +132,22 @@ export function resolveSteamImports(context: ResolveContext, headers: Map<string
     const header = headerOf(context, [...path, 'header'], headers);
     const price = context.amount([...path, 'price'], 'massPrice');
     const flow = context.range(path, 'massFlow');
-    const delivered = header && steamAt(context, [...path, 'temperature'], header.pressure, 'delivered steam temperature');
+    const byEnthalpy = context.raw([...path, 'enthalpy']) !== undefined;
+    const delivered = header && (byEnthalpy ? deliveredByEnthalpy(context, [...path, 'enthalpy'], header.pressure) : steamAt(context, [...path, 'temperature'], header.pressure, 'delivered steam temperature'));
     if (!header || price === undefined || !delivered || typeof item.id !== 'string') return [];
-    return [{ id: item.id, kind: 'steamImport' as const, header: header.id, price, flow, delivered }];
+    return [{ id: item.id, kind: 'steamImport' as const, header: header.id, price, flow, delivered, ...(byEnthalpy ? { byEnthalpy } : {}) }];
   });
+}
+
+/** Steam delivered at a stated enthalpy: superheated, or wet below the saturated vapour enthalpy; never liquid. */
+function deliveredByEnthalpy(context: ResolveContext, path: CasePath, pressure: number): (FixedState & { saturated: boolean }) | undefined {
+  const h = context.quantity(path, 'specificEnthalpy');
+  if (h === undefined) return undefined;
+  const state = context.property(path, 'delivered steam', () => statePH(pressure, h));
+  if (!state) return undefined;
+  if (state.x === null && state.superheat === null) {
+    context.error('liquid-import', path, `delivered enthalpy ${context.text(path)} is liquid water at ${context.show(pressure, 'pressure')} (saturated liquid is ${context.show(saturatedLiquid(pressure).h, 'specificEnthalpy')}); a steam import delivers steam`);
+    return undefined;
+  }
+  return { T: state.T, h, saturated: false };
 }

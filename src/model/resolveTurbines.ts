@@ -4,6 +4,7 @@ import type { CasePath } from './issue.js';
 import type { Header, StageExhaust, StagePerformance, Turbine, TurbineDrive, TurbineStage } from './plantTypes.js';
 import type { ResolveContext } from './resolveContext.js';
 import { steamPressure } from './resolveHeaders.js';
+import { liquidDestination } from './resolveSupply.js';
 
 function exhaustOf(context: ResolveContext, path: CasePath, headers: Map<string, Header>): StageExhaust | undefined {
   if (context.raw([...path, 'to']) !== undefined) {
@@ -12,7 +13,11 @@ function exhaustOf(context: ResolveContext, path: CasePath, headers: Map<string,
     return header && { kind: 'header', id: header.id, pressure: header.pressure };
   }
   const pressure = steamPressure(context, [...path, 'condenser_pressure'], { belowAtmosphereAllowed: true });
-  return pressure === undefined ? undefined : { kind: 'condenser', pressure };
+  if (context.raw([...path, 'condensate_to']) === undefined) {
+    context.addDefault([...path, 'condensate_to'], 'deaerator', 'condensing stage condensate destination not stated: the condenser returns it to the deaerator');
+  }
+  const condensateTo = liquidDestination(context, [...path, 'condensate_to'], ['deaerator', 'drain'], { kind: 'deaerator' });
+  return pressure === undefined || !condensateTo ? undefined : { kind: 'condenser', pressure, condensateTo };
 }
 
 function performanceOf(context: ResolveContext, path: CasePath, exhaust: StageExhaust | undefined): StagePerformance | undefined {
@@ -74,12 +79,22 @@ export function resolveTurbines(context: ResolveContext, headers: Map<string, He
     let previousPressure = inlet?.pressure;
     let previousLabel = inlet ? `the inlet header ${inlet.id}` : '';
     const stageEntries = context.entries([...path, 'stages']);
+    const stageIds = new Set<string>();
+    for (const { item: stage, path: stagePath } of stageEntries) {
+      if (typeof stage.id !== 'string') continue;
+      if (stageIds.has(stage.id)) context.error('duplicate-id', [...stagePath, 'id'], `stage id "${stage.id}" is used twice in turbine ${String(item.id)}; stage ids must be unique within their turbine`);
+      stageIds.add(stage.id);
+    }
     stageEntries.forEach(({ path: stagePath }, index) => {
       const exhaust = exhaustOf(context, stagePath, headers);
       const performance = performanceOf(context, stagePath, exhaust);
       const outflow = context.range([...stagePath, 'outflow'], 'massFlow');
       const sectionFlow = context.range([...stagePath, 'section_flow'], 'massFlow');
       let ok = exhaust !== undefined && performance !== undefined;
+      if (context.raw([...stagePath, 'condensate_to']) !== undefined && context.raw([...stagePath, 'to']) !== undefined) {
+        context.error('condensate-without-condenser', [...stagePath, 'condensate_to'], 'condensate_to belongs to a condensing stage (condenser_pressure); this stage exhausts to a header');
+        ok = false;
+      }
       if (exhaust && exhaust.kind === 'condenser' && index < stageEntries.length - 1) {
         context.error('condenser-not-last', [...stagePath, 'condenser_pressure'], 'a condensing stage must be the last stage of its turbine');
         ok = false;

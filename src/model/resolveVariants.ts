@@ -2,7 +2,7 @@
 // then each overlay merged onto the raw case and resolved through the same
 // resolver as the base, so every check applies to every variant.
 import type { CasePath, Issue } from './issue.js';
-import { parseMoney, parseYears } from './money.js';
+import { parseHours, parseMoney, parseYears } from './money.js';
 import { MAX_MONEY } from './physicalRanges.js';
 import { applyOverlay, OverlayOrigins, variantBase } from './overlay.js';
 import type { Plant } from './plantTypes.js';
@@ -67,14 +67,19 @@ function readScenarios(context: ResolveContext): { definition: ScenarioDefinitio
   const seen = new Set<string>();
   const read: { definition: ScenarioDefinition; path: CasePath; changes: unknown }[] = [];
   for (const { item, path } of context.entries(['scenarios'])) {
-    if (typeof item.id !== 'string' || typeof item.hours !== 'number') continue; // the schema reports it
+    if (typeof item.id !== 'string' || item.hours === undefined) continue; // the schema reports it
+    const hours = parseHours(item.hours);
+    if (!hours.ok) {
+      context.error('bad-hours', [...path, 'hours'], hours.message);
+      continue;
+    }
     if (seen.has(item.id)) {
       context.error('duplicate-id', [...path, 'id'], `scenario id "${item.id}" is already used; scenario ids must be unique`);
       continue;
     }
     seen.add(item.id);
     const base = typeof item.base === 'string' ? item.base : 'plant';
-    read.push({ definition: { id: item.id, name: readName(item, item.id), hours: item.hours, base }, path, changes: item.changes });
+    read.push({ definition: { id: item.id, name: readName(item, item.id), hours: hours.hours, base }, path, changes: item.changes });
   }
   const total = read.reduce((sum, entry) => sum + entry.definition.hours, 0);
   if (total > MOST_HOURS) {

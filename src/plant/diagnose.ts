@@ -3,6 +3,7 @@
 // the limits whose relaxation would shrink the shortfall.
 import type { SolveOptions, SolverBackend } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
+import { formatQuantity } from '../units/index.js';
 import { buildPass, ENERGY_ROW_SCALE, SLACK_PENALTY, type Pass } from './buildPass.js';
 import type { PassPoint } from './context.js';
 import { integerValues } from './converge.js';
@@ -57,7 +58,12 @@ export async function diagnose(
     const unit = item.quantity === 'mass' ? 'kg/s' : 'kW';
     const size = Math.abs(item.amount);
     const figure = size >= 100 ? Math.round(size).toLocaleString('en-US') : size.toPrecision(3);
-    const shown = item.quantity === 'mass' ? `${size.toPrecision(3)} ${unit} (${(size * 3.6).toPrecision(3)} t/h)` : `${figure} ${unit}`;
+    // In a US-units case the diagnosis speaks klb/h and MMBtu/h, as the rest of the output.
+    const us = plant.site.unitSystem === 'us';
+    const shown =
+      item.quantity === 'mass'
+        ? us ? formatQuantity(size, 'massFlow', 'us') : `${size.toPrecision(3)} ${unit} (${(size * 3.6).toPrecision(3)} t/h)`
+        : item.quantity === 'energy' && us ? formatQuantity(size, 'power', 'us', { unit: 'MMBtu/h' }) : `${figure} ${unit}`;
     const what = item.quantity === 'mass' ? 'steam or water' : item.quantity === 'energy' ? 'heat' : 'electricity';
     if (item.amount > 0) return `${item.node} is short of ${shown} of ${what}`;
     return item.quantity === 'mass' ? `${item.node} has ${shown} it cannot send anywhere` : `${item.node} has ${shown} of surplus ${what} it cannot shed`;

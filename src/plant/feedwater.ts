@@ -14,6 +14,7 @@ export interface FeedwaterPoint {
 export function feedwaterAt(plant: Plant, pressure: number): FeedwaterPoint {
   const deaerator = plant.deaerator;
   const liquid = saturatedLiquid(deaerator.pressure);
+  if (!deaerator.pumpWork) return { h: liquid.h, pumpWork: 0 };
   const efficiency = deaerator.feedwaterPumps[0]?.pumpEfficiency ?? 1;
   // v [m3/kg] x dp [MPa] = 1000 kJ/kg per (m3 MPa / kg)
   const pumpWork = Math.max(0, (liquid.v * (pressure - deaerator.pressure) * 1000) / efficiency);

@@ -26,15 +26,36 @@ export interface FuelCurve {
 }
 
 /**
+ * Largest relative difference between the straight pieces and the curve the
+ * builder accepts. Fuel = steam x heat / efficiency(load) bends between table
+ * points, so each span is cut into pieces, each as long as its chord stays
+ * within this of the curve; just inside the 0.1 % the audit allows
+ * (verify/tolerances.ts). Fewer pieces mean fewer binaries for a curve that
+ * is not convex.
+ */
+export const FUEL_CURVE_ACCURACY = 9e-4;
+
+/** Most pieces one span of the table is cut into. */
+const MOST_PIECES_PER_SPAN = 64;
+
+/**
  * Fuel against steam through the table's loads between min and max steam:
- * fuel = steam x heatPerKg / efficiency(load).
+ * fuel = steam x heatPerKg / efficiency(load), with extra breakpoints so that
+ * the straight pieces stay within FUEL_CURVE_ACCURACY of the curve.
  */
 export function fuelCurve(table: readonly EfficiencyPoint[], minSteam: number, maxSteam: number, heatPerKg: number): FuelCurve {
   const loads = new Set<number>([minSteam / maxSteam, 1]);
   for (const point of table) if (point.load > minSteam / maxSteam && point.load < 1) loads.add(point.load);
-  const sorted = [...loads].sort((a, b) => a - b);
+  const spans = [...loads].sort((a, b) => a - b);
+  const fuelAt = (load: number): number => (load === 0 ? 0 : (load * maxSteam * heatPerKg) / efficiencyAt(table, load));
+  const sorted: number[] = [spans[0]];
+  for (let index = 1; index < spans.length; index += 1) {
+    const from = spans[index - 1];
+    const to = spans[index];
+    sorted.push(...breakpointsFor(from, to, fuelAt));
+  }
   const steam = sorted.map((load) => load * maxSteam);
-  const fuel = sorted.map((load, index) => (load === 0 ? 0 : (steam[index] * heatPerKg) / efficiencyAt(table, load)));
+  const fuel = sorted.map(fuelAt);
   let convex = true;
   for (let index = 2; index < steam.length; index += 1) {
     const before = (fuel[index - 1] - fuel[index - 2]) / (steam[index - 1] - steam[index - 2]);
@@ -42,4 +63,48 @@ export function fuelCurve(table: readonly EfficiencyPoint[], minSteam: number, m
     if (after < before - 1e-9 * Math.abs(before)) convex = false;
   }
   return { steam, fuel, convex };
+}
+
+/**
+ * Breakpoints inside [from, to], greedily: each piece runs as far as its chord
+ * stays within FUEL_CURVE_ACCURACY (found by bisection), which gives the
+ * fewest pieces for a curve that bends one way within the span.
+ */
+function breakpointsFor(from: number, to: number, fuelAt: (load: number) => number): number[] {
+  const points: number[] = [];
+  let start = from;
+  while (points.length < MOST_PIECES_PER_SPAN) {
+    if (chordError(start, to, 1, fuelAt) <= FUEL_CURVE_ACCURACY) break;
+    let good = start;
+    let bad = to;
+    for (let step = 0; step < 40 && bad - good > 1e-9 * (to - from); step += 1) {
+      const middle = (good + bad) / 2;
+      if (chordError(start, middle, 1, fuelAt) <= FUEL_CURVE_ACCURACY) good = middle;
+      else bad = middle;
+    }
+    if (good <= start) break;
+    points.push(good);
+    start = good;
+  }
+  return [...points, to];
+}
+
+/** Largest relative chord error over equal pieces, sampled finely inside each piece. */
+export function chordError(from: number, to: number, pieces: number, fuelAt: (load: number) => number): number {
+  const SAMPLES = 32;
+  let worst = 0;
+  for (let k = 0; k < pieces; k += 1) {
+    const a = from + ((to - from) * k) / pieces;
+    const b = from + ((to - from) * (k + 1)) / pieces;
+    const fa = fuelAt(a);
+    const fb = fuelAt(b);
+    for (let j = 1; j < SAMPLES; j += 1) {
+      const load = a + ((b - a) * j) / SAMPLES;
+      const curve = fuelAt(load);
+      if (curve <= 0) continue;
+      const chord = fa + ((fb - fa) * j) / SAMPLES;
+      worst = Math.max(worst, Math.abs(chord - curve) / curve);
+    }
+  }
+  return worst;
 }

@@ -2,10 +2,11 @@
 // the audit, in SI numbers. The report layer formats it; `--json` prints it.
 import { statePH } from '../properties/index.js';
 import type { Audit } from './audit.js';
+import type { IndependentAudit } from './verify/index.js';
 import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
 import type { UnitReport } from './contribution.js';
 import { ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
-import { ATMOSPHERE, solvedEnthalpy } from './network.js';
+import { ATMOSPHERE, DRAIN, solvedEnthalpy } from './network.js';
 import type { Objective } from '../model/index.js';
 import type { MarginalValue } from './marginalValues.js';
 import type { CommitmentTried, PassRecord, PlantOutcome } from './solvePlant.js';
@@ -29,6 +30,10 @@ export interface HeaderResult {
   T_K: number;
   h_kJ_kg: number;
   state: 'controlled' | 'floating';
+  /** vapour quality x (kg vapour per kg) when the header is wet or just saturated; null when superheated */
+  quality: number | null;
+  /** T - Tsat, K, when superheated (0 at dry saturation); null when wet */
+  superheat_K: number | null;
   /**
    * What one more tonne drawn at this header (and not returned) costs, in the
    * objective's units per t (see `marginal_value_unit`): the converged plant's
@@ -74,7 +79,7 @@ export interface Totals {
 export interface Kpis {
   /** heat absorbed by fired boilers (and duct firing) over their fuel */
   boiler_fuel_to_steam_efficiency: number | null;
-  /** condensate returned over process steam used */
+  /** condensate returned (to the deaerator or a flash tank, not to drain) over process steam used */
   condensate_return_fraction: number | null;
   /** of the steam stepped down in pressure, the share through letdown valves rather than turbines */
   let_down_fraction: number | null;
@@ -108,6 +113,8 @@ export interface PlantResult {
     worst: string;
     balances: Audit['balances'];
     site_energy_balance: Audit['site'];
+    /** every stream and unit worked out again from the case with IF97: per unit mass, energy, entropy generation */
+    independent: IndependentAudit;
   };
   passes: PassRecord[];
   marginal_power_value_per_kWh: number | null;
@@ -144,6 +151,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
 
   const headers: HeaderResult[] = plant.headers.map((header) => {
     const h = outcome.headerEnthalpy.get(header.id) ?? context.h(header.id);
+    const steam = statePH(header.pressure, h);
     const inflows = streams.filter((stream) => stream.to === header.id);
     const outflows = streams.filter((stream) => stream.from === header.id);
     const value = outcome.marginalValues.find((entry) => entry.header === header.id);
@@ -152,7 +160,9 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       id: header.id,
       name: header.name,
       pressure_MPa: header.pressure,
-      T_K: statePH(header.pressure, h).T,
+      T_K: steam.T,
+      quality: steam.x ?? (steam.superheat === 0 ? 1 : null),
+      superheat_K: steam.x !== null ? (steam.x >= 1 ? 0 : null) : steam.superheat,
       h_kJ_kg: h,
       state: header.state.kind,
       marginal_value_per_t: marginal.headline,
@@ -179,6 +189,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
   const vented = streams.filter((stream) => stream.to === ATMOSPHERE).reduce((total, stream) => total + stream.mass_kg_s, 0);
   const steamRaised = sum('boiler', 'steam_kg_s') + sum('heatRecoveryBoiler', 'steam_kg_s') + sum('steamImport', 'steam_kg_s');
   const processSteam = sum('user', 'steam_kg_s');
+  const userIds = new Set(plant.users.map((user) => user.id));
   const processHeat = sum('user', 'heat_kW');
   const generated = num(grid, 'generated_kW');
   const loads = num(grid, 'modelled_loads_kW');
@@ -209,7 +220,11 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
   const ratio = (a: number, b: number): number | null => (b > 1e-12 ? a / b : null);
   const kpis: Kpis = {
     boiler_fuel_to_steam_efficiency: boilerEfficiency,
-    condensate_return_fraction: ratio(sum('user', 'condensate_returned_kg_s'), processSteam),
+    // Condensate a user collects but sends to drain is lost like any other: only what reaches the deaerator or a flash tank counts.
+    condensate_return_fraction: ratio(
+      streams.filter((stream) => stream.kind === 'condensate' && userIds.has(stream.from) && stream.to !== DRAIN).reduce((total, stream) => total + stream.mass_kg_s, 0),
+      processSteam,
+    ),
     let_down_fraction: ratio(totals.let_down_kg_s, totals.let_down_kg_s + throttle),
     vented_fraction: ratio(vented, steamRaised),
     power_per_throttle_t_kWh: ratio(turbinePower, throttle * T_PER_H_PER_KG_S),
@@ -239,6 +254,7 @@ export function plantResult(outcome: Extract<PlantOutcome, { ok: true }>): Plant
       worst: audit.worstDescription,
       balances: audit.balances,
       site_energy_balance: audit.site,
+      independent: outcome.independentAudit,
     },
     passes: outcome.passes,
     marginal_power_value_per_kWh: solution.shadowPrice('site.power'),

@@ -13,6 +13,7 @@ import { diagnose, type Diagnosis } from './diagnose.js';
 import { marginalValues, type MarginalValue } from './marginalValues.js';
 import { passSolution, type PassSolution } from './passSolution.js';
 import { PlantPhysicsError } from './units/user.js';
+import { auditSolve, type IndependentAudit } from './verify/index.js';
 
 export interface SolvePlantOptions {
   objective?: Objective;
@@ -58,6 +59,8 @@ export type PlantOutcome =
       contributions: UnitContribution[];
       passes: PassRecord[];
       audit: Audit;
+      /** every stream and unit worked out again from the case with IF97 (src/plant/verify) */
+      independentAudit: IndependentAudit;
       backend: string;
       marginalValues: MarginalValue[];
       commitments: CommitmentTried[];
@@ -103,8 +106,12 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
     const pass = useKept ? kept : best.pass;
     const result = useKept ? keptResult : best.result;
     const solution = useKept ? passSolution(keptResult) : best.solution;
-    const audit = useKept ? auditPass(pass, solution, best.contributions.map((unit) => unit.report(solution))) : best.audit;
+    const reports = best.contributions.map((unit) => unit.report(solution));
+    const audit = useKept ? auditPass(pass, solution, reports) : best.audit;
     if (audit.worstRelative > AUDIT_TOLERANCE) return { ok: false, plant, reason: 'audit', message: `the balance does not close: ${audit.worstDescription}`, passes: best.passes };
+    // The independent audit: the solve's flows and header states through the case's own physics.
+    const independentAudit = auditSolve(plant, solvedHeaderEnthalpy(pass, solution), reports);
+    if (!independentAudit.ok) return { ok: false, plant, reason: 'audit', message: independentAudit.summary, passes: best.passes };
     if (!probe) values.push(...dualValues(pass, solution));
     const commitment = new Map(best.integers);
     const start: PassPoint = { headerEnthalpy: solvedHeaderEnthalpy(pass, solution), previous: solutionValues(pass, result), trust: new Map(pass.context.trust) };
@@ -119,6 +126,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       contributions: best.contributions,
       passes: best.passes,
       audit,
+      independentAudit,
       backend: result.backend,
       marginalValues: values,
       commitments: tried,

@@ -15,6 +15,8 @@ export function reportAssumptions(plant: Plant): Assumptions {
       'Operating point chosen by linear or mixed-integer optimisation (HiGHS) with every stream state fixed per pass, repeated until enthalpies change by less than the case tolerance.',
       'Marginal steam value: the shadow price of each header mass balance, the change in hourly cost when one more unit of steam is drawn there.',
       `Gauge pressures are measured from the site's atmospheric pressure, ${(plant.site.atmosphericPressure * 1000).toFixed(3)} kPa.`,
+      `Fuel prices, CO2 factors and boiler efficiencies on the fuels' stated heating-value basis (${[...new Set(plant.fuels.map((fuel) => fuel.basis))].join(' and ') || 'none stated'}); steamwright does not convert between HHV and LHV.`,
+      'Independent audit: every stream state and unit relation recomputed from the case with IAPWS-IF97; entropy generation per unit with header losses and condenser heat rejected at the site ambient temperature, process heat taken at the condensate temperature, and fuel or waste heat from a source at unknown (taken as very high) temperature.',
       `Figures in ${plant.site.unitSystem === 'si' ? 'SI units (barg, degC, t/h, kW)' : 'US units (psig, degF, klb/h, kW)'}; money in ${plant.site.currency}.`,
     ],
     defaults: plant.defaults.map((applied) => [applied.path, applied.value, applied.reason]),

@@ -6,6 +6,7 @@
 import { csvCell, markdownCell } from './safeCells.js';
 import type { ScenarioRun } from '../scenarios/index.js';
 import { perMassValue, steamValueNumber, type DisplayFormat } from './displayFormat.js';
+import { steamQualityWarnings } from './steamQuality.js';
 import { table } from './table.js';
 
 interface FigureRow {
@@ -33,7 +34,7 @@ function rowsOf(runs: ScenarioRun[], format: DisplayFormat): FigureRow[] {
     pick(`let down, ${flowUnit}`, 2, (run) => flowValue(run.totals.let_down_kg_s)),
     pick(`vented, ${flowUnit}`, 3, (run) => flowValue(run.totals.vented_kg_s)),
     pick(`makeup, ${flowUnit}`, 2, (run) => flowValue(run.totals.makeup_kg_s)),
-    pick('CO2, t/h', 3, (run) => run.totals.co2_kg_per_h / 1000),
+    pick(`CO2, ${format.co2RateUnit}`, 3, (run) => format.co2RateValue(run.totals.co2_kg_per_h)),
   ];
   const unitIds = [...new Set(solved.flatMap((run) => run.units.map((unit) => `${unit.kind}:${unit.id}`)))];
   for (const key of unitIds) {
@@ -55,6 +56,15 @@ function rowsOf(runs: ScenarioRun[], format: DisplayFormat): FigureRow[] {
       return value === null ? null : steamValueNumber(value, valueUnit, format.system);
     }));
     rows.push(pick(`${id} vent, ${flowUnit}`, 3, (run) => flowValue(run.headers.find((header) => header.id === id)?.vent_kg_s ?? 0)));
+    const steamOf = (run: Extract<ScenarioRun, { ok: true }>) => run.headers.find((header) => header.id === id);
+    rows.push(pick(`${id} superheat, ${format.system === 'si' ? 'K' : 'degF'}`, 1, (run) => {
+      const superheat = steamOf(run)?.superheat_K;
+      return superheat === null || superheat === undefined ? null : format.system === 'si' ? superheat : superheat * 1.8;
+    }));
+    rows.push(pick(`${id} moisture, %`, 1, (run) => {
+      const quality = steamOf(run)?.quality;
+      return quality === null || quality === undefined ? 0 : (1 - quality) * 100;
+    }));
   }
   const percent = (value: number | null): number | null => (value === null ? null : value * 100);
   rows.push(
@@ -99,6 +109,12 @@ function grid(runs: ScenarioRun[], format: DisplayFormat): { headings: string[];
   return { headings, rows };
 }
 
+/** Steam-quality warnings of every solved scenario, one line each. */
+function qualityWarnings(runs: ScenarioRun[], format: DisplayFormat): string {
+  const lines = runs.flatMap((run) => (run.ok ? steamQualityWarnings(run.headers, format).map((warning) => `  ${run.id}: ${warning}`) : []));
+  return lines.length === 0 ? '' : `\nSteam quality warnings\n${lines.join('\n')}\n`;
+}
+
 function failures(runs: ScenarioRun[]): string {
   const failed = runs.flatMap((run) => (run.ok ? [] : [`  ${run.id}: NOT SOLVED: ${run.message}`]));
   return failed.length === 0 ? '' : `\nScenarios that could not be solved\n${failed.join('\n')}\n`;
@@ -117,7 +133,7 @@ export function compareText(title: string, runs: ScenarioRun[], format: DisplayF
     const total = annual.cost_per_year === null ? 'not available (a scenario failed)' : `${cell(annual.cost_per_year, 0)} ${format.currency}`;
     footer = `Annual cost over ${cell(annual.hours, 0)} h: ${total}`;
   }
-  return `${title}\n\n${table(headings, rows)}\n\n${footer}\n${failures(runs)}`;
+  return `${title}\n\n${table(headings, rows)}\n\n${footer}\n${qualityWarnings(runs, format)}${failures(runs)}`;
 }
 
 const csvField = csvCell;

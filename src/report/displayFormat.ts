@@ -43,6 +43,18 @@ export interface DisplayFormat {
   fuelPerPower(kJ_kWh: number | null): string;
   fuelPerPowerUnit: string;
   fuelPerPowerValue(kJ_kWh: number): number;
+  /** a heat rate (process heat, heat loss): kW (SI) or MMBtu/h (US) */
+  heatRate(kW: number): string;
+  /** CO2 emitted: t/h (SI) or klb/h (US) */
+  co2Rate(kg_h: number): string;
+  co2RateUnit: string;
+  co2RateValue(kg_h: number): number;
+  /** a mass residual in exponent form, t/h or klb/h */
+  massResidual(kg_s: number): string;
+  /** entropy generation rate: kW/K (SI) or Btu/(h R) (US) */
+  entropyRate(kW_K: number): string;
+  /** a heat rate or an energy residual: kW (SI) or Btu/h (US), to `digits` significant figures in exponent form */
+  heatResidual(kW: number): string;
 }
 
 /** Values within solver round-off of zero show as zero. */
@@ -87,6 +99,14 @@ export function displayFormat(system: UnitSystem, currency: string, atmosphericP
     },
     fuelPerPowerUnit: system === 'si' ? 'MJ/kWh' : 'Btu/kWh',
     fuelPerPowerValue: (kJ_kWh) => (system === 'si' ? kJ_kWh / 1000 : kJ_kWh / KJ_PER_BTU),
+    heatRate: (kW) => (system === 'si' ? formatQuantity(clean(kW), 'power', system) : `${((clean(kW) * BTU_PER_H_PER_KW) / 1e6).toFixed(3)} MMBtu/h`),
+    co2Rate: (kg_h) => (system === 'si' ? `${(clean(kg_h) / 1000).toFixed(2)} t/h` : `${(clean(kg_h) / KG_PER_LB / 1000).toFixed(2)} klb/h`),
+    co2RateUnit: system === 'si' ? 't/h' : 'klb/h',
+    co2RateValue: (kg_h) => (system === 'si' ? kg_h / 1000 : kg_h / KG_PER_LB / 1000),
+    massResidual: (kg_s) => `${fromSI(kg_s, 'massFlow', displayUnit('massFlow', system)).toExponential(2)} ${displayUnit('massFlow', system)}`,
+    // 1 kW/K = 3412.1416 Btu/h per 1.8 R
+    entropyRate: (kW_K) => (system === 'si' ? `${kW_K.toPrecision(4)} kW/K` : `${((kW_K * BTU_PER_H_PER_KW) / 1.8).toPrecision(4)} Btu/(h R)`),
+    heatResidual: (kW) => (system === 'si' ? `${kW.toExponential(2)} kW` : `${(kW * BTU_PER_H_PER_KW).toExponential(2)} Btu/h`),
   };
 }
 

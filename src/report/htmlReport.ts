@@ -53,7 +53,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     `<div class="diagram-wrap fit">${balanceDiagram(result, format)}</div></section>`,
   );
   body.push('<section id="tables"><h2>Tables</h2>');
-  for (const table of tables.filter((candidate) => candidate.id !== 'audit')) body.push(tableHtml(table));
+  for (const table of tables.filter((candidate) => candidate.id !== 'audit' && candidate.id !== 'independent-audit')) body.push(tableHtml(table));
   body.push('</section>');
   body.push('<section id="charts"><h2>Charts</h2><div class="charts">', costChart(result, format), valueChart(result, format), '</div></section>');
   if (scenarios.length > 0) {
@@ -68,8 +68,10 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   const audit = result.audit;
   body.push(
     '<section id="audit"><h2>Audit</h2>',
-    `<p>Every balance recomputed from the final flows and states. Largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, largest energy residual ${audit.max_energy_residual_kW.toExponential(2)} kW; worst: ${e(audit.worst)}.</p>`,
+    `<p>Every balance recomputed from the final flows and states. Largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, largest energy residual ${format.heatResidual(audit.max_energy_residual_kW)}; worst: ${e(audit.worst)}.</p>`,
     tableHtml(tables.find((table) => table.id === 'audit') as ReportTable),
+    `<p>Independent audit: every stream state and unit relation worked out again from the case with IAPWS-IF97, and the solve's flows put through them; entropy generation must not be negative. Result: ${e(audit.independent.summary)}.</p>`,
+    tableHtml(tables.find((table) => table.id === 'independent-audit') as ReportTable),
     '</section>',
   );
   const assumptions = reportAssumptions(plant);

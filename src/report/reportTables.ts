@@ -4,6 +4,7 @@ import type { PlantResult } from '../plant/index.js';
 import type { UnitReport } from '../plant/index.js';
 import { displayUnit, fromSI } from '../units/index.js';
 import type { DisplayFormat } from './displayFormat.js';
+import { steamQualityCell, steamQualityWarnings } from './steamQuality.js';
 
 export interface ReportTable {
   /** stable id, used for anchors and CSV section names */
@@ -35,17 +36,18 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
   tables.push({
     id: 'headers',
     title: 'Headers',
-    headings: ['header', 'name', 'pressure', 'temperature', 'enthalpy', 'in', 'out', 'vent', 'heat loss', 'marginal steam value'],
+    headings: ['header', 'name', 'pressure', 'temperature', 'steam', 'enthalpy', 'in', 'out', 'vent', 'heat loss', 'marginal steam value'],
     rows: headers.map((header) => [
       header.id,
       header.name,
       format.pressure(header.pressure_MPa),
       format.temperature(header.T_K),
+      steamQualityCell(header, format),
       format.enthalpy(header.h_kJ_kg),
       flow(header.inflow_kg_s),
       flow(header.outflow_kg_s),
       header.vent_kg_s > TINY ? flow(header.vent_kg_s) : '-',
-      header.heat_loss_kW !== undefined ? power(header.heat_loss_kW) : '-',
+      header.heat_loss_kW !== undefined ? format.heatRate(header.heat_loss_kW) : '-',
       format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit),
     ]),
   });
@@ -64,6 +66,11 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       header.marginal.differs ? 'yes: the two sides differ' : '-',
     ]),
   });
+
+  const warnings = steamQualityWarnings(headers, format);
+  if (warnings.length > 0) {
+    tables.push({ id: 'steam-quality', title: 'Steam quality warnings', headings: ['warning'], rows: warnings.map((warning) => [warning]), alarmRows: warnings.map((_, index) => index) });
+  }
 
   tables.push({
     id: 'sources',
@@ -142,7 +149,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       unit.id,
       inletOf(unit.id),
       flow(number(unit, 'steam_kg_s')),
-      power(number(unit, 'heat_kW')),
+      format.heatRate(number(unit, 'heat_kW')),
       flow(number(unit, 'condensate_returned_kg_s')),
       flow(number(unit, 'condensate_lost_kg_s')),
     ]),
@@ -176,7 +183,7 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       ['steam let down', flow(totals.let_down_kg_s)],
       ['steam vented', flow(totals.vented_kg_s)],
       ['makeup water', flow(totals.makeup_kg_s)],
-      ['CO2', `${(totals.co2_kg_per_h / 1000).toFixed(2)} t/h`],
+      ['CO2', format.co2Rate(totals.co2_kg_per_h)],
     ],
   });
 
@@ -203,11 +210,36 @@ export function reportTables(result: PlantResult, format: DisplayFormat): Report
       balance.id,
       balance.kind,
       `${fromSI(balance.mass, 'massFlow', massUnit).toExponential(2)} ${massUnit}`,
-      balance.energy === null ? '-' : `${balance.energy.toExponential(2)} kW`,
+      balance.energy === null ? '-' : format.heatResidual(balance.energy),
       `${balance.massRelative.toExponential(1)} / ${balance.energyRelative === null ? '-' : balance.energyRelative.toExponential(1)}`,
     ]),
   });
+  tables.push(independentAuditTable(result, format));
   return tables;
+}
+
+/** The independent audit per unit and node: residuals, entropy generation, the unit's own relations. */
+export function independentAuditTable(result: PlantResult, format: DisplayFormat): ReportTable {
+  const audit = result.audit.independent;
+  const rows = audit.units.map((unit) => {
+    const worst = unit.checks.reduce<(typeof unit.checks)[number] | null>((found, check) => (found === null || check.relative > found.relative ? check : found), null);
+    return [
+      unit.id,
+      kindWords(unit.kind),
+      unit.mass_relative.toExponential(1),
+      unit.energy_relative === null ? '-' : unit.energy_relative.toExponential(1),
+      unit.entropy_generation_kW_K === null ? '-' : format.entropyRate(unit.entropy_generation_kW_K),
+      worst ? `${worst.what} ${worst.relative.toExponential(1)}` : '-',
+      unit.problems.length === 0 ? 'passes' : `FAILS: ${unit.problems.join('; ')}`,
+    ];
+  });
+  return {
+    id: 'independent-audit',
+    title: 'Independent audit (states and relations recomputed with IF97)',
+    headings: ['unit', 'kind', 'mass (relative)', 'energy (relative)', 'entropy generation', 'largest relation difference', 'result'],
+    rows,
+    alarmRows: audit.units.flatMap((unit, index) => (unit.problems.length > 0 ? [index] : [])),
+  };
 }
 
 /** "heatRecoveryBoiler" -> "heat recovery boiler". */

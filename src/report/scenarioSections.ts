@@ -76,11 +76,11 @@ export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table:
   const format = formatOf(section.plant);
   const e = escapeMarkup;
   const prefix = `scenario-${section.id}`;
-  const tables = reportTables(section.result, format).filter((table) => table.id !== 'audit');
+  const tables = reportTables(section.result, format).filter((table) => table.id !== 'audit' && table.id !== 'independent-audit');
   const audit = section.result.audit;
   return [
     `<section id="${e(prefix)}" class="scenario"><h2>Scenario ${e(section.id)}: ${e(section.name)}</h2>`,
-    `<p class="facts">${section.hours} h a year · ${format.money(section.result.totals.cost_per_h)} per hour · audit: largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, energy ${audit.max_energy_residual_kW.toExponential(2)} kW</p>`,
+    `<p class="facts">${section.hours} h a year · ${format.money(section.result.totals.cost_per_h)} per hour · audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, energy ${format.heatResidual(audit.max_energy_residual_kW)}; independent audit: ${audit.independent.ok ? 'every unit passes' : 'FAILS'}</p>`,
     `<div class="diagram-wrap fit">${balanceDiagram(section.result, format)}</div>`,
     `<details><summary>Tables of scenario ${e(section.id)}</summary>`,
     ...tables.map((table) => tableHtml(table, prefix)),

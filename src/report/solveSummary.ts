@@ -2,6 +2,8 @@
 import type { PlantResult } from '../plant/index.js';
 import { displayFormat } from './displayFormat.js';
 import { SAFETY_CAUTION } from './safety.js';
+import { independentAuditTable } from './reportTables.js';
+import { steamQualityCell, steamQualityWarnings } from './steamQuality.js';
 import { table } from './table.js';
 
 export interface SummaryOptions {
@@ -19,11 +21,12 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   lines.push('Headers');
   lines.push(
     table(
-      ['header', 'pressure', 'temperature', 'in', 'out', 'vent', 'marginal steam value'],
+      ['header', 'pressure', 'temperature', 'steam', 'in', 'out', 'vent', 'marginal steam value'],
       result.headers.map((header) => [
         header.id,
         format.pressure(header.pressure_MPa),
         format.temperature(header.T_K),
+        steamQualityCell(header, format),
         flow(header.inflow_kg_s),
         flow(header.outflow_kg_s),
         header.vent_kg_s > 1e-9 ? flow(header.vent_kg_s) : '-',
@@ -32,6 +35,8 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
     ),
   );
 
+  const qualityWarnings = steamQualityWarnings(result.headers, format);
+  if (qualityWarnings.length > 0) lines.push(...qualityWarnings.map((warning) => `warning: ${warning}`));
   // Each side of the marginal value, measured by re-solving, and what sets it.
   lines.push('', `Marginal steam values (${objectiveWords(result.objective)}; one tonne drawn at the header and not returned)`);
   for (const header of result.headers) {
@@ -109,7 +114,7 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   lines.push(
     table(
       ['unit', 'steam', 'heat', 'condensate returned'],
-      users.map((unit) => [unit.id, flow(Number(unit.values.steam_kg_s)), power(Number(unit.values.heat_kW)), flow(Number(unit.values.condensate_returned_kg_s))]),
+      users.map((unit) => [unit.id, flow(Number(unit.values.steam_kg_s)), format.heatRate(Number(unit.values.heat_kW)), flow(Number(unit.values.condensate_returned_kg_s))]),
     ),
   );
 
@@ -123,11 +128,12 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
         ['  fuel / power / steam / water / carbon', ['fuel', 'power', 'steam', 'water', 'carbon'].map((key) => money(totals.cost_by_component_per_h[key as keyof typeof totals.cost_by_component_per_h])).join(' / ')],
         ['fuel fired', fuelRate(totals.fuel_kW)],
         ['power made / bought / sold', `${power(totals.power_generated_kW)} / ${power(totals.power_imported_kW)} / ${power(totals.power_exported_kW)}`],
+        ...takeOrPay(result, power),
         ['steam raised', flow(totals.steam_raised_kg_s)],
         ['steam let down', flow(totals.let_down_kg_s)],
         ['steam vented', flow(totals.vented_kg_s)],
         ['makeup water', flow(totals.makeup_kg_s)],
-        ['CO2', `${(totals.co2_kg_per_h / 1000).toFixed(2)} t/h`],
+        ['CO2', format.co2Rate(totals.co2_kg_per_h)],
       ],
       false,
     ),
@@ -153,10 +159,28 @@ export function solveSummary(result: PlantResult, options: SummaryOptions): stri
   const audit = result.audit;
   lines.push(
     '',
-    `Audit: largest mass residual ${audit.max_mass_residual_kg_s.toExponential(2)} kg/s, largest energy residual ${audit.max_energy_residual_kW.toExponential(2)} kW (${audit.worst}).`,
+    `Audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, largest energy residual ${format.heatResidual(audit.max_energy_residual_kW)} (${inCaseUnits(audit.worst, format)}).`,
   );
+  const independent = independentAuditTable(result, format);
+  lines.push('', `${independent.title}: ${result.audit.independent.summary}`);
+  lines.push(table(independent.headings, independent.rows));
   lines.push('', SAFETY_CAUTION, '');
   return lines.join('\n');
+}
+
+/** The take-or-pay shortfall, when import falls below the minimum billed: power billed but not taken. */
+function takeOrPay(result: PlantResult, power: (kW: number) => string): string[][] {
+  const grid = result.units.find((unit) => unit.kind === 'grid');
+  const shortfall = grid?.values.shortfall_kW;
+  return typeof shortfall === 'number' && shortfall > 1e-6 ? [['  take-or-pay shortfall (billed, not taken)', power(shortfall)]] : [];
+}
+
+/** The audit's description, its kW and kg/s figures restated in the case's units. */
+function inCaseUnits(text: string, format: ReturnType<typeof displayFormat>): string {
+  if (format.system === 'si') return text;
+  return text
+    .replace(/(-?\d[\d.e+-]*) kW\b/g, (_, value: string) => format.heatResidual(Number(value)))
+    .replace(/(-?\d[\d.e+-]*) kg\/s\b/g, (_, value: string) => format.massResidual(Number(value)));
 }
 
 /** "flashLiquid" -> "flash liquid". */

@@ -43,6 +43,14 @@ export function unknownUnit(text: string, kind: QuantityKind, unitText: string):
   return `"${text}" is not ${describeKind(kind).phrase}: unknown unit "${unitText}"; expected ${expectedUnits(kind)}`;
 }
 
+export function unmarkedPressure(text: string, unitText: string): string {
+  return `"${text}" does not say whether "${unitText}" is absolute or gauge: write psia/psig or bara/barg`;
+}
+
+export function milliForMega(text: string, kind: QuantityKind, unitText: string, mega: string): string {
+  return `"${text}" is not ${describeKind(kind).phrase}: "${unitText}" differs from "${mega}" only in letter case, and m (milli) is not M (mega); write "${mega}" if that is meant`;
+}
+
 export function unknownCurrency(text: string, kind: QuantityKind, currencyText: string): string {
   return `"${text}" is not ${describeKind(kind).phrase}: unknown currency "${currencyText}"; expected $, €, £ or an ISO 4217 code in capitals such as USD or EUR`;
 }

@@ -2,7 +2,7 @@ import { atmosphericPressureOf, type ParseOptions } from './atmosphere.js';
 import type { QuantityKind } from './kinds.js';
 import * as messages from './messages.js';
 import { splitQuantity } from './splitQuantity.js';
-import { findUnit, isPriceKind, kindsOfUnit, type UnitMatch } from './unitCatalogue.js';
+import { caseOnlyPrefix, findUnit, isPriceKind, isUnmarkedPressure, kindsOfUnit, type UnitMatch } from './unitCatalogue.js';
 import { fromInternal, toInternal } from './unitDefinition.js';
 
 export type ParseResult =
@@ -42,6 +42,9 @@ function failure(message: string): ParseResult {
 }
 
 function unmatchedUnit(text: string, kind: QuantityKind, unitText: string): string {
+  if (kind === 'pressure' && isUnmarkedPressure(unitText)) return messages.unmarkedPressure(text, unitText);
+  const mega = caseOnlyPrefix(kind, unitText);
+  if (mega !== undefined) return messages.milliForMega(text, kind, unitText, mega);
   const otherKind = kindsOfUnit(unitText)[0];
   if (otherKind !== undefined) return messages.wrongKind(text, kind, otherKind);
   if (isPriceKind(kind)) {

@@ -12,7 +12,8 @@ import type { UnitDefinition } from './unitDefinition.js';
 // Matching rules, in order: spaces and middle dots are ignored; an exact
 // spelling wins; otherwise a spelling that differs only in letter case is
 // accepted ("BARG", "MMBTU", "kpa"), which is safe because no two units of one
-// kind differ only in case (buildIndex refuses such a table). Price units are
+// kind differ only in case (buildIndex refuses such a table), except a mega "M"
+// written as a milli "m" ("mW", "mPa"), which is refused. Price units are
 // "<currency>/<denominator>".
 
 const tables: Record<QuantityKind, readonly UnitDefinition[]> = {
@@ -68,7 +69,52 @@ const indexes = new Map<QuantityKind, KindIndex>(quantityKinds.map((kind) => [ki
 function lookUp(kind: QuantityKind, key: string): UnitDefinition | undefined {
   const index = indexes.get(kind);
   if (index === undefined) throw new Error(`unknown quantity kind "${kind}"`);
-  return index.exact.get(key) ?? index.folded.get(key.toLowerCase());
+  const exact = index.exact.get(key);
+  if (exact !== undefined) return exact;
+  const folded = index.folded.get(key.toLowerCase());
+  return folded !== undefined && megaReadAsMilli(key, folded) === undefined ? folded : undefined;
+}
+
+/**
+ * The spelling of `definition` whose mega prefix "M" the written key has as a
+ * lower-case "m" (milli): "mW" for MW, "mPa" for MPa, "mJ/kg" for MJ/kg. Such a
+ * folded match is refused, as no reader should guess a factor of 10^9. The
+ * US "MM" (a thousand thousand) may be written "mm": "mmBtu" is MMBtu.
+ */
+function megaReadAsMilli(key: string, definition: UnitDefinition): string | undefined {
+  for (const spelling of [definition.name, ...definition.aliases]) {
+    const canonical = unitKey(spelling);
+    if (canonical.toLowerCase() !== key.toLowerCase()) continue;
+    for (let i = 0; i < key.length; i += 1) {
+      const doubled = canonical[i - 1] === 'M' || canonical[i + 1] === 'M';
+      if (key[i] === 'm' && canonical[i] === 'M' && !doubled) return spelling;
+    }
+  }
+  return undefined;
+}
+
+/**
+ * When `spelling` would match a unit of `kind` only by reading a milli "m" as
+ * a mega "M", the unit it differs from ("MW" for "mW"); otherwise undefined.
+ */
+export function caseOnlyPrefix(kind: QuantityKind, spelling: string): string | undefined {
+  const key = unitKey(spelling);
+  const index = indexes.get(kind);
+  if (index === undefined) return undefined;
+  const slash = key.indexOf('/');
+  const candidates = isPriceKind(kind) && slash >= 0 ? [key.slice(slash + 1)] : [key];
+  for (const candidate of candidates) {
+    if (index.exact.has(candidate)) continue;
+    const folded = index.folded.get(candidate.toLowerCase());
+    const found = folded === undefined ? undefined : megaReadAsMilli(candidate, folded);
+    if (found !== undefined) return isPriceKind(kind) ? `${key.slice(0, slash)}/${found}` : found;
+  }
+  return undefined;
+}
+
+/** Pressure units that do not say whether they are absolute or gauge. */
+export function isUnmarkedPressure(spelling: string): boolean {
+  return ['bar', 'psi'].includes(unitKey(spelling).toLowerCase());
 }
 
 /** A unit spelling resolved for one kind. */

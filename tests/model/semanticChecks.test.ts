@@ -42,7 +42,7 @@ describe('states', () => {
     expect(issuesOf(edited(['temperature: 220 degC', 'temperature: 180 degC']))).toMatchInlineSnapshot(`"case.yaml:31:18  headers[0].temperature  header temperature 180 degC is at or below saturation (184.1 degC at 10.00 barg); give a higher temperature, or make the header floating"`);
   });
   test('a header above the critical pressure is outside the steam tables', () => {
-    expect(issuesOf(edited(['pressure: 10 barg', 'pressure: 250 bar']))).toMatchInlineSnapshot(`"case.yaml:29:15  headers[0].pressure  pressure 250 bar is at or above the critical pressure 219.6 barg; a steam header or vessel must be below it"`);
+    expect(issuesOf(edited(['pressure: 10 barg', 'pressure: 250 bara']))).toMatchInlineSnapshot(`"case.yaml:29:15  headers[0].pressure  pressure 250 bara is at or above the critical pressure 219.6 barg; a steam header or vessel must be below it"`);
   });
   test('a header temperature beyond IF97 region 2 is refused with its limit', () => {
     expect(issuesOf(edited(['temperature: 220 degC', 'temperature: 900 degC'], ['outlet_temperature: 225 degC', 'outlet_temperature: 905 degC']))).toMatchInlineSnapshot(`"case.yaml:31:18  headers[0].temperature  header state is outside the steam tables (IAPWS-IF97 regions 1, 2 and 4): state at 1.10133 MPa, 1173.15 K lies in IF97 region 5 (above 1073.15 K), which steamwright does not implement; it covers p <= 100 MPa, 273.15 K <= T <= 1073.15 K outside region 3"`);
@@ -114,7 +114,23 @@ describe('defaults are listed, never silent', () => {
         "headers[0].venting = forbidden",
         "boilers[0].blowdown_to = drain",
         "boilers[0].can_switch_off = true",
+        "deaerator.feedwater_pumps = pump work at 100 % efficiency, bought as electricity",
       ]
     `);
+  });
+});
+
+describe('scenario hours', () => {
+  const withScenario = (hours: string): string => `${starter}\nscenarios:\n  - id: winter\n    hours: ${hours}\n    changes: {}\n`;
+  test('hours as a number or as a quantity in hours', () => {
+    for (const hours of ['3000', '"3000 h"', '"3,000 hours"', '"3000 h/yr"']) {
+      const result = loadCaseText(withScenario(hours), 'case.yaml');
+      expect(result.ok, hours).toBe(true);
+      if (result.ok) expect(result.variants.scenarios[0].hours, hours).toBe(3000);
+    }
+  });
+  test('hours in another unit, or beyond a leap year, are refused with their line', () => {
+    expect(issuesOf(withScenario('"125 days"'))).toMatch(/^case\.yaml:\d+:12 {2}scenarios\[0\]\.hours {2}expected hours a year such as 3000 or "3000 h", found "125 days"$/);
+    expect(issuesOf(withScenario('"9000 h"'))).toMatch(/expected hours a year above 0 and at most 8784 \(a leap year\), found "9000 h"$/);
   });
 });

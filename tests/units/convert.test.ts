@@ -45,7 +45,7 @@ describe('toSI and fromSI', () => {
   });
 
   test('an unknown unit is a programmer error that lists the units of the kind', () => {
-    expect(() => toSI(1, 'pressure', 'bananas')).toThrowErrorMatchingInlineSnapshot(`[Error: unknown pressure unit "bananas"; expected one of Pa, kPa, kPag, MPa, MPag, bar, bara, barg, psia, psig, atm]`);
+    expect(() => toSI(1, 'pressure', 'bananas')).toThrowErrorMatchingInlineSnapshot(`[Error: unknown pressure unit "bananas"; expected one of Pa, kPa, kPag, MPa, MPag, bara, barg, psia, psig, atm]`);
     expect(() => fromSI(1, 'massFlow', 'barg')).toThrowErrorMatchingInlineSnapshot(`[Error: unknown massFlow unit "barg"; expected one of kg/s, kg/min, kg/h, t/h, t/d, lb/s, lb/min, lb/h, klb/h]`);
   });
 });
@@ -65,13 +65,11 @@ describe('unitsOf', () => {
         "MPaa",
         "MPag",
         "MPa(g)",
-        "bar",
         "bara",
         "bar(a)",
         "barg",
         "bar(g)",
         "psia",
-        "psi",
         "psi(a)",
         "psig",
         "psi(g)",

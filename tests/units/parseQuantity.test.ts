@@ -25,7 +25,7 @@ describe('parseQuantity reads numbers and units', () => {
     ['42 bar(g)', 'pressure', 4.301325],
     ['42 BARG', 'pressure', 4.301325],
     ['4.2 MPa', 'pressure', 4.2],
-    ['4.2 mpa', 'pressure', 4.2],
+    ['4.2 MPA', 'pressure', 4.2],
     ['4.2e6 Pa', 'pressure', 4.2],
     ['4.2E+6 Pa', 'pressure', 4.2],
     ['600 psig', 'pressure', 600 * PSI_MPA + 0.101325],
@@ -56,7 +56,7 @@ describe('parseQuantity reads numbers and units', () => {
 
   test('the result names the canonical unit, not the spelling written', () => {
     expect(parseQuantity('42 bar(g)', 'pressure')).toEqual({ ok: true, value: 4.301325, unit: 'barg' });
-    expect(parseQuantity('100 psi', 'pressure')).toMatchObject({ ok: true, unit: 'psia' });
+    expect(parseQuantity('100 psi(a)', 'pressure')).toMatchObject({ ok: true, unit: 'psia' });
     expect(parseQuantity('5 mmbtu', 'energy')).toMatchObject({ ok: true, unit: 'MMBtu' });
   });
 
@@ -119,7 +119,7 @@ describe('parseQuantity explains what it cannot read', () => {
   });
 
   test('an unknown unit', () => {
-    expect(messageOf('42 bananas', 'pressure')).toMatchInlineSnapshot(`""42 bananas" is not a pressure: unknown unit "bananas"; expected one of Pa, kPa, kPag, MPa, MPag, bar, bara, barg, psia, psig, atm"`);
+    expect(messageOf('42 bananas', 'pressure')).toMatchInlineSnapshot(`""42 bananas" is not a pressure: unknown unit "bananas"; expected one of Pa, kPa, kPag, MPa, MPag, bara, barg, psia, psig, atm"`);
     expect(messageOf('5 ton/h', 'massFlow')).toMatchInlineSnapshot(`""5 ton/h" is not a mass flow: unknown unit "ton/h"; expected one of kg/s, kg/min, kg/h, t/h, t/d, lb/s, lb/min, lb/h, klb/h"`);
     expect(messageOf('9 $/bananas', 'energyPrice')).toMatchInlineSnapshot(`""9 $/bananas" is not an energy price: unknown unit "$/bananas"; expected one of $/GJ, $/MJ, $/kWh, $/MWh, $/MMBtu, $/therm, $/Dth ($ may be €, £ or an ISO 4217 code such as EUR)"`);
   });
@@ -130,8 +130,8 @@ describe('parseQuantity explains what it cannot read', () => {
   });
 
   test('a known unit of another kind', () => {
-    expect(messageOf('60 t/h', 'pressure')).toMatchInlineSnapshot(`""60 t/h" is a mass flow, not a pressure; expected one of Pa, kPa, kPag, MPa, MPag, bar, bara, barg, psia, psig, atm"`);
-    expect(messageOf('400 degC', 'pressure')).toMatchInlineSnapshot(`""400 degC" is a temperature, not a pressure; expected one of Pa, kPa, kPag, MPa, MPag, bar, bara, barg, psia, psig, atm"`);
+    expect(messageOf('60 t/h', 'pressure')).toMatchInlineSnapshot(`""60 t/h" is a mass flow, not a pressure; expected one of Pa, kPa, kPag, MPa, MPag, bara, barg, psia, psig, atm"`);
+    expect(messageOf('400 degC', 'pressure')).toMatchInlineSnapshot(`""400 degC" is a temperature, not a pressure; expected one of Pa, kPa, kPag, MPa, MPag, bara, barg, psia, psig, atm"`);
     expect(messageOf('9 $/t', 'energyPrice')).toMatchInlineSnapshot(`""9 $/t" is a mass price, not an energy price; expected one of $/GJ, $/MJ, $/kWh, $/MWh, $/MMBtu, $/therm, $/Dth ($ may be €, £ or an ISO 4217 code such as EUR)"`);
     expect(messageOf('9 GJ', 'energyPrice')).toMatchInlineSnapshot(`""9 GJ" is an energy, not an energy price; expected one of $/GJ, $/MJ, $/kWh, $/MWh, $/MMBtu, $/therm, $/Dth ($ may be €, £ or an ISO 4217 code such as EUR)"`);
     expect(messageOf('1200 Btu/lb', 'massPrice')).toMatchInlineSnapshot(`""1200 Btu/lb" is a specific enthalpy, not a mass price; expected one of $/t, $/kg, $/lb, $/klb ($ may be €, £ or an ISO 4217 code such as EUR)"`);
@@ -154,5 +154,28 @@ describe('parseQuantity explains what it cannot read', () => {
   test('a negative mass flow or mass', () => {
     expect(messageOf('-5 t/h', 'massFlow')).toMatchInlineSnapshot(`""-5 t/h" is negative; a mass flow cannot be below zero"`);
     expect(messageOf('-1 kg', 'mass')).toMatchInlineSnapshot(`""-1 kg" is negative; a mass cannot be below zero"`);
+  });
+});
+
+describe('parseQuantity refuses units that could mislead', () => {
+  const messageOf = (text: string, kind: Parameters<typeof parseQuantity>[1]): string => {
+    const result = parseQuantity(text, kind);
+    return result.ok ? `read as ${result.value} ${result.unit}` : result.message;
+  };
+  test('a bare psi or bar: absolute or gauge is not said', () => {
+    expect(messageOf('150 psi', 'pressure')).toMatchInlineSnapshot(`""150 psi" does not say whether "psi" is absolute or gauge: write psia/psig or bara/barg"`);
+    expect(messageOf('10 bar', 'pressure')).toMatchInlineSnapshot(`""10 bar" does not say whether "bar" is absolute or gauge: write psia/psig or bara/barg"`);
+    expect(messageOf('10 BAR', 'pressure')).toMatchInlineSnapshot(`""10 BAR" does not say whether "BAR" is absolute or gauge: write psia/psig or bara/barg"`);
+  });
+  test('a milli "m" where a mega "M" is meant: mW, mPa, mJ/kg', () => {
+    expect(messageOf('950 mW', 'power')).toMatchInlineSnapshot(`""950 mW" is not a power: "mW" differs from "MW" only in letter case, and m (milli) is not M (mega); write "MW" if that is meant"`);
+    expect(messageOf('4 mPa', 'pressure')).toMatchInlineSnapshot(`""4 mPa" is not a pressure: "mPa" differs from "MPa" only in letter case, and m (milli) is not M (mega); write "MPa" if that is meant"`);
+    expect(messageOf('2.8 mJ/kg', 'specificEnthalpy')).toMatchInlineSnapshot(`""2.8 mJ/kg" is not a specific enthalpy: "mJ/kg" differs from "MJ/kg" only in letter case, and m (milli) is not M (mega); write "MJ/kg" if that is meant"`);
+    expect(messageOf('9 EUR/mWh', 'energyPrice')).toMatchInlineSnapshot(`""9 EUR/mWh" is not an energy price: "EUR/mWh" differs from "EUR/MWh" only in letter case, and m (milli) is not M (mega); write "EUR/MWh" if that is meant"`);
+  });
+  test('case is still free where no prefix changes: KW, BARG, mmBtu (a thousand thousand)', () => {
+    expect(messageOf('950 KW', 'power')).toBe('read as 950 kW');
+    expect(messageOf('5 mmBtu', 'energy')).toMatch(/^read as 5\.27\d* MMBtu$/);
+    expect(messageOf('2 Mpa', 'pressure')).toBe('read as 2 MPa');
   });
 });

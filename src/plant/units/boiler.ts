@@ -46,29 +46,38 @@ export class BoilerContribution implements UnitContribution {
       steam.addConstant(baseSteam);
       fuel.addConstant(baseFuel);
     }
-    let previousGate: Variable | null = this.on;
+    // A curve that is not convex needs binaries, but only where its slope falls
+    // (a concave kink): between such kinks the pieces are convex and a
+    // cost-minimising solve fills them in order by itself. Each group of pieces
+    // has one gate; a group opens only when every piece before it is full.
+    let gate: Variable | null = this.on;
+    let groupStart = 1;
+    const slopes = curve.steam.map((_, k) => (k === 0 ? 0 : (curve.fuel[k] - curve.fuel[k - 1]) / (curve.steam[k] - curve.steam[k - 1])));
+    const segments: Variable[] = [];
     for (let k = 1; k < curve.steam.length; k += 1) {
       const width = curve.steam[k] - curve.steam[k - 1];
-      const slope = (curve.fuel[k] - curve.fuel[k - 1]) / width;
       const segment = context.variable(`${id}.load${k}`, { upper: width });
+      segments.push(segment);
       steam.add(segment, 1);
-      fuel.add(segment, slope);
-      if (this.on && curve.convex) {
+      fuel.add(segment, slopes[k]);
+      if (curve.convex) {
         // A stopped boiler makes nothing: every segment closes with it.
-        context.row(id, `${id}.load${k}.on`, expr().add(segment, 1).add(this.on, -width), '<=', 0);
+        if (this.on) context.row(id, `${id}.load${k}.on`, expr().add(segment, 1).add(this.on, -width), '<=', 0);
+        continue;
       }
-      if (!curve.convex) {
-        // Non-convex curve: segments fill in order (incremental formulation, one binary each).
-        const gate = context.variable(`${id}.load${k}.gate`, { type: 'binary' });
-        context.row(id, `${id}.load${k}.fill`, expr().add(segment, 1).add(gate, -width), '<=', 0);
-        if (k > 1) {
-          context.row(id, `${id}.load${k - 1}.full`, expr().add(this.lastSegment!, 1).add(gate, -this.lastWidth), '>=', 0);
+      const concaveKink = k > 1 && slopes[k] < slopes[k - 1] - 1e-12 * Math.abs(slopes[k - 1]);
+      if (k === 1 || concaveKink) {
+        const next = context.variable(`${id}.load${k}.gate`, { type: 'binary' });
+        if (gate) context.row(id, `${id}.load${k}.order`, expr().add(next, 1).add(gate, -1), '<=', 0);
+        // Every piece of the group before must be full for this group to open.
+        for (let j = groupStart; j < k; j += 1) {
+          const previousWidth = curve.steam[j] - curve.steam[j - 1];
+          context.row(id, `${id}.load${j}.full${k}`, expr().add(segments[j - 1], 1).add(next, -previousWidth), '>=', 0);
         }
-        if (previousGate) context.row(id, `${id}.load${k}.order`, expr().add(gate, 1).add(previousGate, -1), '<=', 0);
-        previousGate = gate;
+        gate = next;
+        groupStart = k;
       }
-      this.lastSegment = segment;
-      this.lastWidth = width;
+      context.row(id, `${id}.load${k}.fill`, expr().add(segment, 1).add(gate!, -width), '<=', 0);
     }
     this.fuel = fuel;
     declareSteamRaising(context, id, boiler.header, steam, boiler.outlet, probe, boiler.blowdownTo);
@@ -88,9 +97,6 @@ export class BoilerContribution implements UnitContribution {
       context.row(id, `${id}.fuel`, split.addExpression(fuel, -1), '=', 0);
     }
   }
-
-  private lastSegment: Variable | null = null;
-  private lastWidth = 0;
 
   report(solution: PassSolution): UnitReport {
     const steam = solution.evaluate(this.steam);

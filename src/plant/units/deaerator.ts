@@ -77,6 +77,7 @@ export class DeaeratorContribution implements UnitContribution {
         excess_vent_kg_s: excess,
         pump_shaft_kW: solution.evaluate(this.pumpShaft),
         pump_motor_kW: this.motors.reduce((total, motor) => total + solution.value(motor.variable) / motor.efficiency, 0),
+        pump_motor_shaft_kW: this.motors.reduce((total, motor) => total + solution.value(motor.variable), 0),
       },
       binding: excess > 1e-7 ? ['venting above its design share: the returns bring more heat than the feedwater can take'] : [],
     };

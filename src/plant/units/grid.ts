@@ -50,6 +50,8 @@ export class GridContribution implements UnitContribution {
     const binding: string[] = [];
     if (this.power.import.max > 0 && Math.abs(bought - this.power.import.max) < 1e-6 * this.power.import.max) binding.push('import at its limit');
     if (this.power.export.max > 0 && Math.abs(sold - this.power.export.max) < 1e-6 * this.power.export.max) binding.push('export at its limit');
+    const shortfall = solution.value(this.shortfall);
+    if (this.shortfall && shortfall > 1e-6 * Math.max(1, this.power.import.minimumBilled)) binding.push(`import below its take-or-pay minimum: ${shortfall.toFixed(0)} kW billed unused`);
     return {
       id: this.id,
       kind: this.kind,

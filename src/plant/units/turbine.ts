@@ -7,6 +7,7 @@ import type { BuildContext } from '../context.js';
 import type { PointChange, UnitContribution, UnitReport } from '../contribution.js';
 import type { PassSolution } from '../passSolution.js';
 import { expandIsentropic } from '../physics/turbineStage.js';
+import { liquidNode } from './steamRaising.js';
 import { PlantPhysicsError } from './user.js';
 
 export class TurbineContribution implements UnitContribution {
@@ -158,9 +159,9 @@ export class TurbineContribution implements UnitContribution {
         context.stream(stream);
       }
     } else {
-      // The condenser's condensate returns to the deaerator as saturated liquid.
+      // The condenser's condensate leaves as saturated liquid, to the deaerator unless the case says otherwise.
       const condensate = saturatedLiquid(stage.exhaust.pressure).h;
-      context.stream({ from: id, to: 'deaerator', kind: 'condensate', flow: outflow, h: condensate, p: stage.exhaust.pressure });
+      context.stream({ from: id, to: liquidNode(stage.exhaust.condensateTo), kind: 'condensate', flow: outflow, h: condensate, p: stage.exhaust.pressure });
     }
   }
 

@@ -110,7 +110,7 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
           placement: { kind: 'hangs', header: index },
           flow_kg_s: mass,
           exitFlows_kg_s: [],
-          lines: [to, `${flow(mass)} · ${format.power(num(unit, 'heat_kW'))}`, `condensate back ${flow(num(unit, 'condensate_returned_kg_s'))}`],
+          lines: [to, `${flow(mass)} · ${format.heatRate(num(unit, 'heat_kW'))}`, `condensate back ${flow(num(unit, 'condensate_returned_kg_s'))}`],
           alarm: false,
         });
       } else if (to === 'deaerator') {

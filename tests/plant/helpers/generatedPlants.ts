@@ -5,6 +5,7 @@
 // lowest header.
 import fc from 'fast-check';
 import { caseOpening } from '../../helpers/caseText.js';
+import { saturatedVapour, statePS } from '../../../src/properties/index.js';
 
 export interface GeneratedPlant {
   headers: number;
@@ -100,7 +101,7 @@ export function plantText(shape: PlantShape, without: number | null = null): Gen
     const performance =
       turbine.kind === 'isentropic'
         ? `isentropic_efficiency: ${turbine.efficiency} %`
-        : `willans_line: { intercept: ${20 + turbine.min * 5} kW, slope: ${Math.round(40 + 2 * turbine.efficiency * (to - turbine.from))} kJ/kg }`;
+        : `willans_line: { intercept: ${20 + turbine.min * 5} kW, slope: ${Math.min(Math.round(40 + 2 * turbine.efficiency * (to - turbine.from)), willansSlope(turbine.efficiency, PRESSURES[turbine.from], PRESSURES[to]))} kJ/kg }`;
     turbines.push(`  - id: ${id}
     inlet: h${turbine.from}
     stages:
@@ -150,4 +151,16 @@ deaerator:
 objective: minimum_cost
 `;
   return { headers: shape.headers, text, turbines: turbineIds };
+}
+
+/**
+ * The largest Willans slope the second law allows here: the stated share of the isentropic
+ * drop from dry saturated steam at the inlet pressure (the coldest a floating
+ * header holds dry) to the outlet, through 98 % x 96 % mechanical and
+ * generator efficiency. Pressures in barg on 101.325 kPa.
+ */
+function willansSlope(efficiencyPercent: number, fromBarg: number, toBarg: number): number {
+  const inlet = saturatedVapour(0.101325 + fromBarg / 10);
+  const drop = inlet.h - statePS(0.101325 + toBarg / 10, inlet.s).h;
+  return Math.floor((efficiencyPercent / 100) * drop * 0.98 * 0.96);
 }

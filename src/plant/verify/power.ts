@@ -1,0 +1,37 @@
+// Shaft and electric power: machines and feedwater pumps driven by turbines
+// or motors, and the site's electricity balance.
+import type { Plant } from '../../model/index.js';
+import type { Ledger } from './ledger.js';
+import type { SolvedPlant } from './solvedPlant.js';
+import { find } from './supplies.js';
+import { BALANCE_TOLERANCE, FEED_PUMPS, SITE_POWER } from './tolerances.js';
+
+/**
+ * Every driven machine gets its shaft power from its turbine (by the audit's
+ * power) and its motor; the site's electricity closes: generation + import -
+ * export - motors = site demand.
+ */
+export function auditPower(plant: Plant, solved: SolvedPlant, ledger: Ledger, turbinePower: ReadonlyMap<string, number>, pumpShaft: number): void {
+  const turbineShaft = (machine: string): number =>
+    plant.turbines.filter((turbine) => turbine.drives.kind === 'machine' && turbine.drives.id === machine).reduce((total, turbine) => total + (turbinePower.get(turbine.id) ?? 0), 0);
+  let motors = 0;
+  for (const machine of plant.machines) {
+    const result = find(solved.machines, machine.id);
+    ledger.volume(machine.id, 'machine');
+    ledger.check(machine.id, 'shaft power from turbine and motor', machine.shaftPower, turbineShaft(machine.id) + result.motorShaft, 'kW', BALANCE_TOLERANCE, 1e-3);
+    motors += result.motorElectric;
+  }
+  const pumps = plant.deaerator.feedwaterPumps;
+  if (pumps.length > 0) {
+    const driven = pumps.reduce((total, pump) => total + turbineShaft(pump.id), 0) + solved.deaerator.pumpMotorShaft;
+    ledger.check(FEED_PUMPS, 'shaft power from turbines and motors', pumpShaft, driven, 'kW', BALANCE_TOLERANCE, 1e-3);
+    motors += solved.deaerator.pumpMotorElectric;
+  } else {
+    // No pumps described: their work is bought as electricity.
+    motors += pumpShaft;
+  }
+  const generated = plant.turbines.filter((turbine) => turbine.drives.kind === 'generator').reduce((total, turbine) => total + (turbinePower.get(turbine.id) ?? 0), 0);
+  ledger.volume(SITE_POWER, 'sitePower');
+  const met = generated + solved.grid.imported - solved.grid.exported - motors;
+  ledger.check(SITE_POWER, 'site demand met', plant.power.siteDemand, met, 'kW', BALANCE_TOLERANCE, Math.max(1, generated + solved.grid.imported) * 1e-3);
+}
