@@ -98,7 +98,7 @@ export async function marginalValues(settings: LoopSettings, converged: Converge
  * One more kg/s drawn at h moves the header's mass row by 1 and its energy row
  * (where it has one) by h: the sum of both prices, objective units per kg/s.
  */
-function headerDual(result: SolveResult, header: string, h: number): number | null {
+export function headerDual(result: SolveResult, header: string, h: number): number | null {
   if (!result.dualsAvailable) return null;
   const mass = result.shadowPrice(massRowName(header));
   const energy = safeShadowPrice(result, energyRowName(header));

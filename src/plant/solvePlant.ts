@@ -4,13 +4,13 @@ import { highsBackend, type SolveResult, type SolverBackend } from '../lp/index.
 import type { Objective, Plant } from '../model/index.js';
 import { PropertyRangeError, saturatedVapour } from '../properties/index.js';
 import { auditPass, type Audit } from './audit.js';
-import { buildPass, ENERGY_ROW_SCALE, energyRowName, massRowName, type Pass } from './buildPass.js';
+import { buildPass, type Pass } from './buildPass.js';
 import type { PassPoint } from './context.js';
 import type { UnitContribution } from './contribution.js';
 import { contributionsOf } from './contributions.js';
 import { AUDIT_TOLERANCE, converge, integerValues, type Converged, type LoopSettings, type NotConverged, type PassRecord } from './converge.js';
 import { diagnose, type Diagnosis } from './diagnose.js';
-import { marginalValues, type MarginalValue } from './marginalValues.js';
+import { headerDual, marginalValues, type MarginalValue } from './marginalValues.js';
 import { passSolution, type PassSolution } from './passSolution.js';
 import { PlantPhysicsError } from './units/user.js';
 import { auditSolve, type IndependentAudit } from './verify/index.js';
@@ -112,7 +112,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
     // The independent audit: the solve's flows and header states through the case's own physics.
     const independentAudit = auditSolve(plant, solvedHeaderEnthalpy(pass, solution), reports);
     if (!independentAudit.ok) return { ok: false, plant, reason: 'audit', message: independentAudit.summary, passes: best.passes };
-    if (!probe) values.push(...dualValues(pass, solution));
+    if (!probe) values.push(...dualValues(pass, result));
     const commitment = new Map(best.integers);
     const start: PassPoint = { headerEnthalpy: solvedHeaderEnthalpy(pass, solution), previous: solutionValues(pass, result), trust: new Map(pass.context.trust) };
     return {
@@ -261,13 +261,8 @@ function improves(candidate: Converged, best: Converged, objective: Objective): 
 }
 
 /** Marginal values from the kept pass's duals alone, when probing is off. */
-function dualValues(pass: Pass, solution: PassSolution): MarginalValue[] {
-  return pass.context.plant.headers.map((header) => {
-    const massPrice = solution.shadowPrice(massRowName(header.id));
-    const energyPrice = pass.context.model.hasRow(energyRowName(header.id)) ? solution.shadowPrice(energyRowName(header.id)) : 0;
-    const dual = massPrice === null || energyPrice === null ? null : massPrice + pass.context.h(header.id) * ENERGY_ROW_SCALE * energyPrice;
-    return { header: header.id, dual, more: null, less: null, moreSetBy: [], lessSetBy: [] };
-  });
+function dualValues(pass: Pass, result: SolveResult): MarginalValue[] {
+  return pass.context.plant.headers.map((header) => ({ header: header.id, dual: headerDual(result, header.id, pass.context.h(header.id)), more: null, less: null, moreSetBy: [], lessSetBy: [] }));
 }
 
 /** Every variable's value in a solution, by name, header moves excepted (a next point's moves are 0). */
