@@ -14,9 +14,15 @@ export function edited(...replacements: [string, string][]): string {
   return text;
 }
 
-/** Every issue as the command line prints it, one per line. */
-export function issuesOf(text: string): string {
-  const result = loadCaseText(text, 'case.yaml');
+/** Every issue as the command line prints it, one per line, for a file of that name. */
+export function issuesOf(text: string, fileName = 'case.yaml'): string {
+  const result = loadCaseText(text, fileName);
   const issues = result.ok ? result.warnings : result.issues;
-  return issues.map((issue) => formatIssue(issue, 'case.yaml')).join('\n');
+  return issues.map((issue) => formatIssue(issue, fileName)).join('\n');
+}
+
+/** `text` with one replacement, whose `from` must occur. */
+export function replaced(text: string, from: string, to: string): string {
+  expect(text).toContain(from);
+  return text.replace(from, to);
 }

@@ -1,14 +1,12 @@
 // Fuels on different heating-value bases are refused where they would mix.
 import { describe, expect, test } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { formatIssue, loadCaseText } from '../../src/model/index.js';
+import { issuesOf as sharedIssuesOf } from './caseText.js';
 
 const mill = readFileSync('cases/kestrel-bay-board-mill.yaml', 'utf8');
 
-function issuesOf(text: string): string {
-  const result = loadCaseText(text, 'mill.yaml');
-  return (result.ok ? result.warnings : result.issues).map((issue) => formatIssue(issue, 'mill.yaml')).join('\n');
-}
+/** Issues as printed for mill.yaml. */
+const issuesOf = (text: string): string => sharedIssuesOf(text, 'mill.yaml');
 
 describe('checkFuelBasis', () => {
   test('a dual-fuel boiler whose fuels are on different bases is refused; the mixed plant is warned about', () => {

@@ -2,20 +2,15 @@
 // and Willans stages allowed below their no-load flow, are refused by check.
 import { describe, expect, test } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { formatIssue, loadCaseText } from '../../src/model/index.js';
+import { issuesOf as sharedIssuesOf, replaced } from './caseText.js';
 import { statePH, statePS, statePT } from '../../src/properties/index.js';
 
 const mill = readFileSync('cases/kestrel-bay-board-mill.yaml', 'utf8');
 
-function issuesOf(text: string): string {
-  const result = loadCaseText(text, 'mill.yaml');
-  return (result.ok ? result.warnings : result.issues).map((issue) => formatIssue(issue, 'mill.yaml')).join('\n');
-}
+/** Issues as printed for mill.yaml. */
+const issuesOf = (text: string): string => sharedIssuesOf(text, 'mill.yaml');
 
-function millWith(from: string, to: string): string {
-  expect(mill).toContain(from);
-  return mill.replace(from, to);
-}
+const millWith = (from: string, to: string): string => replaced(mill, from, to);
 
 describe('checkSecondLaw', () => {
   test('the bundled board mill passes', () => {

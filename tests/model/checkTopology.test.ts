@@ -1,19 +1,14 @@
 // Connections that load but cannot work as drawn are warned about.
 import { describe, expect, test } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { formatIssue, loadCaseText } from '../../src/model/index.js';
+import { issuesOf as sharedIssuesOf, replaced } from './caseText.js';
 
 const mill = readFileSync('cases/kestrel-bay-board-mill.yaml', 'utf8');
 
-function issuesOf(text: string): string {
-  const result = loadCaseText(text, 'mill.yaml');
-  return (result.ok ? result.warnings : result.issues).map((issue) => formatIssue(issue, 'mill.yaml')).join('\n');
-}
+/** Issues as printed for mill.yaml. */
+const issuesOf = (text: string): string => sharedIssuesOf(text, 'mill.yaml');
 
-function millWith(from: string, to: string): string {
-  expect(mill).toContain(from);
-  return mill.replace(from, to);
-}
+const millWith = (from: string, to: string): string => replaced(mill, from, to);
 
 describe('checkTopology', () => {
   test('condensate sent up into a flash tank at a higher pressure', () => {

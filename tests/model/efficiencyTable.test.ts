@@ -1,14 +1,12 @@
 // A boiler allowed below its efficiency table's first point is warned about.
 import { describe, expect, test } from 'vitest';
 import { readFileSync } from 'node:fs';
-import { formatIssue, loadCaseText } from '../../src/model/index.js';
+import { issuesOf as sharedIssuesOf } from './caseText.js';
 
 const creamery = readFileSync('cases/millbrook-creamery.yaml', 'utf8');
 
-function issuesOf(text: string): string {
-  const result = loadCaseText(text, 'creamery.yaml');
-  return (result.ok ? result.warnings : result.issues).map((issue) => formatIssue(issue, 'creamery.yaml')).join('\n');
-}
+/** Issues as printed for creamery.yaml. */
+const issuesOf = (text: string): string => sharedIssuesOf(text, 'creamery.yaml');
 
 describe('the efficiency table and the minimum load', () => {
   test('a minimum load of 20 % under a table that starts at 30 % is warned about, with the efficiency used there', () => {
