@@ -41,8 +41,8 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
         checkWorkers(args.workers);
         return true;
       })
-      .example('$0 compare cases/mill.yaml', 'every scenario side by side')
-      .example('$0 compare cases/mill.yaml --sweep import_price --csv', 'a sweep as CSV') as Argv<CompareArgs>,
+      .example('$0 compare cases/kestrel-bay-board-mill.yaml', 'every scenario side by side')
+      .example('$0 compare cases/kestrel-bay-board-mill.yaml --sweep import_price --csv', 'a sweep as CSV') as Argv<CompareArgs>,
   handler: async (args) => {
     const loaded = await loadCaseOrFail(args.case);
     const progress = progressLine('compare', process.stderr, args.json);

@@ -23,7 +23,7 @@ interface ReportArgs {
   solver: BackendName;
 }
 
-/** "cases/mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
+/** "cases/kestrel-bay-board-mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
 export function defaultReportName(casePath: string, scenario?: string): string {
   return `${basename(casePath, extname(casePath))}${scenario ? `.${scenario}` : ''}.report.html`;
 }
@@ -43,10 +43,10 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .option('csv', { type: 'string', describe: 'write the tables as CSV to FILE (no FILE or "-": standard output)' })
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
-      .example('$0 report cases/mill.yaml', 'write mill.report.html here')
-      .example('$0 report cases/mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
-      .example('$0 report cases/mill.yaml --scenario winter', 'one scenario: mill.winter.report.html')
-      .example('$0 report cases/mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
+      .example('$0 report cases/kestrel-bay-board-mill.yaml', 'write kestrel-bay-board-mill.report.html here')
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --scenario winter', 'one scenario: kestrel-bay-board-mill.winter.report.html')
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
   handler: async (args) => {
     // Every output is named and checked before any work is done.
     const requests: OutputRequest[] = [];
