@@ -5,6 +5,7 @@ import type { Plant } from '../model/index.js';
 import type { PlantResult } from '../plant/index.js';
 import { barChartSvg } from './barChart.js';
 import { balanceDiagram } from './balanceDiagram.js';
+import type { TitleBlock } from './diagram/index.js';
 import { displayFormat, steamValueNumber, type DisplayFormat } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
@@ -24,6 +25,8 @@ export interface ReportOptions {
   generatedAt?: string;
   /** the case's scenarios, solved: compared side by side, each with its own diagram */
   scenarios?: ScenarioSection[];
+  /** the diagrams' title block (date, version, case hash); the scenario is filled in per diagram */
+  titleBlock?: TitleBlock;
 }
 
 /** The display format of a plant's own unit system, currency and atmosphere. */
@@ -50,7 +53,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   body.push(
     `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
     '<p class="hint">Headers from the highest pressure at the top; sources feed them from above, users hang below, turbines and letdowns join them. Click a unit to find its row in the tables. <button type="button" id="fit-toggle">Actual size</button></p>',
-    `<div class="diagram-wrap fit">${balanceDiagram(result, format)}</div></section>`,
+    `<div class="diagram-wrap fit">${balanceDiagram(result, format, options.titleBlock ? { ...options.titleBlock, scenario: options.titleBlock.scenario ?? (scenarios.length > 0 ? 'plant as written' : undefined) } : null)}</div></section>`,
   );
   body.push('<section id="tables"><h2>Tables</h2>');
   for (const table of tables.filter((candidate) => candidate.id !== 'audit' && candidate.id !== 'independent-audit')) body.push(tableHtml(table));
@@ -62,7 +65,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
       tableHtml(comparisonTable(scenarios)),
       `<div class="charts">${annualCostChart(scenarios)}${scenarioCostChart(scenarios)}</div>`,
       '</section>',
-      ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml)),
+      ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml, options.titleBlock ? { ...options.titleBlock, scenario: `scenario ${section.id}: ${section.name}` } : null)),
     );
   }
   const audit = result.audit;

@@ -5,6 +5,7 @@ import type { Plant } from '../model/index.js';
 import type { PlantResult } from '../plant/index.js';
 import { barChartSvg } from './barChart.js';
 import { balanceDiagram } from './balanceDiagram.js';
+import type { TitleBlock } from './diagram/index.js';
 import { displayFormat, type DisplayFormat } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
@@ -72,7 +73,7 @@ export function scenarioCostChart(sections: ScenarioSection[]): string {
 }
 
 /** Diagram and tables of one scenario; `tableHtml` renders tables the same way as the main report. */
-export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table: ReportTable, prefix: string) => string): string {
+export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table: ReportTable, prefix: string) => string, block: TitleBlock | null = null): string {
   const format = formatOf(section.plant);
   const e = escapeMarkup;
   const prefix = `scenario-${section.id}`;
@@ -81,7 +82,7 @@ export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table:
   return [
     `<section id="${e(prefix)}" class="scenario"><h2>Scenario ${e(section.id)}: ${e(section.name)}</h2>`,
     `<p class="facts">${section.hours} h a year · ${format.money(section.result.totals.cost_per_h)} per hour · audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, energy ${format.heatResidual(audit.max_energy_residual_kW)}; independent audit: ${audit.independent.ok ? 'every unit passes' : 'FAILS'}</p>`,
-    `<div class="diagram-wrap fit">${balanceDiagram(section.result, format)}</div>`,
+    `<div class="diagram-wrap fit">${balanceDiagram(section.result, format, block)}</div>`,
     `<details><summary>Tables of scenario ${e(section.id)}</summary>`,
     ...tables.map((table) => tableHtml(table, prefix)),
     '</details>',

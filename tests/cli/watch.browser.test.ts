@@ -50,7 +50,8 @@ const version = (): Promise<number> => page.locator('meta[name="steamwright-vers
 async function saveAndWait(text: string, after: number): Promise<number> {
   const started = Date.now();
   writeFileSync(caseFile, text);
-  await page.waitForFunction((seen) => Number(document.querySelector('meta[name="steamwright-version"]')?.getAttribute('content')) > seen, after, { timeout: REDRAW_LIMIT_MS, polling: 50 });
+  // Page source as text: the project compiles without DOM types.
+  await page.waitForFunction(`Number(document.querySelector('meta[name="steamwright-version"]')?.getAttribute('content')) > ${after}`, undefined, { timeout: REDRAW_LIMIT_MS, polling: 50 });
   return Date.now() - started;
 }
 

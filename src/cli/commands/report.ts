@@ -1,9 +1,13 @@
 // `steamwright report CASE`: the balance diagram and a self-contained HTML
 // report, plus the same tables as Markdown or CSV.
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
 import { basename, extname } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
 import { getBackend, type BackendName } from '../../lp/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
+import { packageVersion } from '../../version.js';
+import type { TitleBlock } from '../../report/diagram/index.js';
 import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, type ScenarioSection } from '../../report/index.js';
 import { compareScenarios } from '../../scenarios/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
@@ -26,6 +30,12 @@ interface ReportArgs {
 /** "cases/kestrel-bay-board-mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
 export function defaultReportName(casePath: string, scenario?: string): string {
   return `${basename(casePath, extname(casePath))}${scenario ? `.${scenario}` : ''}.report.html`;
+}
+
+/** The drawing's title block: which scenario, drawn when, by which version, from which case file (short SHA-256). */
+export function titleBlockFor(casePath: string, scenario: string | undefined): TitleBlock {
+  const caseHash = createHash('sha256').update(readFileSync(casePath)).digest('hex').slice(0, 8);
+  return { scenario, date: new Date().toISOString().slice(0, 10), version: packageVersion(), caseHash };
 }
 
 const toStdout = (target: string | undefined): boolean => target === '' || target === '-';
@@ -85,12 +95,13 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       }
     }
 
+    const block = titleBlockFor(args.case, subtitle);
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections }),
-      '--svg': () => `${balanceDiagram(result, format)}\n`,
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, titleBlock: block }),
+      '--svg': () => `${balanceDiagram(result, format, block)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),
     };
