@@ -4,9 +4,9 @@
 import { getBackend, type BackendName } from '../lp/index.js';
 import { plantResult, solvePlant, type PlantResult } from '../plant/index.js';
 import type { Objective, Plant } from '../model/index.js';
-import { htmlReport, type ScenarioSection } from '../report/index.js';
+import { htmlReport, type FailedScenario, type ScenarioSection } from '../report/index.js';
 import { compareScenarios } from '../scenarios/index.js';
-import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from './errors.js';
+import { CliError, EXIT_USAGE } from './errors.js';
 import type { LoadedCase } from './loadCaseOrFail.js';
 import { solveFailure } from './solveFailure.js';
 
@@ -23,6 +23,8 @@ export interface SolvedReport {
   result: PlantResult;
   subtitle?: string;
   sections: ScenarioSection[];
+  /** scenarios that could not be solved, with the diagnosis: the report marks them, the caller exits 1 */
+  failed: FailedScenario[];
 }
 
 export async function solveForReport(casePath: string, loaded: LoadedCase, request: ReportRequest): Promise<SolvedReport> {
@@ -43,17 +45,18 @@ export async function solveForReport(casePath: string, loaded: LoadedCase, reque
   const result = plantResult(outcome);
   // Without a scenario named, a case with scenarios reports them all side by side.
   const sections: ScenarioSection[] = [];
+  const failed: FailedScenario[] = [];
   if (request.scenario === undefined && !variants.implicitBase) {
     const comparison = await compareScenarios(variants, [], { objective: request.objective, backend: request.solver, workers: request.workers });
     for (const [index, run] of comparison.runs.entries()) {
-      if (!run.ok) throw new CliError(`${casePath} scenario "${run.id}": ${run.message}`, EXIT_PROBLEMS);
-      sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
+      if (run.ok) sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
+      else failed.push({ id: run.id, name: run.name, hours: run.hours, reason: run.reason, message: run.message });
     }
   }
-  return { plant, result, subtitle, sections };
+  return { plant, result, subtitle, sections, failed };
 }
 
 /** The self-contained HTML report of a solved report. */
 export function reportHtml(solved: SolvedReport): string {
-  return htmlReport(solved.plant, solved.result, { subtitle: solved.subtitle, scenarios: solved.sections });
+  return htmlReport(solved.plant, solved.result, { subtitle: solved.subtitle, scenarios: solved.sections, failedScenarios: solved.failed });
 }

@@ -16,7 +16,7 @@ import { SAFETY_CAUTION } from './safety.js';
 
 /** CSP source for the inline script: sha256 of its exact text (CSP Level 2, hash-source). */
 const SCRIPT_HASH = `sha256-${createHash('sha256').update(REPORT_SCRIPT, 'utf8').digest('base64')}`;
-import { annualCostChart, comparisonTable, scenarioCostChart, scenarioSectionHtml, type ScenarioSection } from './scenarioSections.js';
+import { annualCostChart, comparisonTable, failedScenariosHtml, scenarioCostChart, scenarioSectionHtml, type FailedScenario, type ScenarioSection } from './scenarioSections.js';
 
 export interface ReportOptions {
   /** e.g. the scenario shown; printed under the title */
@@ -25,6 +25,8 @@ export interface ReportOptions {
   generatedAt?: string;
   /** the case's scenarios, solved: compared side by side, each with its own diagram */
   scenarios?: ScenarioSection[];
+  /** scenarios that could not be solved: marked, with their diagnosis */
+  failedScenarios?: FailedScenario[];
   /** the diagrams' title block (date, version, case hash); the scenario is filled in per diagram */
   titleBlock?: TitleBlock;
 }
@@ -47,8 +49,10 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     '</header>',
   );
   const scenarios = options.scenarios ?? [];
+  const failed = options.failedScenarios ?? [];
+  if (failed.length > 0) body.splice(body.length - 1, 0, `<p class="caution failed">${failed.length} scenario${failed.length === 1 ? '' : 's'} could not be solved: ${failed.map((scenario) => e(scenario.id)).join(', ')}. See <a href="#failed-scenarios">the diagnosis</a>.</p>`);
   body.push(
-    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
+    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${failed.length > 0 ? ' <a href="#failed-scenarios">Failed scenarios</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
   );
   body.push(
     `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
@@ -59,6 +63,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   for (const table of tables.filter((candidate) => candidate.id !== 'audit' && candidate.id !== 'independent-audit')) body.push(tableHtml(table));
   body.push('</section>');
   body.push('<section id="charts"><h2>Charts</h2><div class="charts">', costChart(result, format), valueChart(result, format), '</div></section>');
+  if (failed.length > 0) body.push(failedScenariosHtml(failed));
   if (scenarios.length > 0) {
     body.push(
       '<section id="scenarios"><h2>Scenarios</h2>',

@@ -19,7 +19,30 @@ export interface ScenarioSection {
   result: PlantResult;
 }
 
+/** A scenario that could not be solved: the report marks it with its diagnosis. */
+export interface FailedScenario {
+  id: string;
+  name: string;
+  hours: number;
+  reason: string;
+  /** what failed and why, in plant terms (the diagnosis) */
+  message: string;
+}
+
 const COMPONENTS = ['fuel', 'power', 'steam', 'water', 'carbon'] as const;
+
+/** The scenarios that could not be solved, each with its diagnosis, and what the totals leave out. */
+export function failedScenariosHtml(failed: FailedScenario[]): string {
+  const e = escapeMarkup;
+  return [
+    '<section id="failed-scenarios" class="failed"><h2>Scenarios that could not be solved</h2>',
+    `<p class="caution">${failed.length === 1 ? 'This scenario has' : `These ${failed.length} scenarios have`} no balance. The scenario table, the charts and the annual total cover the solved scenarios only (${failed.reduce((total, scenario) => total + scenario.hours, 0)} h a year left out).</p>`,
+    '<ul>',
+    ...failed.map((scenario) => `<li><strong>${e(scenario.id)}</strong> (${e(scenario.name)}, ${scenario.hours} h a year): ${e(scenario.reason)}. ${e(scenario.message)}</li>`),
+    '</ul>',
+    '</section>',
+  ].join('\n');
+}
 
 function formatOf(plant: Plant): DisplayFormat {
   return displayFormat(plant.site.unitSystem, plant.site.currency, plant.site.atmosphericPressure);

@@ -4,15 +4,13 @@ import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { basename, extname } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
-import { getBackend, type BackendName } from '../../lp/index.js';
-import { plantResult, solvePlant } from '../../plant/index.js';
+import type { BackendName } from '../../lp/index.js';
 import { packageVersion } from '../../version.js';
 import type { TitleBlock } from '../../report/diagram/index.js';
-import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, type ScenarioSection } from '../../report/index.js';
-import { compareScenarios } from '../../scenarios/index.js';
+import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown } from '../../report/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
-import { solveFailure } from '../solveFailure.js';
-import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { solveForReport } from '../reportSolve.js';
+import { CliError, EXIT_PROBLEMS } from '../errors.js';
 import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
@@ -67,40 +65,17 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     if (args.csv !== undefined) requests.push({ option: '--csv', path: toStdout(args.csv) ? '-' : args.csv });
     const planned = await planOutputs([{ option: 'case file', path: args.case }], requests);
     const loaded = await loadCaseOrFail(args.case, 'no report was written');
-    const variants = loaded.variants;
-    let plant = loaded.plant;
-    let subtitle: string | undefined;
-    if (args.scenario !== undefined) {
-      const scenario = variants.implicitBase ? undefined : variants.scenarios.find((entry) => entry.id === args.scenario);
-      if (!scenario) {
-        const known = variants.implicitBase ? 'the case has no scenarios' : `known: ${variants.scenarios.map((entry) => entry.id).join(', ')}`;
-        throw new CliError(`--scenario: no scenario "${args.scenario}" in ${args.case}; ${known}`, EXIT_USAGE);
-      }
-      plant = scenario.plant;
-      subtitle = `Scenario ${scenario.id}: ${scenario.name} (${scenario.hours} h a year)`;
-    }
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
-    const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw solveFailure(args.case, args.scenario, outcome, args.solver);
-    const result = plantResult(outcome);
+    const solved = await solveForReport(args.case, loaded, { scenario: args.scenario, objective, solver: args.solver });
+    const { plant, result, subtitle, sections, failed } = solved;
     const format = plantDisplayFormat(plant);
-
-    // Without --scenario, a case with scenarios reports them all side by side.
-    const sections: ScenarioSection[] = [];
-    if (args.scenario === undefined && !variants.implicitBase) {
-      const comparison = await compareScenarios(variants, [], { objective, backend: args.solver });
-      for (const [index, run] of comparison.runs.entries()) {
-        if (!run.ok) throw new CliError(`${args.case} scenario "${run.id}": ${run.message}`, EXIT_PROBLEMS);
-        sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
-      }
-    }
 
     const block = titleBlockFor(args.case, subtitle);
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, titleBlock: block }),
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, titleBlock: block }),
       '--svg': () => `${balanceDiagram(result, format, block)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),
@@ -114,5 +89,10 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const notice = outputs.filter((output) => output.kind !== 'stdout').map((output) => `wrote ${output.path}\n`).join('');
     if (outputs.some((output) => output.kind === 'stdout')) process.stderr.write(notice);
     else process.stdout.write(notice);
+    if (failed.length > 0) {
+      // The report is complete and marks them; the exit code still says a scenario failed.
+      const lines = failed.map((scenario) => `  ${scenario.id}: ${scenario.message}`).join('\n');
+      throw new CliError(`${args.case}: ${failed.length} of ${failed.length + sections.length} scenarios could not be solved; the report marks them:\n${lines}`, EXIT_PROBLEMS);
+    }
   },
 };
