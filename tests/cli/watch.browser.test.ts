@@ -50,8 +50,14 @@ const version = (): Promise<number> => page.locator('meta[name="steamwright-vers
 async function saveAndWait(text: string, after: number): Promise<number> {
   const started = Date.now();
   writeFileSync(caseFile, text);
-  // Page source as text: the project compiles without DOM types.
-  await page.waitForFunction(`Number(document.querySelector('meta[name="steamwright-version"]')?.getAttribute('content')) > ${after}`, undefined, { timeout: REDRAW_LIMIT_MS, polling: 50 });
+  // A function, not page source as text: the page's policy forbids eval. The
+  // project compiles without DOM types, so the page's document is reached untyped.
+  await page.waitForFunction(
+    // eslint-disable-next-line @typescript-eslint/no-explicit-any
+    (seen: number) => Number((globalThis as any).document.querySelector('meta[name="steamwright-version"]')?.getAttribute('content')) > seen,
+    after,
+    { timeout: REDRAW_LIMIT_MS, polling: 50 },
+  );
   return Date.now() - started;
 }
 
