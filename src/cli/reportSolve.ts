@@ -5,7 +5,7 @@ import { getBackend, type BackendName } from '../lp/index.js';
 import { plantResult, solvePlant, type PlantResult } from '../plant/index.js';
 import type { Objective, Plant } from '../model/index.js';
 import { htmlReport, type FailedScenario, type ScenarioSection } from '../report/index.js';
-import { compareScenarios } from '../scenarios/index.js';
+import { compareScenarios, evaluateProjects, type ProjectEvaluation, type ScenarioRun } from '../scenarios/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
 import type { LoadedCase } from './loadCaseOrFail.js';
 import { solveFailure } from './solveFailure.js';
@@ -25,6 +25,8 @@ export interface SolvedReport {
   sections: ScenarioSection[];
   /** scenarios that could not be solved, with the diagnosis: the report marks them, the caller exits 1 */
   failed: FailedScenario[];
+  /** the case's projects, each solved on every scenario (empty with --scenario or no projects) */
+  projects: ProjectEvaluation[];
 }
 
 export async function solveForReport(casePath: string, loaded: LoadedCase, request: ReportRequest): Promise<SolvedReport> {
@@ -46,17 +48,29 @@ export async function solveForReport(casePath: string, loaded: LoadedCase, reque
   // Without a scenario named, a case with scenarios reports them all side by side.
   const sections: ScenarioSection[] = [];
   const failed: FailedScenario[] = [];
-  if (request.scenario === undefined && !variants.implicitBase) {
-    const comparison = await compareScenarios(variants, [], { objective: request.objective, backend: request.solver, workers: request.workers });
-    for (const [index, run] of comparison.runs.entries()) {
-      if (run.ok) sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
-      else failed.push({ id: run.id, name: run.name, hours: run.hours, reason: run.reason, message: run.message });
+  let projects: ProjectEvaluation[] = [];
+  if (request.scenario === undefined && (!variants.implicitBase || variants.projects.length > 0)) {
+    const options = { objective: request.objective, backend: request.solver, workers: request.workers };
+    // With projects, their evaluation solves the scenarios too: one batch for both.
+    let runs: ScenarioRun[];
+    if (variants.projects.length > 0) {
+      const evaluation = await evaluateProjects(variants, [], options);
+      runs = evaluation.base;
+      projects = evaluation.projects;
+    } else {
+      runs = (await compareScenarios(variants, [], options)).runs;
+    }
+    if (!variants.implicitBase) {
+      for (const [index, run] of runs.entries()) {
+        if (run.ok) sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
+        else failed.push({ id: run.id, name: run.name, hours: run.hours, reason: run.reason, message: run.message });
+      }
     }
   }
-  return { plant, result, subtitle, sections, failed };
+  return { plant, result, subtitle, sections, failed, projects };
 }
 
 /** The self-contained HTML report of a solved report. */
 export function reportHtml(solved: SolvedReport): string {
-  return htmlReport(solved.plant, solved.result, { subtitle: solved.subtitle, scenarios: solved.sections, failedScenarios: solved.failed });
+  return htmlReport(solved.plant, solved.result, { subtitle: solved.subtitle, scenarios: solved.sections, failedScenarios: solved.failed, projects: solved.projects });
 }

@@ -6,6 +6,8 @@ import type { PlantResult } from '../plant/index.js';
 import { barChartSvg } from './barChart.js';
 import { balanceDiagram } from './balanceDiagram.js';
 import type { TitleBlock } from './diagram/index.js';
+import type { ProjectEvaluation } from '../scenarios/index.js';
+import { projectChart, projectScenarioTable, projectSummaryTable } from './projectSections.js';
 import { displayFormat, steamValueNumber, type DisplayFormat } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
@@ -25,6 +27,8 @@ export interface ReportOptions {
   generatedAt?: string;
   /** the case's scenarios, solved: compared side by side, each with its own diagram */
   scenarios?: ScenarioSection[];
+  /** the case's projects, evaluated over the scenarios */
+  projects?: ProjectEvaluation[];
   /** scenarios that could not be solved: marked, with their diagnosis */
   failedScenarios?: FailedScenario[];
   /** the diagrams' title block (date, version, case hash); the scenario is filled in per diagram */
@@ -50,9 +54,10 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   );
   const scenarios = options.scenarios ?? [];
   const failed = options.failedScenarios ?? [];
+  const projects = options.projects ?? [];
   if (failed.length > 0) body.splice(body.length - 1, 0, `<p class="caution failed">${failed.length} scenario${failed.length === 1 ? '' : 's'} could not be solved: ${failed.map((scenario) => e(scenario.id)).join(', ')}. See <a href="#failed-scenarios">the diagnosis</a>.</p>`);
   body.push(
-    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${failed.length > 0 ? ' <a href="#failed-scenarios">Failed scenarios</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
+    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${failed.length > 0 ? ' <a href="#failed-scenarios">Failed scenarios</a>' : ''}${projects.length > 0 ? ' <a href="#projects">Projects</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
   );
   body.push(
     `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
@@ -71,6 +76,16 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
       `<div class="charts">${annualCostChart(scenarios)}${scenarioCostChart(scenarios)}</div>`,
       '</section>',
       ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml, options.titleBlock ? { ...options.titleBlock, scenario: `scenario ${section.id}: ${section.name}` } : null)),
+    );
+  }
+  if (projects.length > 0) {
+    body.push(
+      '<section id="projects"><h2>Projects</h2>',
+      tableHtml(projectSummaryTable(projects, format)),
+      tableHtml(projectScenarioTable(projects, format)),
+      `<div class="charts">${projectChart(projects, format)}</div>`,
+      '<p class="hint">Savings are differences of two solves of the whole plant, scenario by scenario, weighted by hours; capital and O&amp;M are as the case states them.</p>',
+      '</section>',
     );
   }
   const audit = result.audit;

@@ -103,6 +103,25 @@ describe('steamwright report', () => {
     expect(html).not.toContain('<section id="scenario-summer"');
   });
 
+  it('carries the projects: savings by component, payback, NPV and IRR, as evaluate computes them', async () => {
+    const dir = folder();
+    const out = join(dir, 'mill.html');
+    const run = await runCli(['report', DEMO, '--out', out]);
+    expect(run.code).toBe(0);
+    const html = readFileSync(out, 'utf8');
+    expect(html).toContain('<section id="projects">');
+    const evaluated = await runCli(['evaluate', DEMO, '--json', '--no-screen']);
+    expect(evaluated.code).toBe(0);
+    const projects = JSON.parse(evaluated.stdout).projects as { id: string; ok: boolean; npv: number; annual_saving: number }[];
+    expect(projects.length).toBe(2);
+    for (const project of projects) {
+      const row = new RegExp(`<tr data-id="${project.id}">(.*?)</tr>`).exec(html.slice(html.indexOf('data-table="projects"')))?.[1] ?? '';
+      const npv = Math.round(project.npv).toLocaleString('en-US');
+      expect(row, project.id).toContain(`>${npv} EUR at`);
+      expect(row, project.id).toContain(`>${Math.round(project.annual_saving).toLocaleString('en-US')} EUR<`);
+    }
+  });
+
   it('a file that cannot be written is exit code 1 and leaves no temporary file', async () => {
     const dir = folder();
     const run = await runCli(['report', DEMO, '--out', join(dir, 'missing', 'r.html')], { cwd: dir });

@@ -67,7 +67,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const loaded = await loadCaseOrFail(args.case, 'no report was written');
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
     const solved = await solveForReport(args.case, loaded, { scenario: args.scenario, objective, solver: args.solver });
-    const { plant, result, subtitle, sections, failed } = solved;
+    const { plant, result, subtitle, sections, failed, projects } = solved;
     const format = plantDisplayFormat(plant);
 
     const block = titleBlockFor(args.case, subtitle);
@@ -75,7 +75,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, titleBlock: block }),
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, projects, titleBlock: block }),
       '--svg': () => `${balanceDiagram(result, format, block)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),
@@ -89,10 +89,10 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const notice = outputs.filter((output) => output.kind !== 'stdout').map((output) => `wrote ${output.path}\n`).join('');
     if (outputs.some((output) => output.kind === 'stdout')) process.stderr.write(notice);
     else process.stdout.write(notice);
-    if (failed.length > 0) {
-      // The report is complete and marks them; the exit code still says a scenario failed.
-      const lines = failed.map((scenario) => `  ${scenario.id}: ${scenario.message}`).join('\n');
-      throw new CliError(`${args.case}: ${failed.length} of ${failed.length + sections.length} scenarios could not be solved; the report marks them:\n${lines}`, EXIT_PROBLEMS);
-    }
+    // The report is complete and marks what failed; the exit code still says so.
+    const problems: string[] = [];
+    if (failed.length > 0) problems.push(`${failed.length} of ${failed.length + sections.length} scenarios could not be solved; the report marks them:`, ...failed.map((scenario) => `  ${scenario.id}: ${scenario.message}`));
+    for (const project of projects) if (!project.ok) problems.push(`project ${project.id} could not be evaluated; the report marks it:`, ...project.failed.map((failure) => `  ${failure.scenario} (${failure.which}): ${failure.message}`));
+    if (problems.length > 0) throw new CliError(`${args.case}: ${problems.join('\n')}`, EXIT_PROBLEMS);
   },
 };
