@@ -57,6 +57,8 @@ export interface SuspectResult {
   bias: number;
   biasSigma: number;
   globalAfter: GlobalTest;
+  /** meters the balances cannot tell apart from this one: the bias may be in any of them */
+  equivalent: string[];
 }
 
 export interface ReconcileOutcome {
@@ -164,7 +166,7 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     global: tested.global,
     measurementCritical: tested.measurementCritical,
     vdi2048: { globalPassed: tested.vdi2048.globalPassed, critical: tested.vdi2048.critical, flagged: tested.vdi2048.flagged.map((index) => read[index].meter.tag) },
-    suspects: tested.suspects.map((suspect) => ({ tag: read[suspect.reading].meter.tag, statistic: suspect.statistic, bias: suspect.bias, biasSigma: suspect.biasSigma, globalAfter: suspect.globalAfter })),
+    suspects: tested.suspects.map((suspect) => ({ tag: read[suspect.reading].meter.tag, statistic: suspect.statistic, bias: suspect.bias, biasSigma: suspect.biasSigma, globalAfter: suspect.globalAfter, equivalent: suspect.equivalent.map((index) => read[index].meter.tag) })),
     unread,
     notes,
   };

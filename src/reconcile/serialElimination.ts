@@ -41,6 +41,12 @@ export interface Suspect {
   biasSigma: number;
   /** the global test once it is set aside */
   globalAfter: GlobalTest;
+  /**
+   * Readings with the same statistic (relative 1e-6): the balances cannot
+   * tell their gross errors apart (an equivalent set), so the bias may be in
+   * any of them. The chosen one is the first in the problem's order.
+   */
+  equivalent: number[];
 }
 
 export interface TestedReconciliation {
@@ -85,7 +91,9 @@ export function testReconciliation(problem: LinearProblem, settings: TestSetting
       }
     });
     if (worst < 0) break;
-    const chosen = active[worst];
+    const equivalent = current.readings.flatMap((reading, i) => (i !== worst && reading.statistic !== null && Math.abs(reading.statistic - worstStatistic) <= 1e-6 * worstStatistic ? [active[i]] : []));
+    const chosen = Math.min(active[worst], ...equivalent);
+    const others = [active[worst], ...equivalent].filter((index) => index !== chosen);
     active = active.filter((index) => index !== chosen);
     const next = reconcileLinear({ ...problem, readings: active.map((index) => problem.readings[index]) });
     const reading = problem.readings[chosen];
@@ -98,6 +106,7 @@ export function testReconciliation(problem: LinearProblem, settings: TestSetting
       bias: estimate === null ? NaN : reading.value - estimate,
       biasSigma: estimateSigma === null ? NaN : Math.sqrt(reading.sigma ** 2 + estimateSigma ** 2),
       globalAfter: nextGlobal,
+      equivalent: others,
     });
     current = next;
     currentGlobal = nextGlobal;
