@@ -34,13 +34,19 @@ export interface ReadingsWindow {
 export type ReadingsResult = { ok: true; readings: Map<string, AveragedReading>; series: boolean; rows: number } | { ok: false; issues: ReadingIssue[] };
 
 export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }): ReadingsResult {
+  const issues: ReadingIssue[] = [];
   let records: { record: string[]; info: { lines: number } }[];
+  const skipped = (error: { message?: string; lines?: number } | undefined): undefined => {
+    issues.push({ line: error?.lines ?? 1, message: `the row does not parse as CSV (${(error?.message ?? 'unknown error').replace(/\s+/g, ' ')})` });
+    return undefined;
+  };
   try {
-    records = parse(text, { info: true, relax_column_count: true, skip_empty_lines: true, trim: true, comment: "#", bom: true }) as unknown as { record: string[]; info: { lines: number } }[];
+    records = parse(text, { info: true, relax_column_count: true, skip_empty_lines: true, trim: true, comment: '#', bom: true, skip_records_with_error: true, on_skip: skipped }) as unknown as { record: string[]; info: { lines: number } }[];
   } catch (error) {
+    // An error the parser cannot skip past (an unclosed quote runs to the end of the file).
     const lines = (error as { lines?: number }).lines;
-    const message = error instanceof Error ? error.message.replace(/^Invalid Record Length: |^Invalid Opening Quote: /, '') : String(error);
-    return { ok: false, issues: [{ line: lines ?? 1, message: `the row does not parse as CSV (${message.replace(/\s+/g, ' ')})` }] };
+    const message = error instanceof Error ? error.message : String(error);
+    return { ok: false, issues: [...issues, { line: lines ?? 1, message: `the file does not parse as CSV (${message.replace(/\s+/g, ' ')})` }] };
   }
   if (records.length === 0) return { ok: false, issues: [{ line: 1, message: 'the file has no header row; expected the columns tag, value, unit (and time for a series)' }] };
   const header = records[0].record.map((name) => name.toLowerCase());
@@ -49,7 +55,6 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
   const missing = ['tag', 'value', 'unit'].filter((name) => column(name) < 0);
   if (missing.length > 0) return { ok: false, issues: [{ line: records[0].info.lines, message: `the header row has no ${missing.join(', ')} column; expected tag, value, unit (and time for a series), found "${records[0].record.join(',')}"` }] };
 
-  const issues: ReadingIssue[] = [];
   const rows = new Map<string, { time: number; value: number; line: number }[]>();
   let count = 0;
   for (const { record, info } of records.slice(1)) {
