@@ -11,13 +11,14 @@
 // its unit vector lies in A_u's row space; a reading is redundant when its
 // column of B is not zero.
 //
-// Both steps use singular value decompositions (ml-matrix), which reveal rank
-// where QR without pivoting would not. With G = B D (D = diag sigma),
+// Both steps use rank-revealing decompositions from ml-matrix (an
+// eigendecomposition of A_u A_u', a singular value decomposition of G), where
+// QR without pivoting would not reveal rank. With G = B D (D = diag sigma),
 // Pi = G+ G projects onto G's row space and every result is a product of it:
 // adjustments a = -D Pi (y / sigma), cov(a) = D Pi D, the global statistic
 // w' Pi w (w = y / sigma) with rank(G) degrees of freedom, and the
 // reconciled covariance D (I - Pi) D.
-import { Matrix, SingularValueDecomposition } from 'ml-matrix';
+import { EigenvalueDecomposition, Matrix, SingularValueDecomposition } from 'ml-matrix';
 
 /** A balance as sparse coefficients over variable indices. */
 export interface BalanceRow {
@@ -66,7 +67,7 @@ export interface LinearResult {
   dof: number;
 }
 
-/** Relative size below which a singular value counts as zero. */
+/** Relative size below which a singular value (or eigenvalue of A_u A_u') counts as zero. */
 const RANK_TOLERANCE = 1e-10;
 
 export function reconcileLinear(problem: LinearProblem): LinearResult {
@@ -89,14 +90,18 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
   const p = problem.readings.length;
   const k = unmeasured.length;
 
-  // A_u' padded with zero rows so that it has at least as many rows as
-  // columns: its SVD then gives every left null vector of A_u (V is m x m).
-  const tallRows = Math.max(k, m);
-  const unmeasuredT = Matrix.zeros(tallRows, m);
+  // A_u A_u' (m x m) from A_u's sparse columns. Its eigenvectors are A_u's left
+  // singular vectors and its eigenvalues their squared singular values: the
+  // symmetric eigensolver is several times faster than a full SVD of A_u, and a
+  // balance matrix of +-1 entries is far from the precision squaring loses.
+  const columns = new Map<number, [number, number][]>(); // unmeasured -> (row, coefficient)
   problem.balances.forEach((row, i) => {
     for (const [variable, coefficient] of row.terms) {
       const u = unmeasuredIndex.get(variable);
-      if (u !== undefined) unmeasuredT.set(u, i, unmeasuredT.get(u, i) + coefficient);
+      if (u === undefined || coefficient === 0) continue;
+      const list = columns.get(u) ?? [];
+      list.push([i, coefficient]);
+      columns.set(u, list);
     }
   });
   let projector: Matrix; // rows: basis of A_u's left null space, (m - r) x m
@@ -109,14 +114,34 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
   } else if (k === 0) {
     projector = Matrix.eye(m);
   } else {
-    const svd = new SingularValueDecomposition(unmeasuredT, { autoTranspose: false });
-    values = svd.diagonal;
-    const largest = Math.max(...values, 0);
-    rank = values.filter((value) => value > RANK_TOLERANCE * Math.max(1, largest) * Math.max(k, m)).length;
-    const right = svd.rightSingularVectors; // m x m
-    projector = rank < m ? right.subMatrix(0, m - 1, rank, m - 1).transpose() : Matrix.zeros(0, m);
-    leftVectors = right;
-    rowSpace = rank > 0 ? svd.leftSingularVectors.subMatrix(0, k - 1, 0, rank - 1) : null;
+    const normal = Matrix.zeros(m, m);
+    for (const list of columns.values()) {
+      for (const [a, ca] of list) for (const [b, cb] of list) normal.set(a, b, normal.get(a, b) + ca * cb);
+    }
+    const eigen = new EigenvalueDecomposition(normal, { assumeSymmetric: true });
+    const order = eigen.realEigenvalues.map((value, index) => ({ value, index })).sort((a, b) => b.value - a.value);
+    const largest = Math.max(order[0]?.value ?? 0, 0);
+    rank = order.filter(({ value }) => value > RANK_TOLERANCE * Math.max(1, largest) * m).length;
+    const vectors = eigen.eigenvectorMatrix;
+    const sorted = Matrix.zeros(m, m);
+    order.forEach(({ index }, c) => {
+      for (let i = 0; i < m; i++) sorted.set(i, c, vectors.get(i, index));
+    });
+    values = order.slice(0, rank).map(({ value }) => Math.sqrt(value));
+    projector = rank < m ? new Matrix(sorted.subMatrix(0, m - 1, rank, m - 1).transpose()) : Matrix.zeros(0, m);
+    leftVectors = sorted;
+    if (rank > 0) {
+      // Right singular vectors: U_r = A_u' V_r S_r^-1.
+      const basisOfRows = new Matrix(k, rank);
+      for (const [u, list] of columns) {
+        for (let c = 0; c < rank; c++) {
+          let sum = 0;
+          for (const [i, coefficient] of list) sum += coefficient * sorted.get(i, c);
+          basisOfRows.set(u, c, sum / values[c]);
+        }
+      }
+      rowSpace = basisOfRows;
+    }
   }
 
   // B = P A_x, written from A_x's sparse columns.
@@ -206,26 +231,34 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
       const inverse = 1 / values[c];
       for (let x = 0; x < p; x++) vtAx.set(c, x, vtAx.get(c, x) * inverse * sigma[x]); // S^-1 V' A_x D
     }
-    const gain = rowSpace.mmul(vtAx); // K D, k x p
     const reconciledScaled = readings.map((result, x) => result.reconciled / sigma[x]);
+    const vtRows = vtAx.to2DArray();
+    const gainRow = new Float64Array(p); // (K D)_u, only for observable u
     for (let u = 0; u < k; u++) {
       let inRowSpace = 0;
       for (let c = 0; c < rank; c++) inRowSpace += rowSpace.get(u, c) ** 2;
       const variable = unmeasured[u];
       if (inRowSpace < 1 - 1e-8) continue;
       observable[variable] = true;
+      gainRow.fill(0);
+      for (let c = 0; c < rank; c++) {
+        const weight = rowSpace.get(u, c);
+        if (weight === 0) continue;
+        const row = vtRows[c];
+        for (let x = 0; x < p; x++) gainRow[x] += weight * row[x];
+      }
       let value = 0;
       let total = 0;
       for (let x = 0; x < p; x++) {
-        value -= gain.get(u, x) * reconciledScaled[x];
-        total += gain.get(u, x) ** 2;
+        value -= gainRow[x] * reconciledScaled[x];
+        total += gainRow[x] ** 2;
       }
       // var = |(K D)_u|^2 - |(K D)_u Basis|^2: cov of the reconciled readings is D (I - Pi) D.
       let projected = 0;
       if (basis) {
         for (let c = 0; c < dof; c++) {
           let dot = 0;
-          for (let x = 0; x < p; x++) dot += gain.get(u, x) * basis.get(x, c);
+          for (let x = 0; x < p; x++) dot += gainRow[x] * basis.get(x, c);
           projected += dot * dot;
         }
       }
