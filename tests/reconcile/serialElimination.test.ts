@@ -77,6 +77,7 @@ describe('testReconciliation', () => {
       if (!tested.global.passed) rejected++;
       if (tested.suspects.length > 0) named++;
     }
+    if (process.env.SHOW_RATES) process.stderr.write(`RATE false alarm ${rejected / 1000}\n`);
     expect(rejected / 1000).toBeGreaterThanOrEqual(0.03);
     expect(rejected / 1000).toBeLessThanOrEqual(0.07);
     // Serial elimination only starts when the global test rejects.
@@ -95,6 +96,7 @@ describe('testReconciliation', () => {
         biasTotal += tested.suspects[0].bias;
       }
     }
+    if (process.env.SHOW_RATES) process.stderr.write(`RATE named first ${first / 1000}, mean bias ${biasTotal / first / SIGMA[index]} sigma\n`);
     expect(first / 1000).toBeGreaterThanOrEqual(0.9);
     // The estimated bias is unbiased: its mean over the draws that named the meter is near 5 sigma.
     expectClose(biasTotal / first / SIGMA[index], 5, 0.1, 'mean estimated bias in sigmas');

@@ -76,6 +76,9 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
     const window = { from: args.from === undefined ? null : Date.parse(args.from), to: args.to === undefined ? null : Date.parse(args.to) };
     const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window);
     const readingProblems = parsed.ok ? [] : parsed.issues;
+    if (parsed.ok && !parsed.series && (window.from !== null || window.to !== null)) {
+      throw new CliError(`${args.readings}: --from and --to choose a window of a series, but the file has no time column`, EXIT_PROBLEMS);
+    }
     const readings: Map<string, AveragedReading> = parsed.ok ? parsed.readings : new Map();
     for (const { meter } of metered) {
       const reading = readings.get(meter.tag);
