@@ -76,6 +76,14 @@ describe('steamwright reconcile', () => {
     `);
   });
 
+  test('check finds the same meter problems without readings', async () => {
+    const text = readFileSync(DEMO, 'utf8').replace('{ tag: FT-101, unit: boiler_a,', '{ tag: FT-101, unit: boiler_z,');
+    const dir = workspace(text, '');
+    const result = await runCli(['check', 'plant.yaml'], { cwd: dir });
+    expect(result.code).toBe(1);
+    expect(result.stderr).toMatch(/plant\.yaml:\d+:\d+ +meters\[0\]\.unit +meter FT-101 names "boiler_z"[\s\S]*1 error in the meters/);
+  });
+
   test('bad readings: every row located, nothing reconciled', async () => {
     const readings = ['tag,value,unit', 'FT-101,28.0,', 'FT-201,-3,klb/h', 'FT-999,1,klb/h', 'FT-202,"7.0,klb/h', ''].join('\n');
     const dir = workspace(readFileSync(DEMO, 'utf8'), readings);
