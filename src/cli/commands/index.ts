@@ -7,7 +7,8 @@ import { initCommand } from './init.js';
 import { reportCommand } from './report.js';
 import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
+import { watchCommand } from './watch.js';
 import { reconcileCommand } from './reconcile.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, reportCommand, checkCommand, initCommand, stateCommand, reconcileCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand, reconcileCommand];

@@ -45,8 +45,8 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
         }
         return true;
       })
-      .example('$0 reconcile cases/millbrook-creamery.yaml --readings cases/millbrook-creamery.readings.csv', 'reconcile the demo readings')
-      .example('$0 reconcile cases/mill.yaml --readings day.csv --from 2026-11-02T08:00 --to 2026-11-02T12:00 --write-case mill-measured.yaml', 'average a window and write the measured case') as Argv<ReconcileArgs>,
+      .example('$0 reconcile cases/millbrook-creamery.yaml --readings cases/millbrook-creamery.readings.csv', 'the demo readings')
+      .example('$0 reconcile cases/millbrook-creamery.yaml --readings day.csv --write-case measured.yaml', 'and a measured case') as Argv<ReconcileArgs>,
   handler: async (args) => {
     const requests: OutputRequest[] = [];
     const toStdout = (path: string): boolean => path === '' || path === '-';
