@@ -27,6 +27,7 @@ export interface CaseFile {
   scenarios?: ScenarioEntry[];
   projects?: ProjectEntry[];
   sweeps?: SweepEntry[];
+  meters?: MeterEntry[];
 }
 
 /** Changes to one listed item, matched by id; its other keys are checked after merging. */
@@ -318,4 +319,14 @@ export interface SolverEntry {
   time_limit_seconds?: number;
   max_passes?: number;
   enthalpy_tolerance?: QuantityText;
+}
+
+export interface MeterEntry {
+  tag: string;
+  name?: string;
+  unit: string;
+  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
+  to?: string;
+  uncertainty: QuantityText;
+  confidence?: QuantityText;
 }

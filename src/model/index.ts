@@ -10,3 +10,4 @@ export { schemaFilePath } from './schemaLocation.js';
 export type * from './variantTypes.js';
 export { HOURS_PER_YEAR } from './variantTypes.js';
 export { parseMoney, parseYears } from './money.js';
+export { resolveMeters, type Meter, type MeteredFlow } from './resolveMeters.js';

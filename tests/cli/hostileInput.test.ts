@@ -58,6 +58,12 @@ function workspace(): string {
   const deep = `${'['.repeat(20_000)}${']'.repeat(20_000)}`;
   const lines = ['{"p":"3 MPa","T":"300 K"}', deep, `{"p":"3 MPa","T":"300\rK"}`, 'x'.repeat(100_000), '{"p":"[[[[","T":"300 K"}', '{"p":"3 MPa","T":"400 K"}\r'];
   writeFileSync(join(dir, 'batch.jsonl'), `${lines.join('\n')}\n`);
+  // reconcile: the Millbrook demo with its meters, a meter on no stream, and readings with bad rows.
+  const metered = readFileSync(join(projectRoot, 'cases', 'millbrook-creamery.yaml'), 'utf8');
+  writeFileSync(join(dir, 'm.yaml'), metered);
+  writeFileSync(join(dir, 'm-bad.yaml'), metered.replace('{ tag: FT-101, unit: boiler_a,', '{ tag: FT-101, unit: boiler_z,'));
+  writeFileSync(join(dir, 'r.csv'), 'tag,value,unit\nFT-101,28.0,\nFT-201,-3,klb/h\nFT-202,"7.0,klb/h\n');
+  writeFileSync(join(dir, 'r-good.csv'), readFileSync(join(projectRoot, 'cases', 'millbrook-creamery.readings.csv'), 'utf8'));
   return dir;
 }
 
@@ -133,6 +139,11 @@ const cases: HostileCase[] = [
   { title: 'solve: an empty --export-lp', args: ['solve', 'c.yaml', '--export-lp', ''], code: 2, says: /--export-lp needs a value, found an empty one/, oneLine: true },
   { title: 'compare: an empty --scenarios', args: ['compare', 'c.yaml', '--scenarios', ''], code: 2, says: /--scenarios needs a value, found an empty one/, oneLine: true },
   { title: 'state: an empty --p', args: ['state', '--p', '', '--T', '300 K'], code: 2, says: /--p needs a value/, oneLine: true },
+  { title: 'reconcile: a meter that names no stream', args: ['reconcile', 'm-bad.yaml', '--readings', 'r-good.csv'], code: 1, says: /m-bad\.yaml:\d+:\d+ +meters\[0\]\.unit +meter FT-101 names "boiler_z"[\s\S]*nothing was reconciled/ },
+  { title: 'reconcile: readings with no unit, a negative flow and a row that does not parse', args: ['reconcile', 'm.yaml', '--readings', 'r.csv'], code: 1, says: /r\.csv:2: reading of FT-101 has no unit[\s\S]*r\.csv:3: .*negative[\s\S]*r\.csv:4: the row does not parse as CSV/ },
+  { title: 'reconcile: --write-case over the readings', args: ['reconcile', 'm.yaml', '--readings', 'r-good.csv', '--write-case', 'r-good.csv'], code: 2, says: /--write-case/, oneLine: true },
+  { title: 'reconcile: a level of significance of 0', args: ['reconcile', 'm.yaml', '--readings', 'r-good.csv', '--level', '0'], code: 2, says: /--level: expected a level of significance above 0/, oneLine: true },
+  { title: 'reconcile: a case without meters', args: ['reconcile', 'c.yaml', '--readings', 'r-good.csv'], code: 1, says: /the case has no meters/, oneLine: true },
 ];
 
 describe('every command under hostile input', () => {

@@ -1,6 +1,9 @@
 // `steamwright check CASE`: every issue of a case file, or a summary of the plant.
 import type { Argv, CommandModule } from 'yargs';
-import { formatIssue, loadCase, summarisePlant } from '../../model/index.js';
+import { readFile } from 'node:fs/promises';
+import { formatIssue, loadCase, resolveMeters, summarisePlant } from '../../model/index.js';
+import { streamNetwork } from '../../plant/index.js';
+import { meterStreams } from '../../reconcile/index.js';
 import { EXIT_PROBLEMS } from '../errors.js';
 
 interface CheckArgs {
@@ -30,6 +33,15 @@ export const checkCommand: CommandModule<object, CheckArgs> = {
     const warnings = issues.length - errors;
     if (!result.ok) {
       process.stderr.write(`${fileName}: ${plural(errors, 'error')}, ${plural(warnings, 'warning')}\n`);
+      process.exitCode = EXIT_PROBLEMS;
+      return;
+    }
+    // Meters are checked against the plant's streams, as reconcile would.
+    const meters = resolveMeters(await readFile(fileName, 'utf8'));
+    const meterIssues = [...meters.issues, ...(meters.meters.length > 0 ? meterStreams(meters.meters, streamNetwork(result.plant)).issues : [])].sort((a, b) => a.line - b.line);
+    if (meterIssues.length > 0) {
+      for (const issue of meterIssues) process.stderr.write(`${formatIssue(issue, fileName)}\n`);
+      process.stderr.write(`${fileName}: ${plural(meterIssues.length, 'error')} in the meters, ${plural(warnings, 'warning')}\n`);
       process.exitCode = EXIT_PROBLEMS;
       return;
     }

@@ -8,6 +8,7 @@ import { reportCommand } from './report.js';
 import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
 import { watchCommand } from './watch.js';
+import { reconcileCommand } from './reconcile.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand, reconcileCommand];

@@ -1,0 +1,86 @@
+// The case's flow meters, read with their positions so that a meter naming no
+// stream can be located by the reconciliation (which knows the streams).
+import type { CasePath, Issue } from './issue.js';
+import { makeIssue, parseYaml } from './yamlSource.js';
+import { ResolveContext } from './resolveContext.js';
+
+export type MeteredFlow = 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
+
+export interface Meter {
+  tag: string;
+  name: string;
+  /** unit, header, flash tank or deaerator whose stream it measures */
+  unit: string;
+  measures: MeteredFlow;
+  /** the stream's other end, where the unit has several of that kind */
+  to: string | null;
+  /** expanded uncertainty as a fraction of the reading, or null */
+  relativeUncertainty: number | null;
+  /** expanded uncertainty as a flow, kg/s, or null */
+  absoluteUncertainty: number | null;
+  /** two-sided confidence of the stated uncertainty, e.g. 0.95 */
+  confidence: number;
+  /** where the meter is in the case */
+  path: CasePath;
+  /** an issue located at one of the meter's keys */
+  issueAt(key: string, code: string, message: string): Issue;
+}
+
+/**
+ * The meters of a case's text (the case itself loaded without errors first;
+ * the schema has checked their shape). Issues: a duplicate tag, an
+ * uncertainty of zero or below, a confidence outside (0 %, 100 %).
+ */
+export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] } {
+  const parsed = parseYaml(text);
+  if (!parsed.ok) return { meters: [], issues: parsed.issues };
+  const source = parsed.source;
+  const context = new ResolveContext(source);
+  const meters: Meter[] = [];
+  const tags = new Map<string, CasePath>();
+  for (const { item, path } of context.entries(['meters'])) {
+    const tag = typeof item.tag === 'string' ? item.tag : '';
+    const unit = typeof item.unit === 'string' ? item.unit : '';
+    if (tags.has(tag)) {
+      context.error('duplicate-tag', [...path, 'tag'], `meter tag "${tag}" is used twice; each meter needs its own tag`);
+      continue;
+    }
+    tags.set(tag, path);
+    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty']);
+    let confidence = 0.95;
+    if (item.confidence !== undefined) {
+      const value = context.quantity([...path, 'confidence'], 'percent');
+      if (value !== undefined && (value <= 0 || value >= 1)) {
+        context.error('percent-range', [...path, 'confidence'], `expected a confidence above 0 % and below 100 %, found "${context.text([...path, 'confidence'])}"`);
+      } else if (value !== undefined) {
+        confidence = value;
+      }
+    }
+    if (!uncertainty) continue;
+    meters.push({
+      tag,
+      name: typeof item.name === 'string' ? item.name : tag,
+      unit,
+      measures: item.measures as MeteredFlow,
+      to: typeof item.to === 'string' ? item.to : null,
+      ...uncertainty,
+      confidence,
+      path,
+      issueAt: (key, code, message) => makeIssue(source, 'error', code, [...path, key], message),
+    });
+  }
+  return { meters, issues: context.issues };
+}
+
+function uncertaintyOf(context: ResolveContext, path: CasePath): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
+  const text = context.text(path);
+  if (text === undefined) return null;
+  const relative = /%\s*$/.test(text);
+  const value = context.quantity(path, relative ? 'percent' : 'massFlow');
+  if (value === undefined) return null;
+  if (!(value > 0)) {
+    context.error('uncertainty-not-positive', path, `expected an uncertainty above zero (such as "2 %" or "0.5 t/h"), found "${text}"`);
+    return null;
+  }
+  return relative ? { relativeUncertainty: value, absoluteUncertainty: null } : { relativeUncertainty: null, absoluteUncertainty: value };
+}

@@ -1,0 +1,72 @@
+// The plant's streams as a flow network for meter reconciliation: every
+// stream one edge, every header, flash tank, the deaerator and every unit that
+// conserves mass one node, and the terminals (atmosphere, drain, makeup,
+// process) together one environment node that is not balanced.
+import type { Plant } from '../model/index.js';
+import { buildPass } from './buildPass.js';
+import { contributionsOf } from './contributions.js';
+import { ATMOSPHERE, DRAIN, MAKEUP, PROCESS, type StreamKind } from './network.js';
+import { initialHeaderEnthalpy } from './solvePlant.js';
+
+export const ENVIRONMENT = 'environment';
+
+export interface NetworkStream {
+  /** `from->to:kind`, with a count where two streams share it */
+  id: string;
+  from: string;
+  to: string;
+  kind: StreamKind;
+  /** pressure the stream is at, MPa */
+  p: number;
+  /** specific enthalpy at the design point, kJ/kg */
+  h: number;
+}
+
+export interface StreamNetwork {
+  streams: NetworkStream[];
+  /** nodes whose mass balance holds: headers, flash tanks, the deaerator, units */
+  nodes: string[];
+  /** units whose streams do not conserve mass in the model (taken as open to the environment) */
+  openUnits: string[];
+}
+
+const TERMINALS = new Set([ATMOSPHERE, DRAIN, MAKEUP, PROCESS]);
+
+/** The streams of the plant's first pass (no solve needed: the topology does not depend on the point). */
+export function streamNetwork(plant: Plant): StreamNetwork {
+  const pass = buildPass(plant, contributionsOf(plant), { headerEnthalpy: initialHeaderEnthalpy(plant), previous: null, trust: new Map() }, plant.objective);
+  const context = pass.context;
+  const balance = new Set(context.nodes.keys());
+  const seen = new Map<string, number>();
+  const streams: NetworkStream[] = context.streams.map((stream) => {
+    const base = `${stream.from}->${stream.to}:${stream.kind}`;
+    const count = (seen.get(base) ?? 0) + 1;
+    seen.set(base, count);
+    return { id: count === 1 ? base : `${base}#${count}`, from: TERMINALS.has(stream.from) ? ENVIRONMENT : stream.from, to: TERMINALS.has(stream.to) ? ENVIRONMENT : stream.to, kind: stream.kind, p: stream.p, h: stream.h };
+  });
+
+  // A unit conserves mass when its inflows less its outflows vanish term by term.
+  const units = new Set<string>();
+  for (const stream of context.streams) for (const end of [stream.from, stream.to]) if (!TERMINALS.has(end) && !balance.has(end)) units.add(end);
+  const nodes = [...balance];
+  const openUnits: string[] = [];
+  for (const unit of units) {
+    const net = new Map<unknown, number>();
+    let constant = 0;
+    let scale = 0;
+    for (const stream of context.streams) {
+      const sign = stream.to === unit ? 1 : stream.from === unit ? -1 : 0;
+      if (sign === 0) continue;
+      for (const [variable, coefficient] of stream.flow.terms) {
+        net.set(variable, (net.get(variable) ?? 0) + sign * coefficient);
+        scale = Math.max(scale, Math.abs(coefficient));
+      }
+      constant += sign * stream.flow.constant;
+      scale = Math.max(scale, Math.abs(stream.flow.constant));
+    }
+    const residual = Math.max(Math.abs(constant), ...[...net.values()].map(Math.abs));
+    if (residual <= 1e-9 * Math.max(1, scale)) nodes.push(unit);
+    else openUnits.push(unit);
+  }
+  return { streams, nodes, openUnits };
+}

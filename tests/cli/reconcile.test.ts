@@ -1,0 +1,145 @@
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { describe, expect, test } from 'vitest';
+import { parse } from 'yaml';
+import { runCli, projectRoot } from '../helpers/cli.js';
+
+/** A stack frame as V8 prints it (the same pattern as hostileInput.test.ts). */
+const STACK_FRAME = /^\s+at .*(\(.*:\d+:\d+\)|:\d+:\d+)$/m;
+
+const DEMO = join(projectRoot, 'cases', 'millbrook-creamery.yaml');
+const READINGS = join(projectRoot, 'cases', 'millbrook-creamery.readings.csv');
+
+function workspace(caseText: string, readings: string): string {
+  const dir = mkdtempSync(join(tmpdir(), 'steamwright-reconcile-'));
+  writeFileSync(join(dir, 'plant.yaml'), caseText);
+  writeFileSync(join(dir, 'readings.csv'), readings);
+  return dir;
+}
+
+describe('steamwright reconcile', () => {
+  test('the demo: the global test rejects and serial elimination names the turbine inlet meter', async () => {
+    const result = await runCli(['reconcile', DEMO, '--readings', READINGS]);
+    expect(result.code).toBe(0);
+    expect(result.stdout).toMatch(/Global test: chi-square [\d.]+ on 3 degrees of freedom, critical 7\.81 at 5 %: rejected/);
+    expect(result.stdout).toMatch(/ 1 {2}FT-111 /);
+    expect(result.stdout).toMatch(/Not redundant, so not checked by any balance: FT-103, /);
+    expect(result.stdout).toMatch(/ASME|licensed engineers/);
+  });
+
+  test('--json and --csv carry every reading with its statistic', async () => {
+    const json = await runCli(['reconcile', DEMO, '--readings', READINGS, '--json']);
+    expect(json.code).toBe(0);
+    const outcome = JSON.parse(json.stdout) as { meters: { tag: string; statistic: number | null; redundant: boolean }[]; suspects: { tag: string; bias: number }[]; global: { dof: number } };
+    expect(outcome.meters).toHaveLength(18);
+    expect(outcome.suspects[0].tag).toBe('FT-111');
+    // The demo's turbine inlet reading is 15 % above the flow its readings file was drawn from (12.29 klb/h, invented).
+    expect(outcome.suspects[0].bias * 3.6 / 0.45359237).toBeGreaterThan(1.0);
+    const csv = await runCli(['reconcile', DEMO, '--readings', READINGS, '--csv']);
+    expect(csv.code).toBe(0);
+    expect(csv.stdout.split('\r\n')[0]).toBe('table,tag,stream,measured_kg_s,sigma_kg_s,reconciled_kg_s,reconciled_sigma_kg_s,adjustment_kg_s,adjustment_sigma_kg_s,redundant,statistic,flagged,suspect_rank,bias_kg_s,bias_sigma_kg_s,equivalent');
+    expect(csv.stdout).toMatch(/\r\nreading,FT-111,hp->bptg:steam,/);
+  });
+
+  test('--write-case writes a case that solves, its users at the reconciled steam', async () => {
+    const dir = workspace(readFileSync(DEMO, 'utf8'), readFileSync(READINGS, 'utf8'));
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv', '--write-case', 'measured.yaml'], { cwd: dir });
+    expect(result.code).toBe(0);
+    expect(result.stdout).toMatch(/Wrote measured\.yaml: 5 users at reconciled steam/);
+    const written = readFileSync(join(dir, 'measured.yaml'), 'utf8');
+    const users = (parse(written) as { users: { id: string; steam?: string; heat?: string }[] }).users;
+    // The evaporator was given by its duty; it now draws its reconciled steam.
+    expect(users.find((user) => user.id === 'evaporator')).toMatchObject({ steam: expect.stringMatching(/^[\d.]+ klb\/h$/) });
+    expect(users.find((user) => user.id === 'evaporator')?.heat).toBeUndefined();
+    const solved = await runCli(['solve', 'measured.yaml'], { cwd: dir });
+    expect(solved.stderr).toBe('');
+    expect(solved.code).toBe(0);
+  });
+
+  test('bad meters in the case: every one located, nothing reconciled', async () => {
+    const text = readFileSync(DEMO, 'utf8')
+      .replace('{ tag: FT-101, unit: boiler_a,', '{ tag: FT-101, unit: boiler_z,')
+      .replace('{ tag: FT-201, unit: pasteurisers, measures: steam, uncertainty: 3 % }', '{ tag: FT-201, unit: pasteurisers, measures: steam, uncertainty: 0 % }')
+      .replace('{ tag: FT-303, unit: direct_injection, measures: steam,', '{ tag: FT-303, unit: direct_injection, measures: spray,');
+    const dir = workspace(text, readFileSync(READINGS, 'utf8'));
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: dir });
+    expect(result.code).toBe(1);
+    expect(result.stdout).toBe('');
+    expect(result.stderr).not.toMatch(STACK_FRAME);
+    expect(result.stderr).toMatchInlineSnapshot(`
+      "plant.yaml:205:26  meters[0].unit  meter FT-101 names "boiler_z", which no stream of the plant starts or ends at; expected the id of a unit, header, flash tank or "deaerator"
+      plant.yaml:212:70  meters[7].uncertainty  expected an uncertainty above zero (such as "2 %" or "0.5 t/h"), found "0 %"
+      plant.yaml:216:54  meters[11].measures  meter FT-303: direct_injection has no spray stream; its streams are process from lp, condensate to environment
+      steamwright: plant.yaml: 3 errors in the meters; nothing was reconciled
+      "
+    `);
+  });
+
+  test('check finds the same meter problems without readings', async () => {
+    const text = readFileSync(DEMO, 'utf8').replace('{ tag: FT-101, unit: boiler_a,', '{ tag: FT-101, unit: boiler_z,');
+    const dir = workspace(text, '');
+    const result = await runCli(['check', 'plant.yaml'], { cwd: dir });
+    expect(result.code).toBe(1);
+    expect(result.stderr).toMatch(/plant\.yaml:\d+:\d+ +meters\[0\]\.unit +meter FT-101 names "boiler_z"[\s\S]*1 error in the meters/);
+  });
+
+  test('bad readings: every row located, nothing reconciled', async () => {
+    const readings = ['tag,value,unit', 'FT-101,28.0,', 'FT-201,-3,klb/h', 'FT-999,1,klb/h', 'FT-202,"7.0,klb/h', ''].join('\n');
+    const dir = workspace(readFileSync(DEMO, 'utf8'), readings);
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: dir });
+    expect(result.code).toBe(1);
+    expect(result.stderr).not.toMatch(STACK_FRAME);
+    expect(result.stderr).toMatchInlineSnapshot(`
+      "readings.csv:2: reading of FT-101 has no unit; expected a mass flow unit such as t/h, kg/s or klb/h, found "28.0"
+      readings.csv:3: unit of FT-201: "-3 klb/h" is negative; a mass flow cannot be below zero
+      readings.csv:4: tag "FT-999" is not a meter of the case
+      readings.csv:5: the row does not parse as CSV (Quote Not Closed: the parsing is finished with an opening quote at line 5)
+      steamwright: readings.csv: 4 errors; nothing was reconciled
+      "
+    `);
+  });
+
+  test('a row with too few fields, a bad number and a unit that is no flow', async () => {
+    const readings = ['tag,value,unit', 'FT-101,28.0', 'FT-201,nine,klb/h', 'FT-202,7,barg', 'FT-301,5.7,klb/h', 'FT-301,5.8,klb/h', ''].join('\n');
+    const dir = workspace(readFileSync(DEMO, 'utf8'), readings);
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: dir });
+    expect(result.code).toBe(1);
+    expect(result.stderr).toMatchInlineSnapshot(`
+      "readings.csv:2: expected 3 fields (tag, value, unit), found 2
+      readings.csv:3: value of FT-201: expected a number, found "nine"
+      readings.csv:4: unit of FT-202: "7 barg" is a pressure, not a mass flow; expected one of kg/s, kg/min, kg/h, t/h, t/d, lb/s, lb/min, lb/h, klb/h
+      readings.csv:6: tag FT-301 is read twice (first on line 5); a snapshot has one row per tag, a series needs a time column
+      steamwright: readings.csv: 4 errors; nothing was reconciled
+      "
+    `);
+  });
+
+  test('a time series: averaged, and a drifting meter is reported', async () => {
+    const base = readFileSync(READINGS, 'utf8').split('\n').filter((line) => /^FT-/.test(line));
+    const rows = ['time,tag,value,unit'];
+    for (let hour = 8; hour < 12; hour++) {
+      for (const line of base) {
+        const [tag, value, unit] = line.split(',');
+        // FT-301 climbs 10 % over the window; the others hold.
+        const drift = tag === 'FT-301' ? 1 + 0.033 * (hour - 8) : 1;
+        rows.push(`2026-11-02T${String(hour).padStart(2, '0')}:00,${tag},${(Number(value) * drift).toFixed(3)},${unit}`);
+      }
+    }
+    const dir = workspace(readFileSync(DEMO, 'utf8'), `${rows.join('\n')}\n`);
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv', '--json'], { cwd: dir });
+    expect(result.code).toBe(0);
+    const outcome = JSON.parse(result.stdout) as { meters: { tag: string; count: number; unsteady: boolean }[]; notes: string[] };
+    expect(outcome.meters.find((meter) => meter.tag === 'FT-301')).toMatchObject({ count: 4, unsteady: true });
+    expect(outcome.meters.filter((meter) => meter.unsteady).map((meter) => meter.tag)).toEqual(['FT-301']);
+    expect(outcome.notes.join('\n')).toMatch(/FT-301 drifted .* the window may not be steady/);
+    const windowed = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv', '--json', '--from', '2026-11-02T10:00', '--to', '2026-11-02T11:00'], { cwd: dir });
+    expect((JSON.parse(windowed.stdout) as { meters: { count: number }[] }).meters[0].count).toBe(2);
+  });
+
+  test('a case without meters says how to add them', async () => {
+    const result = await runCli(['reconcile', join(projectRoot, 'cases', 'kestrel-bay-board-mill.yaml'), '--readings', READINGS]);
+    expect(result.code).toBe(1);
+    expect(result.stderr).toMatch(/the case has no meters; add a "meters:" list/);
+  });
+});
