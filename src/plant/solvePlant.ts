@@ -33,12 +33,20 @@ export interface SolvePlantOptions {
   maxFlips?: number;
   /** measure each header's one-more and one-less values by re-solving (default true) */
   probeMarginalValues?: boolean;
+  /**
+   * A neighbouring solve's integer decisions and converged point (the hour
+   * before, in a year): converged from first with those decisions held, and
+   * kept without the cold first pass and the flips when the MIP at its
+   * converged point, every integer free, finds nothing cheaper. Otherwise the
+   * full search runs, with the neighbour's decisions as one candidate.
+   */
+  neighbour?: { commitment: ReadonlyMap<string, number>; start: PassPoint };
 }
 
 /** One set of on/off decisions tried, converged on its own, and its converged objective. */
 export interface CommitmentTried {
   /** where the candidate came from */
-  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip' | 'boiler swap';
+  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip' | 'boiler swap' | 'neighbour';
   /** on/off of every switchable unit, 1 running */
   onOff: Record<string, number>;
   /** converged objective; null when it could not be met or did not settle */
@@ -86,6 +94,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   };
   let passes: PassRecord[] = [];
   try {
+    const quick = options.neighbour ? await fromNeighbour(settings, options.neighbour) : null;
+    if (quick) return await finishSolve(settings, options, quick, [{ source: 'neighbour', onOff: Object.fromEntries(onOffOf(quick.integers)), objective: quick.result.objective ?? null, note: null, kept: true }]);
     const first = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), null);
     passes = first.passes;
     if (!first.ok) {
@@ -95,7 +105,47 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       }
       return { ok: false, plant, reason: first.reason, message: first.message, passes };
     }
-    const { best, tried } = await chooseCommitment(settings, first, options);
+    const fallback = options.neighbour && !options.commitment ? { ...options, commitment: options.neighbour.commitment, start: options.neighbour.start } : options;
+    const { best, tried } = await chooseCommitment(settings, first, fallback);
+    return await finishSolve(settings, options, best, tried);
+  } catch (error) {
+    if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
+    // A state the loop reached outside IF97 (a flow driven to an extreme enthalpy, say) is the case's physics too.
+    if (error instanceof PropertyRangeError) return { ok: false, plant, reason: 'physics', message: `a steam state left the range of IF97 while solving: ${error.message}`, passes };
+    throw error;
+  }
+}
+
+/**
+ * The neighbour's decisions converged from its point, kept when the MIP at
+ * the converged point (every integer free) is no cheaper beyond its gap; null
+ * when they cannot be met, do not settle, or the MIP finds better.
+ */
+async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<Converged | null> {
+  const { plant, objective, backend } = settings;
+  let converged: Converged | NotConverged;
+  try {
+    converged = await converge(settings, contributionsOf(plant), neighbour.start, neighbour.commitment);
+  } catch (error) {
+    if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) return null;
+    throw error;
+  }
+  if (!converged.ok) return null;
+  const check = buildPass(plant, contributionsOf(plant), converged.point, objective);
+  if (!check.context.model.isMip) return converged;
+  const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
+  if (confirmed.status !== 'optimal' || confirmed.objective === null || converged.result.objective === null) return null;
+  const held = converged.result.objective;
+  // The MIP's own gap bounds how far below its incumbent the optimum can lie.
+  const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
+  const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
+  return better ? null : converged;
+}
+
+/** The kept decisions turned into the outcome: marginal values, the kept pass rebuilt, both audits. */
+async function finishSolve(settings: LoopSettings, options: SolvePlantOptions, best: Converged, tried: CommitmentTried[]): Promise<PlantOutcome> {
+  const { plant, objective, backend } = settings;
+  try {
     const probe = options.probeMarginalValues ?? true;
     const values = probe ? await marginalValues(settings, best) : [];
     // The kept pass is built once more, last, so that every unit's report reads
@@ -134,6 +184,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       start,
     };
   } catch (error) {
+    const passes = best.passes;
     if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
     // A state the loop reached outside IF97 (a flow driven to an extreme enthalpy, say) is the case's physics too.
     if (error instanceof PropertyRangeError) return { ok: false, plant, reason: 'physics', message: `a steam state left the range of IF97 while solving: ${error.message}`, passes };
