@@ -10,3 +10,5 @@ export { schemaFilePath } from './schemaLocation.js';
 export type * from './variantTypes.js';
 export { HOURS_PER_YEAR } from './variantTypes.js';
 export { parseMoney, parseYears } from './money.js';
+export { PHYSICAL_RANGES } from './physicalRanges.js';
+export { MOST_PROFILE_HOURS } from './resolveProfile.js';
