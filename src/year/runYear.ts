@@ -34,6 +34,8 @@ export interface YearInput {
   profileFile: string;
   objective?: Objective;
   backend?: BackendName;
+  /** periods per block (default a week of hours); part of the inputs, since a block starts cold */
+  blockPeriods?: number;
 }
 
 /** A shard: the Kth (1-based) of N slices of the blocks. */
@@ -53,14 +55,14 @@ export function yearMeta(input: YearInput): YearMeta {
     mode: 'independent periods',
     mode_note: 'no unit declares a start-up cost or minimum up or down times, so each period is its own optimum; starts are counted from the solved on/off choices',
     profile: { file: input.profileFile, kind: input.profile.kind, periods: input.profile.labels.length, columns: input.profile.columns.map((column) => column.name) },
-    block_periods: BLOCK_PERIODS,
+    block_periods: input.blockPeriods ?? BLOCK_PERIODS,
   };
 }
 
 /** Identifies the inputs of a year exactly: parts merge only with parts of the same inputs. */
 export function yearFingerprint(input: YearInput): string {
   const hash = createHash('sha256');
-  hash.update(JSON.stringify({ plant: input.plant, objective: input.objective ?? null, backend: input.backend ?? 'highs', columns: input.profile.columns, labels: input.profile.labels }));
+  hash.update(JSON.stringify({ plant: input.plant, objective: input.objective ?? null, backend: input.backend ?? 'highs', blockPeriods: input.blockPeriods ?? BLOCK_PERIODS, columns: input.profile.columns, labels: input.profile.labels }));
   hash.update(new Uint8Array(input.profile.values.buffer, input.profile.values.byteOffset, input.profile.values.byteLength));
   hash.update(new Uint8Array(input.profile.hours.buffer, input.profile.hours.byteOffset, input.profile.hours.byteLength));
   hash.update(input.profile.months);
@@ -83,7 +85,7 @@ export function totalsOf(plant: Plant, periods: number, records: Iterable<Period
  * arrive; records are kept only when asked (for a per-period CSV or a part file).
  */
 export async function runYear(input: YearInput, options: YearRunOptions & { keepRecords?: boolean; shard?: Shard } = {}): Promise<{ result: YearResult | null; records: PeriodRecord[] | null }> {
-  const tasks = blockTasks(input.profile);
+  const tasks = blockTasks(input.profile, input.blockPeriods ?? BLOCK_PERIODS);
   const chosen = options.shard ? tasks.slice(shardBlocks(tasks.length, options.shard).first, shardBlocks(tasks.length, options.shard).end) : tasks;
   const accumulator = options.shard ? null : new YearAccumulator(input.plant, input.profile.labels.length);
   const records: PeriodRecord[] | null = options.keepRecords || options.shard ? [] : null;
