@@ -145,6 +145,9 @@ export function readProfile(plant: Plant, text: string, file: string, reference:
     profile.lines[index] = line;
     if (record.length !== header.length) {
       at(line, 0, `expected ${header.length} cells as in the header row, found ${record.length}`);
+      // Its hour still counts for the row below, so one short row is one problem, not two.
+      const hour = hourly ? hourOf(record[special.get('timestamp')!] ?? '') : null;
+      previousHour = hour ? { ms: hour.ms, line } : null;
       continue;
     }
     if (hourly) {
