@@ -117,15 +117,17 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
 }
 
 /**
- * The neighbour's decisions converged from its point, kept when the MIP at
- * the converged point (every integer free) is no cheaper beyond its gap; null
- * when they cannot be met, do not settle, or the MIP finds better.
+ * The neighbour's on/off decisions converged from its point (load segments
+ * decided afresh), kept when the MIP at the converged point (every integer
+ * free) is no cheaper beyond its gap and chooses the same on/off; null when
+ * they cannot be met, do not settle, or the MIP would choose otherwise.
  */
 async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<Converged | null> {
   const { plant, objective, backend } = settings;
   let converged: Converged | NotConverged;
   try {
-    converged = await converge(settings, contributionsOf(plant), neighbour.start, neighbour.commitment);
+    // Only its on/off choices are held: the load segments of non-convex fuel curves follow the new loads.
+    converged = await converge(settings, contributionsOf(plant), neighbour.start, onOffOf(neighbour.commitment));
   } catch (error) {
     if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) return null;
     throw error;
@@ -139,7 +141,9 @@ async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<Solv
   // The MIP's own gap bounds how far below its incumbent the optimum can lie.
   const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
   const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
-  return better ? null : converged;
+  // Other on/off choices from the MIP, even at no gain on this linearisation, are judged by the full search.
+  const same = keyOf(onOffOf(integerValues(check, confirmed))) === keyOf(onOffOf(converged.integers));
+  return better || !same ? null : converged;
 }
 
 /** The kept decisions turned into the outcome: marginal values, the kept pass rebuilt, both audits. */
