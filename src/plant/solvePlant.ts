@@ -95,7 +95,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   let passes: PassRecord[] = [];
   try {
     const quick = options.neighbour ? await fromNeighbour(settings, options.neighbour) : null;
-    if (quick) return await finishSolve(settings, options, quick, [{ source: 'neighbour', onOff: Object.fromEntries(onOffOf(quick.integers)), objective: quick.result.objective ?? null, note: null, kept: true }]);
+    if (quick) return await finishSolve(settings, options, quick.best, quick.tried);
     const first = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), null);
     passes = first.passes;
     if (!first.ok) {
@@ -118,11 +118,14 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
 
 /**
  * The neighbour's on/off decisions converged from its point (load segments
- * decided afresh), kept when the MIP at the converged point (every integer
- * free) is no cheaper beyond its gap and chooses the same on/off; null when
- * they cannot be met, do not settle, or the MIP would choose otherwise.
+ * decided afresh), then each swap of a running boiler for a stopped one from
+ * there (a swap can pay on a curved efficiency even where the linear model at
+ * the point does not show it); kept when the MIP at the converged point (every
+ * integer free) is no cheaper beyond its gap and chooses the same on/off. Null
+ * when they cannot be met, do not settle, or the MIP would choose otherwise:
+ * the full search then runs.
  */
-async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<Converged | null> {
+async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<{ best: Converged; tried: CommitmentTried[] } | null> {
   const { plant, objective, backend } = settings;
   let converged: Converged | NotConverged;
   try {
@@ -133,17 +136,40 @@ async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<Solv
     throw error;
   }
   if (!converged.ok) return null;
+  const entry = (source: CommitmentTried['source'], outcome: Converged): CommitmentTried => ({ source, onOff: Object.fromEntries(onOffOf(outcome.integers)), objective: outcome.result.objective ?? null, note: null, kept: false });
+  const tried: CommitmentTried[] = [entry('neighbour', converged)];
   const check = buildPass(plant, contributionsOf(plant), converged.point, objective);
-  if (!check.context.model.isMip) return converged;
-  const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
-  if (confirmed.status !== 'optimal' || confirmed.objective === null || converged.result.objective === null) return null;
-  const held = converged.result.objective;
-  // The MIP's own gap bounds how far below its incumbent the optimum can lie.
-  const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
-  const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
-  // Other on/off choices from the MIP, even at no gain on this linearisation, are judged by the full search.
-  const same = keyOf(onOffOf(integerValues(check, confirmed))) === keyOf(onOffOf(converged.integers));
-  return better || !same ? null : converged;
+  if (check.context.model.isMip) {
+    const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
+    if (confirmed.status !== 'optimal' || confirmed.objective === null || converged.result.objective === null) return null;
+    const held = converged.result.objective;
+    // The MIP's own gap bounds how far below its incumbent the optimum can lie.
+    const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
+    const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
+    // Other on/off choices from the MIP, even at no gain on this linearisation, are judged by the full search.
+    const same = keyOf(onOffOf(integerValues(check, confirmed))) === keyOf(onOffOf(converged.integers));
+    if (better || !same) return null;
+  }
+  let best = converged;
+  const around = onOffOf(converged.integers);
+  const boilers = new Set(plant.boilers.map((boiler) => `${boiler.id}.on`));
+  for (const [running, on] of around) {
+    for (const [stopped, off] of around) {
+      if (on !== 1 || off !== 0 || !boilers.has(running) || !boilers.has(stopped)) continue;
+      let outcome: Converged | NotConverged;
+      try {
+        outcome = await converge(settings, contributionsOf(plant), converged.point, withHeldSegments(new Map(around).set(running, 0).set(stopped, 1), converged.integers));
+      } catch (error) {
+        if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) continue;
+        throw error;
+      }
+      if (!outcome.ok) continue;
+      tried.push(entry('boiler swap', outcome));
+      if (improves(outcome, best, objective)) best = outcome;
+    }
+  }
+  for (const item of tried) item.kept = keyOf(new Map(Object.entries(item.onOff))) === keyOf(onOffOf(best.integers)) && item.objective === (best.result.objective ?? null);
+  return { best, tried };
 }
 
 /** The kept decisions turned into the outcome: marginal values, the kept pass rebuilt, both audits. */

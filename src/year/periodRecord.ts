@@ -127,6 +127,6 @@ export function periodRecord(head: PeriodHead, base: Plant, tracked: readonly Tr
     marginal_per_t: base.headers.map((header) => byHeader.get(header.id) ?? null),
     units,
     passes: outcome.passes.length,
-    how: outcome.commitments.some((entry) => entry.source === 'neighbour' && entry.kept) ? 'neighbour' : 'full',
+    how: outcome.commitments.some((entry) => entry.source === 'neighbour') ? 'neighbour' : 'full',
   };
 }
