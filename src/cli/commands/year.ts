@@ -25,6 +25,7 @@ interface YearArgs {
   objective?: string;
   solver: BackendName;
   workers?: number;
+  block?: number;
 }
 
 /** "K/N" with 1 <= K <= N; a usage error otherwise. */
@@ -97,8 +98,10 @@ export const yearCommand: CommandModule<object, YearArgs> = {
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
       .option('workers', { type: 'number', describe: 'most worker threads (default: one per core; 1 solves in process)' })
+      .option('block', { type: 'number', describe: 'periods solved as one chain from a cold start, each warm from the one before (default 168); shards split between blocks' })
       .check((args) => {
         checkWorkers(args.workers);
+        if (args.block !== undefined && !(Number.isInteger(args.block) && args.block >= 1 && args.block <= 8784)) throw new CliError(`--block expects a whole number of periods from 1 to 8784, found ${Number.isNaN(args.block) ? 'a value that is not a number' : args.block}`, EXIT_USAGE);
         if (args.shard !== undefined) parseShard(args.shard);
         if ((args.shard === undefined) !== (args.part === undefined)) throw new CliError('--shard K/N and --part FILE go together: a shard writes its part file', EXIT_USAGE);
         return true;
@@ -124,7 +127,7 @@ export const yearCommand: CommandModule<object, YearArgs> = {
       for (const issue of read.issues) process.stderr.write(`${formatProfileIssue(issue)}\n`);
       throw new CliError(`${read.issues[0]?.file ?? args.case}: ${read.issues.length} problem${read.issues.length === 1 ? '' : 's'} in the profile; nothing was solved`, EXIT_PROBLEMS);
     }
-    const input = { plant: loaded.plant, profile: read.profile, profileFile: loaded.plant.profile!.file, objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver };
+    const input = { plant: loaded.plant, profile: read.profile, profileFile: loaded.plant.profile!.file, objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, ...(args.block !== undefined ? { blockPeriods: args.block } : {}) };
     const progress = progressLine('year', process.stderr, quietProgress(args));
     let run: Awaited<ReturnType<typeof runYear>>;
     try {
