@@ -1,6 +1,6 @@
 // npm run bench:year: `steamwright year` on the Kestrel Bay mill with a
 // generated hourly profile (seasonal and daily shape, seeded noise, a boiler
-// overhaul, a turbine inspection and a kiln stop; scripts/millProfile.ts) of
+// overhaul, a back-pressure turbine inspection and a kiln stop; scripts/millProfile.ts) of
 // 720, 2190 and 8760 periods. Each size runs the built command line in its own
 // process: wall time, peak memory (VmHWM, every worker thread included), and
 // how the periods were solved. One round per size (the large ones take

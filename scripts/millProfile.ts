@@ -1,6 +1,6 @@
 // An invented hourly profile for the Kestrel Bay Board Mill demo case: a
 // seasonal and a daily shape, seeded noise, and a few outages (a boiler
-// overhaul, a turbine inspection, a lime kiln stop). Demo data only: the
+// overhaul, a back-pressure turbine inspection, a lime kiln stop). Demo data only: the
 // shapes are plausible, not measured. Regenerate the bundled file with
 //   npm run build && node dist/scripts/millProfile.js > cases/profiles/kestrel-bay-year.csv
 import { pathToFileURL } from 'node:url';
@@ -27,12 +27,12 @@ const COLUMNS = [
   'timestamp', 'dryer_section.steam [t/h]', 'digester.steam [t/h]', 'evaporators.steam [t/h]', 'building_heating.steam [t/h]',
   'tank_tracing.steam [t/h]', 'white_water_heater.heat [MW]', 'kiln_hrsg.steam [t/h]', 'power.site_demand [MW]',
   'power.import.price [EUR/MWh]', 'power.export.price [EUR/MWh]', 'natural_gas.price [EUR/GJ]', 'site.makeup_water.temperature [degC]',
-  'site.ambient_temperature [degC]', 'boiler_1.available', 'tg1.available', 'kiln_hrsg.available',
+  'site.ambient_temperature [degC]', 'boiler_1.available', 'bpt1.available', 'kiln_hrsg.available',
 ];
 
 /** Outages as [first hour, hours]. */
 const BOILER_1_OVERHAUL: [number, number] = [4512, 240]; // 10 days from 7 July
-const TG1_INSPECTION: [number, number] = [2640, 96]; // 4 days from 20 April
+const BPT1_INSPECTION: [number, number] = [5040, 96]; // 4 days from 30 July
 const KILN_STOP: [number, number] = [7200, 48]; // 2 days from 28 October
 
 function within(hour: number, [first, length]: [number, number]): boolean {
@@ -71,7 +71,7 @@ export function millProfileCsv(options: MillProfileOptions): string {
       (10.5 - 5.5 * winter).toFixed(1),
       ambient.toFixed(1),
       within(hour, BOILER_1_OVERHAUL) ? '0' : '1',
-      within(hour, TG1_INSPECTION) ? '0' : '1',
+      within(hour, BPT1_INSPECTION) ? '0' : '1',
       kilnOut ? '0' : '1',
     ];
     lines.push(row.join(','));

@@ -127,15 +127,24 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
  */
 async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<{ best: Converged; tried: CommitmentTried[] } | null> {
   const { plant, objective, backend } = settings;
-  let converged: Converged | NotConverged;
-  try {
-    // Only its on/off choices are held: the load segments of non-convex fuel curves follow the new loads.
-    converged = await converge(settings, contributionsOf(plant), neighbour.start, onOffOf(neighbour.commitment));
-  } catch (error) {
-    if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) return null;
-    throw error;
+  const attempt = async (start: PassPoint, commitment: ReadonlyMap<string, number>): Promise<Converged | null> => {
+    try {
+      const outcome = await converge(settings, contributionsOf(plant), start, commitment);
+      return outcome.ok ? outcome : null;
+    } catch (error) {
+      if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) return null;
+      throw error;
+    }
+  };
+  // Every integer held first (linear passes only); where that cannot be met,
+  // the on/off held and the load segments of non-convex fuel curves free.
+  let converged = await attempt(neighbour.start, neighbour.commitment);
+  let segmentsFree = false;
+  if (!converged) {
+    converged = await attempt(neighbour.start, onOffOf(neighbour.commitment));
+    segmentsFree = true;
   }
-  if (!converged.ok) return null;
+  if (!converged) return null;
   const entry = (source: CommitmentTried['source'], outcome: Converged): CommitmentTried => ({ source, onOff: Object.fromEntries(onOffOf(outcome.integers)), objective: outcome.result.objective ?? null, note: null, kept: false });
   const tried: CommitmentTried[] = [entry('neighbour', converged)];
   const check = buildPass(plant, contributionsOf(plant), converged.point, objective);
@@ -146,9 +155,17 @@ async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<Solv
     // The MIP's own gap bounds how far below its incumbent the optimum can lie.
     const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
     const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
+    const chosen = integerValues(check, confirmed);
     // Other on/off choices from the MIP, even at no gain on this linearisation, are judged by the full search.
-    const same = keyOf(onOffOf(integerValues(check, confirmed))) === keyOf(onOffOf(converged.integers));
-    if (better || !same) return null;
+    if (better || keyOf(onOffOf(chosen)) !== keyOf(onOffOf(converged.integers))) return null;
+    // Other load segments: the same on/off converged again with the segments free, the better kept.
+    if (!segmentsFree && keyOf(sortedByName(chosen)) !== keyOf(sortedByName(converged.integers))) {
+      const again = await attempt(converged.point, onOffOf(converged.integers));
+      if (again) {
+        tried.push(entry('neighbour', again));
+        if (improves(again, converged, objective)) converged = again;
+      }
+    }
   }
   let best = converged;
   const around = onOffOf(converged.integers);
@@ -324,6 +341,10 @@ function withHeldSegments(candidate: ReadonlyMap<string, number>, best: Readonly
 
 function onOffOf(integers: ReadonlyMap<string, number>): Map<string, number> {
   return new Map([...integers].filter(([name]) => name.endsWith('.on')).sort(([a], [b]) => a.localeCompare(b)));
+}
+
+function sortedByName(values: ReadonlyMap<string, number>): Map<string, number> {
+  return new Map([...values].sort(([a], [b]) => a.localeCompare(b)));
 }
 
 function keyOf(onOff: ReadonlyMap<string, number>): string {
