@@ -14,3 +14,4 @@ export * from './diagram/index.js';
 export { compareText, compareCsv, compareMarkdown } from './compareTables.js';
 export { projectsText, screenText } from './evaluateTables.js';
 export { yearText, yearCsv } from './yearTables.js';
+export { yearHtml, yearChartsSvg, lineChartSvg, stackedColumnsSvg } from './yearCharts.js';

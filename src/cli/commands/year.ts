@@ -6,7 +6,7 @@ import { readFile } from 'node:fs/promises';
 import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
 import type { Plant } from '../../model/index.js';
-import { plantDisplayFormat, yearCsv, yearText } from '../../report/index.js';
+import { plantDisplayFormat, yearCsv, yearHtml, yearText } from '../../report/index.js';
 import { progressLine } from '../../scenarios/index.js';
 import { formatProfileIssue, loadProfile, mergeParts, partText, runYear, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
@@ -20,6 +20,7 @@ interface YearArgs {
   parts?: string[];
   json: boolean;
   csv?: string;
+  html?: string;
   shard?: string;
   part?: string;
   objective?: string;
@@ -48,10 +49,12 @@ async function finish(args: YearArgs, inputs: { option: string; path: string }[]
   const csvToStdout = args.csv === '' || args.csv === '-';
   if (!csvToStdout) requests.push({ option: args.json ? '--json' : 'the summary', path: '-' });
   if (args.csv !== undefined) requests.push({ option: '--csv', path: csvToStdout ? '-' : args.csv });
+  if (args.html !== undefined) requests.push({ option: '--html', path: args.html });
   const planned = await planOutputs(inputs, requests);
   const summary = args.json ? `${JSON.stringify(result, null, 2)}\n` : yearText(result, format);
   const csv = args.csv !== undefined && records ? yearCsv(result, records, format) : '';
-  await writeOutputs(planned.map((output) => ({ ...output, text: output.option === '--csv' ? csv : summary })));
+  const html = args.html !== undefined && records ? yearHtml(result, records, format) : '';
+  await writeOutputs(planned.map((output) => ({ ...output, text: output.option === '--csv' ? csv : output.option === '--html' ? html : summary })));
   if (result.failed.length > 0) {
     throw new CliError(`${label}: ${result.failed.length} of ${result.periods} periods could not be solved (${result.failed.slice(0, 3).map((period) => period.label).join(', ')}${result.failed.length > 3 ? ', ...' : ''}); the totals cover the others`, EXIT_PROBLEMS);
   }
@@ -93,6 +96,7 @@ export const yearCommand: CommandModule<object, YearArgs> = {
       .positional('parts', { type: 'string', array: true, describe: 'with "merge": the part files of every shard' })
       .option('json', { type: 'boolean', default: false, describe: 'print the year as JSON (SI units)' })
       .option('csv', { type: 'string', describe: 'write one row per period, in the case\'s units, to FILE (no FILE: standard output)' })
+      .option('html', { type: 'string', describe: 'also write a self-contained HTML page with the year\'s charts (load-duration curves, marginal values, supply by month, running hours) to FILE' })
       .option('shard', { type: 'string', describe: 'solve only the Kth of N deterministic slices of the periods: K/N (needs --part)' })
       .option('part', { type: 'string', describe: 'with --shard: the part file to write, for "year merge"' })
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
@@ -104,10 +108,12 @@ export const yearCommand: CommandModule<object, YearArgs> = {
         if (args.block !== undefined && !(Number.isInteger(args.block) && args.block >= 1 && args.block <= 8784)) throw new CliError(`--block expects a whole number of periods from 1 to 8784, found ${Number.isNaN(args.block) ? 'a value that is not a number' : args.block}`, EXIT_USAGE);
         if (args.shard !== undefined) parseShard(args.shard);
         if ((args.shard === undefined) !== (args.part === undefined)) throw new CliError('--shard K/N and --part FILE go together: a shard writes its part file', EXIT_USAGE);
+        if (args.shard !== undefined && (args.json || args.csv !== undefined || args.html !== undefined)) throw new CliError('--shard writes only its part file; --json, --csv and --html belong to "year merge"', EXIT_USAGE);
         return true;
       })
       .example('$0 year cases/mill.yaml', 'the year of the case\'s profile, as text')
       .example('$0 year cases/mill.yaml --csv hours.csv', 'also every period as a CSV row')
+      .example('$0 year cases/mill.yaml --html year.html', 'also the charts as a page')
       .example('$0 year cases/mill.yaml --shard 2/8 --part part-2.json', 'the second of eight slices')
       .example('$0 year merge part-*.json --json', 'the parts combined: the same result as one run') as Argv<YearArgs>,
   handler: async (args) => {
@@ -120,7 +126,7 @@ export const yearCommand: CommandModule<object, YearArgs> = {
     const inputs = [{ option: 'case file', path: args.case }];
     // Outputs are checked before any solving, so a bad path fails at once.
     if (shard) await planOutputs(inputs, [{ option: '--part', path: args.part! }]);
-    else await planOutputs(inputs, [...(args.csv !== undefined && args.csv !== '' && args.csv !== '-' ? [{ option: '--csv', path: args.csv }] : []), { option: 'the summary', path: '-' }]);
+    else await planOutputs(inputs, [...(args.csv !== undefined && args.csv !== '' && args.csv !== '-' ? [{ option: '--csv', path: args.csv }] : []), ...(args.html !== undefined ? [{ option: '--html', path: args.html }] : []), { option: 'the summary', path: '-' }]);
     const loaded = await loadCaseOrFail(args.case);
     const read = await loadProfile(loaded.plant, args.case);
     if (!read.ok) {
@@ -131,7 +137,7 @@ export const yearCommand: CommandModule<object, YearArgs> = {
     const progress = progressLine('year', process.stderr, quietProgress(args));
     let run: Awaited<ReturnType<typeof runYear>>;
     try {
-      run = await runYear(input, { workers: args.workers, onProgress: progress.onProgress, keepRecords: args.csv !== undefined, ...(shard ? { shard } : {}) });
+      run = await runYear(input, { workers: args.workers, onProgress: progress.onProgress, keepRecords: args.csv !== undefined || args.html !== undefined, ...(shard ? { shard } : {}) });
     } finally {
       progress.finish();
     }
