@@ -10,11 +10,11 @@ import { SAFETY_CAUTION } from './safety.js';
 import { yearText } from './yearTables.js';
 
 const WIDTH = 640;
-const HEIGHT = 220;
+const HEIGHT = 240;
 const LEFT = 60;
 const TOP = 30;
 const PLOT_W = WIDTH - LEFT - 20;
-const PLOT_H = HEIGHT - TOP - 40;
+const PLOT_H = HEIGHT - TOP - 56;
 const MOST_POINTS = 800;
 const COLOURS = ['#23303b', '#7d98ab', '#b8860b', '#6b8e23', '#8b4513', '#708090', '#4682b4', '#a0522d'];
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
@@ -33,6 +33,13 @@ function thin(values: number[]): number[] {
   });
 }
 
+/** A legend entry below the plot: a swatch and the label, four to a row. */
+function legend(index: number, label: string): string {
+  const x = LEFT + (index % 4) * 140;
+  const y = HEIGHT - 14 + Math.floor(index / 4) * 14;
+  return `<rect x="${x}" y="${y - 9}" width="10" height="10" fill="${COLOURS[index % COLOURS.length]}"/><text x="${x + 14}" y="${y}">${escapeMarkup(label)}</text>`;
+}
+
 function frame(id: string, title: string, low: number, high: number, unit: string, xWords: string): string[] {
   const tick = (value: number): string => (Math.abs(high - low) >= 100 ? value.toFixed(0) : value.toFixed(1));
   return [
@@ -42,7 +49,7 @@ function frame(id: string, title: string, low: number, high: number, unit: strin
     `<text x="${LEFT - 6}" y="${TOP + 10}" text-anchor="end">${escapeMarkup(tick(high))}</text>`,
     `<text x="${LEFT - 6}" y="${TOP + PLOT_H}" text-anchor="end">${escapeMarkup(tick(low))}</text>`,
     `<text x="${LEFT - 6}" y="${TOP + PLOT_H / 2}" text-anchor="end">${escapeMarkup(unit)}</text>`,
-    `<text x="${LEFT + PLOT_W / 2}" y="${TOP + PLOT_H + 28}" text-anchor="middle">${escapeMarkup(xWords)}</text>`,
+    `<text x="${LEFT + PLOT_W}" y="${TOP + PLOT_H + 30}" text-anchor="end">${escapeMarkup(xWords)}</text>`,
   ];
 }
 
@@ -58,7 +65,7 @@ export function lineChartSvg(id: string, title: string, unit: string, xWords: st
     const points = entry.values.map((value, at) => `${f(LEFT + (count > 1 ? (at / (count - 1)) * PLOT_W : 0))},${f(TOP + PLOT_H - ((value - low) / (high - low)) * PLOT_H)}`).join(' ');
     const colour = COLOURS[index % COLOURS.length];
     parts.push(`<polyline fill="none" stroke="${colour}" stroke-width="1.2" points="${points}"><title>${escapeMarkup(entry.label)}</title></polyline>`);
-    parts.push(`<text x="${LEFT + 8 + index * 110}" y="${TOP + 14}" fill="${colour}">${escapeMarkup(entry.label)}</text>`);
+    parts.push(legend(index, entry.label));
   });
   parts.push('</svg>');
   return parts.join('\n');
@@ -81,7 +88,7 @@ export function stackedColumnsSvg(id: string, title: string, unit: string, categ
     });
     parts.push(`<text x="${f(LEFT + (at + 0.5) * column)}" y="${TOP + PLOT_H + 14}" text-anchor="middle">${escapeMarkup(category)}</text>`);
   });
-  layers.forEach((layer, index) => parts.push(`<text x="${LEFT + 8 + index * 110}" y="${TOP + 14}" fill="${COLOURS[index % COLOURS.length]}">${escapeMarkup(layer.label)}</text>`));
+  layers.forEach((layer, index) => parts.push(legend(index, layer.label)));
   parts.push('</svg>');
   return parts.join('\n');
 }

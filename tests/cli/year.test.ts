@@ -20,13 +20,15 @@ function caseWith(rows: string[], hours = rows.length): string {
 }
 
 describe('steamwright year', () => {
-  test('text, --json and --csv of 4 hours on worker threads', async () => {
+  test('text, --json, --csv and --html of 4 hours on worker threads', async () => {
     const folder = caseWith(bundled.slice(1, 5));
-    const text = await runCli(['year', join(folder, 'mill.yaml'), '--csv', join(folder, 'hours.csv')]);
+    const text = await runCli(['year', join(folder, 'mill.yaml'), '--csv', join(folder, 'hours.csv'), '--html', join(folder, 'year.html')]);
     expect(text.stderr).toBe('');
     expect(text.code).toBe(0);
     expect(text.stdout).toMatch(/^Kestrel Bay Board Mill: the year from profiles\/kestrel-bay-year.csv \(8 hourly periods, 8 h\)/);
     for (const heading of ['Annual cost:', 'Month by month', 'Units over the year', 'Hours at each limit', 'Marginal value of steam by header (EUR/t, weighted by hours)', 'ASME B31.1']) expect(text.stdout).toContain(heading);
+    const html = readFileSync(join(folder, 'year.html'), 'utf8');
+    expect(html.match(/<svg /g)).toHaveLength(5);
     const csv = readFileSync(join(folder, 'hours.csv'), 'utf8').trim().split('\n');
     expect(csv).toHaveLength(5);
     expect(csv[1]).toMatch(/^2026-01-01T00:00,1,1,solved,full,/);

@@ -19,7 +19,7 @@ describe('year charts', () => {
 
   test('stacked columns: one rectangle per source and month, heights adding to the total', () => {
     const svg = stackedColumnsSvg('s', 'supply', 't', ['Jan', 'Feb'], [{ label: 'boiler_1', values: [100, 0] }, { label: 'kiln_<hrsg>', values: [50, 150] }]);
-    const heights = [...svg.matchAll(/<rect x="[^"]+" y="[^"]+" width="[^"]+" height="([^"]+)" fill="#/g)].map((match) => Number(match[1]));
+    const heights = [...svg.matchAll(/<rect x="[^"]+" y="[^"]+" width="[^"]+" height="([^"]+)" fill="#[^"]+"><title>/g)].map((match) => Number(match[1]));
     expect(heights).toHaveLength(4);
     expect(heights[0] + heights[1]).toBeCloseTo(heights[2] + heights[3], 0);
     expect(svg).toContain('kiln_&lt;hrsg&gt;');
