@@ -23,6 +23,8 @@ function joinStdinValues(argv: string[]): string[] {
 const BOOLEAN_FLAGS = new Set(['json', 'verbose', 'screen', 'help', 'version']);
 /** Options whose empty value means something ("--md" alone: standard output). */
 const EMPTY_ALLOWED = new Set(['md', 'csv']);
+/** Positionals that take several values (`year merge PART...`): a list there is not an option given twice. */
+const LIST_POSITIONALS = new Set(['parts']);
 
 /**
  * Every command: an option given twice, or given an empty value, is a usage
@@ -36,7 +38,7 @@ function checkOptionValues(argv: Record<string, unknown>): true {
   const isAlias = (key: string): boolean => key.length === 1 && long.some((other) => JSON.stringify(argv[other]) === JSON.stringify(argv[key]));
   for (const key of keys) {
     const value = argv[key];
-    if (!(Array.isArray(value) || (value === '' && !EMPTY_ALLOWED.has(key))) || isAlias(key)) continue;
+    if (!(Array.isArray(value) || (value === '' && !EMPTY_ALLOWED.has(key))) || isAlias(key) || LIST_POSITIONALS.has(key)) continue;
     const flag = `--${key}`;
     problems.push(Array.isArray(value)
       ? `${flag} was given ${value.length} times (${value.map((item) => JSON.stringify(item)).join(', ')}); give it once`

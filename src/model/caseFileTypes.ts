@@ -28,6 +28,13 @@ export interface CaseFile {
   projects?: ProjectEntry[];
   sweeps?: SweepEntry[];
   meters?: MeterEntry[];
+  profile?: ProfileEntry;
+}
+
+/** The year's profile: a CSV file of periods (see the schema's description of its columns). */
+export interface ProfileEntry {
+  file: string;
+  hours?: number;
 }
 
 /** Changes to one listed item, matched by id; its other keys are checked after merging. */

@@ -334,6 +334,25 @@ const defs: Record<string, Schema> = {
     to: { type: 'string', description: 'last value, in the same unit', examples: ['120 EUR/MWh'] },
     steps: { type: 'integer', minimum: 2, maximum: 1000, description: 'number of values, ends included' },
   }, ['id', 'target', 'from', 'to', 'steps']),
+  profile: object('the year as periods: a CSV file, one row per period, read by `steamwright year`', {
+    file: {
+      type: 'string',
+      minLength: 1,
+      description: [
+        'CSV file relative to the case. The first row names the columns. Periods are either',
+        'hourly, with a "timestamp" column (YYYY-MM-DDTHH:MM, one row per consecutive hour, no gaps or repeats),',
+        'or a "period" column (a label) with an "hours" column (hours the period stands for) and an optional "month" column (1 to 12).',
+        'Every other column sets one case value in every period, named "<id>.<field> [unit]", cells plain numbers in that unit:',
+        '<user>.steam [t/h], <user>.heat [MW], <heat recovery boiler>.steam [t/h], <fuel>.price [EUR/GJ],',
+        'power.import.price [EUR/MWh], power.export.price [EUR/MWh], power.site_demand [MW],',
+        'site.makeup_water.temperature [degC], site.ambient_temperature [degC], and',
+        '<boiler, heat recovery boiler, steam import, turbine or letdown>.available (no unit: 1 in service, 0 out).',
+        'Any unit of the right kind may be used; prices must be in the site currency.',
+      ].join(' '),
+      examples: ['profiles/kestrel-bay-year.csv'],
+    },
+    hours: { type: 'integer', minimum: 1, maximum: 8784, description: 'hours the profile must cover in total (8760 for a year of hourly rows); checked when given' },
+  }, ['file']),
   solver: object('solver options', {
     mip_gap: percent('relative MIP gap; default 0.01 %', '0.01 %'),
     time_limit_seconds: { type: 'number', exclusiveMinimum: 0, description: 'time limit per solve; default 60' },
@@ -370,6 +389,7 @@ export const caseSchema: Schema = {
     projects: list('project', 'projects evaluated against every scenario'),
     sweeps: list('sweep', 'one value varied over a range'),
     meters: list('meter', 'flow meters, for steamwright reconcile'),
+    profile: ref('profile'),
   }, ['format_version', 'name', 'site', 'power', 'headers', 'deaerator']),
   $defs: defs,
 };

@@ -11,3 +11,5 @@ export type * from './variantTypes.js';
 export { HOURS_PER_YEAR } from './variantTypes.js';
 export { parseMoney, parseYears } from './money.js';
 export { resolveMeters, type Meter, type MeteredFlow } from './resolveMeters.js';
+export { PHYSICAL_RANGES } from './physicalRanges.js';
+export { MOST_PROFILE_HOURS } from './resolveProfile.js';

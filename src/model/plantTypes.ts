@@ -368,4 +368,19 @@ export interface Plant {
   projects: ProjectDefinition[];
   /** every default that changes physics or cost, for `check --verbose` */
   defaults: DefaultApplied[];
+  /** the year's profile (a CSV file of periods) the case names, if any; read by src/year */
+  profile?: ProfileReference;
+}
+
+/** Where the case names its profile: the file as written (relative to the case) and the hours it declares. */
+export interface ProfileReference {
+  file: string;
+  /** total hours the profile must cover, when the case states them */
+  hours: number | null;
+  /** where `profile.file` is written in the case */
+  line: number;
+  column: number;
+  /** where `profile.hours` is written (the file's place when absent) */
+  hoursLine: number;
+  hoursColumn: number;
 }

@@ -7,6 +7,7 @@ import { checkSources, checkVenting, linkDrives, linkFlashTanks } from './plantC
 import type { Plant } from './plantTypes.js';
 import { ResolveContext, type IdKind } from './resolveContext.js';
 import { resolveHeaders } from './resolveHeaders.js';
+import { resolveProfile } from './resolveProfile.js';
 import { resolveDeaerator, resolveFlashTanks, resolveLetdowns, resolveMachines, resolveUsers } from './resolveNetwork.js';
 import { resolveFuels, resolveObjective, resolvePower, resolveSite, resolveSolver } from './resolveSite.js';
 import { resolveBoilers, resolveHeatRecoveryBoilers, resolveSteamImports } from './resolveSupply.js';
@@ -70,6 +71,7 @@ export function resolvePlant(context: ResolveContext): Plant | null {
   checkFuelBasis(context, plant);
   checkTopology(context, plant);
   checkVenting(context, plant);
-  return { ...plant, defaults: context.defaults };
+  const profile = resolveProfile(context);
+  return { ...plant, defaults: context.defaults, ...(profile ? { profile } : {}) };
 }
 

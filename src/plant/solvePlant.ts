@@ -33,12 +33,20 @@ export interface SolvePlantOptions {
   maxFlips?: number;
   /** measure each header's one-more and one-less values by re-solving (default true) */
   probeMarginalValues?: boolean;
+  /**
+   * A neighbouring solve's integer decisions and converged point (the hour
+   * before, in a year): converged from first with those decisions held, and
+   * kept without the cold first pass and the flips when the MIP at its
+   * converged point, every integer free, finds nothing cheaper. Otherwise the
+   * full search runs, with the neighbour's decisions as one candidate.
+   */
+  neighbour?: { commitment: ReadonlyMap<string, number>; start: PassPoint };
 }
 
 /** One set of on/off decisions tried, converged on its own, and its converged objective. */
 export interface CommitmentTried {
   /** where the candidate came from */
-  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip' | 'boiler swap';
+  source: 'first pass' | 'MIP at the converged points' | 'base plant' | 'single flip' | 'boiler swap' | 'neighbour';
   /** on/off of every switchable unit, 1 running */
   onOff: Record<string, number>;
   /** converged objective; null when it could not be met or did not settle */
@@ -86,6 +94,8 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
   };
   let passes: PassRecord[] = [];
   try {
+    const quick = options.neighbour ? await fromNeighbour(settings, options.neighbour) : null;
+    if (quick) return await finishSolve(settings, options, quick.best, quick.tried);
     const first = await converge(settings, contributionsOf(plant), initialHeaderEnthalpy(plant), null);
     passes = first.passes;
     if (!first.ok) {
@@ -95,7 +105,94 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       }
       return { ok: false, plant, reason: first.reason, message: first.message, passes };
     }
-    const { best, tried } = await chooseCommitment(settings, first, options);
+    const fallback = options.neighbour && !options.commitment ? { ...options, commitment: options.neighbour.commitment, start: options.neighbour.start } : options;
+    const { best, tried } = await chooseCommitment(settings, first, fallback);
+    return await finishSolve(settings, options, best, tried);
+  } catch (error) {
+    if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
+    // A state the loop reached outside IF97 (a flow driven to an extreme enthalpy, say) is the case's physics too.
+    if (error instanceof PropertyRangeError) return { ok: false, plant, reason: 'physics', message: `a steam state left the range of IF97 while solving: ${error.message}`, passes };
+    throw error;
+  }
+}
+
+/**
+ * The neighbour's on/off decisions converged from its point (load segments
+ * decided afresh), then each swap of a running boiler for a stopped one from
+ * there (a swap can pay on a curved efficiency even where the linear model at
+ * the point does not show it); kept when the MIP at the converged point (every
+ * integer free) is no cheaper beyond its gap and chooses the same on/off. Null
+ * when they cannot be met, do not settle, or the MIP would choose otherwise:
+ * the full search then runs.
+ */
+async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<{ best: Converged; tried: CommitmentTried[] } | null> {
+  const { plant, objective, backend } = settings;
+  const attempt = async (start: PassPoint, commitment: ReadonlyMap<string, number>): Promise<Converged | null> => {
+    try {
+      const outcome = await converge(settings, contributionsOf(plant), start, commitment);
+      return outcome.ok ? outcome : null;
+    } catch (error) {
+      if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) return null;
+      throw error;
+    }
+  };
+  // Every integer held first (linear passes only); where that cannot be met,
+  // the on/off held and the load segments of non-convex fuel curves free.
+  let converged = await attempt(neighbour.start, neighbour.commitment);
+  let segmentsFree = false;
+  if (!converged) {
+    converged = await attempt(neighbour.start, onOffOf(neighbour.commitment));
+    segmentsFree = true;
+  }
+  if (!converged) return null;
+  const entry = (source: CommitmentTried['source'], outcome: Converged): CommitmentTried => ({ source, onOff: Object.fromEntries(onOffOf(outcome.integers)), objective: outcome.result.objective ?? null, note: null, kept: false });
+  const tried: CommitmentTried[] = [entry('neighbour', converged)];
+  const check = buildPass(plant, contributionsOf(plant), converged.point, objective);
+  if (check.context.model.isMip) {
+    const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
+    if (confirmed.status !== 'optimal' || confirmed.objective === null || converged.result.objective === null) return null;
+    const held = converged.result.objective;
+    // The MIP's own gap bounds how far below its incumbent the optimum can lie.
+    const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
+    const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
+    const chosen = integerValues(check, confirmed);
+    // Other on/off choices from the MIP, even at no gain on this linearisation, are judged by the full search.
+    if (better || keyOf(onOffOf(chosen)) !== keyOf(onOffOf(converged.integers))) return null;
+    // Other load segments: the same on/off converged again with the segments free, the better kept.
+    if (!segmentsFree && keyOf(sortedByName(chosen)) !== keyOf(sortedByName(converged.integers))) {
+      const again = await attempt(converged.point, onOffOf(converged.integers));
+      if (again) {
+        tried.push(entry('neighbour', again));
+        if (improves(again, converged, objective)) converged = again;
+      }
+    }
+  }
+  let best = converged;
+  const around = onOffOf(converged.integers);
+  const boilers = new Set(plant.boilers.map((boiler) => `${boiler.id}.on`));
+  for (const [running, on] of around) {
+    for (const [stopped, off] of around) {
+      if (on !== 1 || off !== 0 || !boilers.has(running) || !boilers.has(stopped)) continue;
+      let outcome: Converged | NotConverged;
+      try {
+        outcome = await converge(settings, contributionsOf(plant), converged.point, withHeldSegments(new Map(around).set(running, 0).set(stopped, 1), converged.integers));
+      } catch (error) {
+        if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) continue;
+        throw error;
+      }
+      if (!outcome.ok) continue;
+      tried.push(entry('boiler swap', outcome));
+      if (improves(outcome, best, objective)) best = outcome;
+    }
+  }
+  for (const item of tried) item.kept = keyOf(new Map(Object.entries(item.onOff))) === keyOf(onOffOf(best.integers)) && item.objective === (best.result.objective ?? null);
+  return { best, tried };
+}
+
+/** The kept decisions turned into the outcome: marginal values, the kept pass rebuilt, both audits. */
+async function finishSolve(settings: LoopSettings, options: SolvePlantOptions, best: Converged, tried: CommitmentTried[]): Promise<PlantOutcome> {
+  const { plant, objective, backend } = settings;
+  try {
     const probe = options.probeMarginalValues ?? true;
     const values = probe ? await marginalValues(settings, best) : [];
     // The kept pass is built once more, last, so that every unit's report reads
@@ -134,6 +231,7 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
       start,
     };
   } catch (error) {
+    const passes = best.passes;
     if (error instanceof PlantPhysicsError) return { ok: false, plant, reason: 'physics', message: error.message, passes };
     // A state the loop reached outside IF97 (a flow driven to an extreme enthalpy, say) is the case's physics too.
     if (error instanceof PropertyRangeError) return { ok: false, plant, reason: 'physics', message: `a steam state left the range of IF97 while solving: ${error.message}`, passes };
@@ -243,6 +341,10 @@ function withHeldSegments(candidate: ReadonlyMap<string, number>, best: Readonly
 
 function onOffOf(integers: ReadonlyMap<string, number>): Map<string, number> {
   return new Map([...integers].filter(([name]) => name.endsWith('.on')).sort(([a], [b]) => a.localeCompare(b)));
+}
+
+function sortedByName(values: ReadonlyMap<string, number>): Map<string, number> {
+  return new Map([...values].sort(([a], [b]) => a.localeCompare(b)));
 }
 
 function keyOf(onOff: ReadonlyMap<string, number>): string {

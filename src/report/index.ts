@@ -14,3 +14,5 @@ export * from './diagram/index.js';
 export { compareText, compareCsv, compareMarkdown } from './compareTables.js';
 export { projectsText, screenText } from './evaluateTables.js';
 export { reconcileText, reconcileCsv, RECONCILE_CAUTION } from './reconcileReport.js';
+export { yearText, yearCsv } from './yearTables.js';
+export { yearHtml, yearChartsSvg, lineChartSvg, stackedColumnsSvg } from './yearCharts.js';

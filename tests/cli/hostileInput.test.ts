@@ -130,6 +130,12 @@ const cases: HostileCase[] = [
   // The reproducer once ended in the cross-check backend's infeasible point; since header
   // enthalpies became variables of each pass it solves, and the balance must then be whole.
   { title: 'solve: max-power on the cross-check backend solves, or is refused with advice', args: ['solve', join(projectRoot, 'cases', 'kestrel-bay-board-mill.yaml'), '--objective', 'max-power', '--solver', 'jslp'], code: 0, says: /^$/, then: (result) => expect(result.stdout).toMatch(/maximum-power balance, \d+ passes \(jslp\)/) },
+  // Class 7: the year.
+  { title: 'year: --csv on the case file is refused before anything is solved', args: ['year', 'c.yaml', '--csv', 'c.yaml'], code: 2, says: /--csv "c\.yaml" is the case file this command reads/, oneLine: true },
+  { title: 'year: a case without a profile', args: ['year', 'c.yaml'], code: 1, says: /c\.yaml {2}the case names no profile; expected "profile: \{ file: year\.csv \}"/ },
+  { title: 'year merge: a folder as a part file', args: ['year', 'merge', 'folder'], code: 1, says: /folder: cannot read the part file: it is a directory/ },
+  { title: 'year merge: a part file that is not JSON', args: ['year', 'merge', 'plain.txt'], code: 1, says: /plain\.txt: expected a part file written by "steamwright year --shard", found text that is not JSON/ },
+  { title: 'year: --shard of zero slices', args: ['year', 'c.yaml', '--shard', '0/0', '--part', 'p.json'], code: 2, says: /--shard expects K\/N with 1 <= K <= N <= 10000/, oneLine: true },
   // Class 5: options.
   { title: 'solve: a doubled --solver', args: ['solve', 'c.yaml', '--solver', 'jslp', '--solver', 'highs'], code: 2, says: /--solver was given 2 times \("jslp", "highs"\); give it once/, oneLine: true },
   { title: 'report: a doubled --out', args: ['report', 'c.yaml', '--out', 'a.html', '--out', 'b.html'], code: 2, says: /--out was given 2 times/, oneLine: true },

@@ -10,7 +10,7 @@ import type * as Case from '../../src/model/index.js';
 type FieldList<T> = { [K in keyof Required<T>]: {} extends Pick<T, K> ? 'optional' : 'required' };
 
 const fieldLists: Record<string, Record<string, 'required' | 'optional'>> = {
-  root: { format_version: 'required', name: 'required', description: 'optional', site: 'required', fuels: 'optional', power: 'required', headers: 'required', boilers: 'optional', heat_recovery_boilers: 'optional', steam_imports: 'optional', turbines: 'optional', letdowns: 'optional', users: 'optional', flash_tanks: 'optional', deaerator: 'required', machines: 'optional', objective: 'optional', solver: 'optional', scenarios: 'optional', projects: 'optional', sweeps: 'optional', meters: 'optional' } satisfies FieldList<Case.CaseFile>,
+  root: { format_version: 'required', name: 'required', description: 'optional', site: 'required', fuels: 'optional', power: 'required', headers: 'required', boilers: 'optional', heat_recovery_boilers: 'optional', steam_imports: 'optional', turbines: 'optional', letdowns: 'optional', users: 'optional', flash_tanks: 'optional', deaerator: 'required', machines: 'optional', objective: 'optional', solver: 'optional', scenarios: 'optional', projects: 'optional', sweeps: 'optional', meters: 'optional', profile: 'optional' } satisfies FieldList<Case.CaseFile>,
   site: { atmospheric_pressure: 'optional', ambient_temperature: 'required', makeup_water: 'required', currency: 'required', units: 'required', carbon_price: 'optional' } satisfies FieldList<Case.SiteEntry>,
   makeupWater: { temperature: 'required', cost: 'required' } satisfies FieldList<Case.MakeupWaterEntry>,
   fuel: { id: 'required', name: 'optional', price: 'required', basis: 'required', co2: 'required' } satisfies FieldList<Case.FuelEntry>,
@@ -44,6 +44,7 @@ const fieldLists: Record<string, Record<string, 'required' | 'optional'>> = {
   project: { id: 'required', name: 'optional', capital_cost: 'required', life: 'required', discount_rate: 'required', fixed_om: 'optional', changes: 'required' } satisfies FieldList<Case.ProjectEntry>,
   sweep: { id: 'required', name: 'optional', scenario: 'optional', target: 'required', from: 'required', to: 'required', steps: 'required' } satisfies FieldList<Case.SweepEntry>,
   meter: { tag: 'required', name: 'optional', unit: 'required', measures: 'required', to: 'optional', uncertainty: 'required', confidence: 'optional' } satisfies FieldList<Case.MeterEntry>,
+  profile: { file: 'required', hours: 'optional' } satisfies FieldList<Case.ProfileEntry>,
   solver: { mip_gap: 'optional', time_limit_seconds: 'optional', max_passes: 'optional', enthalpy_tolerance: 'optional' } satisfies FieldList<Case.SolverEntry>,
 };
 

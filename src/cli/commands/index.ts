@@ -10,5 +10,7 @@ import { stateCommand } from './state.js';
 import { watchCommand } from './watch.js';
 import { reconcileCommand } from './reconcile.js';
 
+import { yearCommand } from './year.js';
+
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand, reconcileCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, yearCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand, reconcileCommand];

@@ -1,0 +1,125 @@
+// The year as text (annual totals, months, units, headers, failed periods)
+// and as CSV with one row per period, in the case's units. Only formatting:
+// every figure comes from the YearResult and the period records.
+import type { PeriodRecord, YearResult } from '../year/index.js';
+import { COMPONENTS } from '../year/index.js';
+import { steamValueNumber, type DisplayFormat, type SteamValueUnit } from './displayFormat.js';
+import { csvCell } from './safeCells.js';
+import { SAFETY_CAUTION } from './safety.js';
+import { table } from './table.js';
+
+const KG_PER_LB = 0.45359237; // exact, by definition of the pound
+const KJ_PER_BTU = 1.05505585262; // International Table Btu
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+function whole(value: number): string {
+  return (Math.abs(value) < 0.5 ? 0 : value).toLocaleString('en-US', { maximumFractionDigits: 0 });
+}
+
+/** Masses in t (SI) or klb (US); energies in GJ (SI) or MMBtu (US). */
+function totalsIn(format: DisplayFormat): { mass: (t: number) => number; massUnit: string; energy: (GJ: number) => number; energyUnit: string } {
+  const si = format.system === 'si';
+  return {
+    mass: (t) => (si ? t : t / KG_PER_LB),
+    massUnit: si ? 't' : 'klb',
+    energy: (GJ) => (si ? GJ : GJ / KJ_PER_BTU),
+    energyUnit: si ? 'GJ' : 'MMBtu',
+  };
+}
+
+export function yearText(result: YearResult, format: DisplayFormat): string {
+  const units = totalsIn(format);
+  const valueUnit = result.marginal_value_unit as SteamValueUnit;
+  const value = (perT: number | null): string => (perT === null ? 'n/a' : steamValueNumber(perT, valueUnit, format.system).toFixed(2));
+  const lines: string[] = [];
+  const a = result.annual;
+  lines.push(`${result.plant}: the year from ${result.profile.file} (${result.periods} ${result.profile.kind === 'hourly' ? 'hourly periods' : 'periods'}, ${whole(result.hours)} h)`);
+  lines.push(`On/off across periods: ${result.mode}; ${result.mode_note}.`);
+  const solved = result.periods - result.failed.length;
+  lines.push(`Solved ${solved} of ${result.periods} periods: ${result.how.full} by a full search, ${result.how.neighbour} from the period before's on/off choices and point, ${result.how.same_as_earlier} identical to an earlier period; ${result.how.one_pass} settled in one pass.`);
+  if (!result.complete) lines.push(`Totals cover the ${whole(result.hours_solved)} h that solved, not the ${whole(result.hours)} h of the profile: ${result.failed.length} periods failed (listed below).`);
+  lines.push('');
+  lines.push(`Annual cost: ${format.money(a.cost)}`);
+  lines.push(table(['component', `cost (${format.currency})`, 'share'], COMPONENTS.map((component) => [component, whole(a.cost_by_component[component]), a.cost > 0 ? `${((a.cost_by_component[component] / a.cost) * 100).toFixed(1)} %` : '-'])));
+  lines.push('');
+  lines.push('Annual energy');
+  lines.push(table(['quantity', 'total', 'unit'], [
+    ['fuel fired', whole(units.energy(a.fuel_GJ)), units.energyUnit],
+    ['steam raised', whole(units.mass(a.steam_raised_t)), units.massUnit],
+    ['process steam', whole(units.mass(a.process_steam_t)), units.massUnit],
+    ['steam let down', whole(units.mass(a.let_down_t)), units.massUnit],
+    ['steam vented', whole(units.mass(a.vented_t)), units.massUnit],
+    ['makeup water', whole(units.mass(a.makeup_t)), units.massUnit],
+    ['power generated', whole(a.power_generated_MWh), 'MWh'],
+    ['power imported', whole(a.power_imported_MWh), 'MWh'],
+    ['power exported', whole(a.power_exported_MWh), 'MWh'],
+    ['CO2 emitted', whole(format.system === 'si' ? a.co2_t : a.co2_t / KG_PER_LB), format.system === 'si' ? 't' : 'klb'],
+  ]));
+  if (result.months.length > 0) {
+    lines.push('');
+    lines.push('Month by month');
+    lines.push(table(
+      ['month', 'hours', `cost (${format.currency})`, `fuel (${units.energyUnit})`, `steam raised (${units.massUnit})`, 'imported (MWh)', 'exported (MWh)', `vented (${units.massUnit})`],
+      result.months.map((month) => [MONTHS[month.month - 1], whole(month.hours), whole(month.cost), whole(units.energy(month.fuel_GJ)), whole(units.mass(month.steam_raised_t)), whole(month.power_imported_MWh), whole(month.power_exported_MWh), whole(units.mass(month.vented_t))]),
+    ));
+  }
+  lines.push('');
+  lines.push('Units over the year');
+  lines.push(table(
+    ['unit', 'kind', 'hours running', 'starts', 'hours out of service', `steam (${units.massUnit})`, `fuel (${units.energyUnit})`, 'power (MWh)'],
+    result.units.map((unit) => [unit.id, unit.kind, whole(unit.hours_running), String(unit.starts), whole(unit.hours_out_of_service), whole(units.mass(unit.steam_t)), whole(units.energy(unit.fuel_GJ)), whole(unit.power_MWh)]),
+  ));
+  const limits = result.units.flatMap((unit) => Object.entries(unit.hours_at_limit).map(([limit, hours]) => [unit.id, limit, whole(hours)]));
+  if (limits.length > 0) {
+    lines.push('');
+    lines.push('Hours at each limit');
+    lines.push(table(['unit', 'limit', 'hours'], limits));
+  }
+  lines.push('');
+  lines.push(`Marginal value of steam by header (${format.valueUnit(valueUnit)}, weighted by hours)`);
+  lines.push(table(['header', 'mean', 'min', '10 %', 'median', '90 %', 'max'], result.headers.map((header) => [header.id, value(header.mean_per_t), value(header.min_per_t), value(header.p10_per_t), value(header.median_per_t), value(header.p90_per_t), value(header.max_per_t)])));
+  if (result.failed.length > 0) {
+    lines.push('');
+    lines.push(`Periods that could not be solved (${result.failed.length})`);
+    lines.push(table(['period', 'reason', 'diagnosis'], result.failed.map((period) => [period.label, period.reason, period.message])));
+  }
+  lines.push('');
+  lines.push(SAFETY_CAUTION);
+  return `${lines.join('\n')}\n`;
+}
+
+/** One row per period in the case's units; failed periods keep their row with the reason. */
+export function yearCsv(result: YearResult, records: Iterable<PeriodRecord>, format: DisplayFormat): string {
+  const flow = format.flowUnit;
+  const valueUnit = result.marginal_value_unit as SteamValueUnit;
+  const heading = [
+    'period', 'hours', 'month', 'status', 'solved', `cost [${format.currency}/h]`,
+    ...COMPONENTS.map((component) => `${component} cost [${format.currency}/h]`),
+    `fuel [${format.fuelRateUnit}]`, `steam raised [${flow}]`, `process steam [${flow}]`, `let down [${flow}]`, `vented [${flow}]`, `makeup [${flow}]`,
+    'power generated [kW]', 'power imported [kW]', 'power exported [kW]', 'site demand [kW]', `CO2 [${format.co2RateUnit}]`,
+    ...result.headers.map((header) => `${header.id} marginal value [${format.valueUnit(valueUnit)}]`),
+    ...result.units.flatMap((unit) => [`${unit.id} running`, unit.kind === 'turbine' ? `${unit.id} power [kW]` : `${unit.id} steam [${flow}]`]),
+  ];
+  const lines = [heading.map(csvCell).join(',')];
+  // Full precision (the shortest text that reads back to the same double), so sums over rows match the totals.
+  const number = (value: number): string => String(Math.abs(value) < 1e-12 ? 0 : value);
+  for (const record of records) {
+    const head = [record.label, number(record.hours), record.month > 0 ? String(record.month) : ''];
+    if (!record.ok) {
+      lines.push([...head, 'failed', `${record.reason}: ${record.message}`].map(csvCell).join(','));
+      continue;
+    }
+    const kW_of_GJ_per_h = record.fuel_GJ_per_h / 0.0036;
+    const cells = [
+      ...head, 'solved', record.how, number(record.cost_per_h),
+      ...COMPONENTS.map((component) => number(record.cost_by_component_per_h[component])),
+      number(format.fuelRateValue(kW_of_GJ_per_h)), number(format.flowValue(record.steam_raised_kg_s)), number(format.flowValue(record.process_steam_kg_s)),
+      number(format.flowValue(record.let_down_kg_s)), number(format.flowValue(record.vented_kg_s)), number(format.flowValue(record.makeup_kg_s)),
+      number(record.power_generated_kW), number(record.power_imported_kW), number(record.power_exported_kW), number(record.site_demand_kW), number(format.co2RateValue(record.co2_kg_per_h)),
+      ...record.marginal_per_t.map((perT) => (perT === null ? '' : number(steamValueNumber(perT, valueUnit, format.system)))),
+      ...record.units.flatMap((state, slot) => [String(state.running), number(result.units[slot].kind === 'turbine' ? state.power_kW : format.flowValue(state.steam_kg_s))]),
+    ];
+    lines.push(cells.map(csvCell).join(','));
+  }
+  return `${lines.join('\n')}\n`;
+}
