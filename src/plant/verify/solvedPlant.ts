@@ -17,6 +17,8 @@ export interface SolvedPlant {
   flashTanks: { id: string; vapour: number; liquid: number }[];
   deaerator: { heatingSteam: number; makeup: number; vent: number; pumpShaft: number; pumpMotorElectric: number; pumpMotorShaft: number };
   machines: { id: string; motorShaft: number; motorElectric: number }[];
+  absorptionChillers: { id: string; steam: number; absorptionCooling: number; electricCooling: number; electric: number }[];
+  trapGroups: { id: string; steam: number }[];
   grid: { imported: number; exported: number };
 }
 
@@ -88,6 +90,14 @@ export function solvedPlantFromReports(headers: readonly ReportedHeader[], units
       pumpMotorShaft: num(deaerator, 'pump_motor_shaft_kW'),
     },
     machines: byKind('machine').map((unit) => ({ id: unit.id, motorShaft: num(unit, 'motor_shaft_kW'), motorElectric: num(unit, 'motor_electric_kW') })),
+    absorptionChillers: byKind('absorptionChiller').map((unit) => ({
+      id: unit.id,
+      steam: num(unit, 'steam_kg_s'),
+      absorptionCooling: num(unit, 'absorption_cooling_kW'),
+      electricCooling: num(unit, 'electric_cooling_kW'),
+      electric: num(unit, 'electric_chiller_kW'),
+    })),
+    trapGroups: byKind('trapGroup').map((unit) => ({ id: unit.id, steam: num(unit, 'steam_lost_kg_s') })),
     grid: { imported: num(grid, 'import_kW'), exported: num(grid, 'export_kW') },
   };
 }
