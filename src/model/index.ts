@@ -10,3 +10,7 @@ export { schemaFilePath } from './schemaLocation.js';
 export type * from './variantTypes.js';
 export { HOURS_PER_YEAR } from './variantTypes.js';
 export { parseMoney, parseYears } from './money.js';
+export { ACCURACY_CLASS, tipSheet20TurbineCost } from './resolveCosts.js';
+export { napierSteamFlow } from './napier.js';
+export { DEFAULT_COP } from './resolveChillers.js';
+export { DEFAULT_DISCHARGE_COEFFICIENT } from './resolveTraps.js';

@@ -32,9 +32,13 @@ export class AbsorptionChillerContribution implements UnitContribution {
       throw new PlantPhysicsError(`absorption chiller ${chiller.id}: steam at ${this.headerH.toFixed(1)} kJ/kg cannot heat its generator down to condensate at ${condensate.h.toFixed(1)} kJ/kg. Lower the condensate temperature.`);
     }
     this.absorption = context.variable(`${chiller.id}.absorption`, { upper: Math.min(chiller.capacity, chiller.cooling) });
-    // Steam sized at the pass's header enthalpy; the heat it brings, q / COP,
-    // is exact, so the header's energy row holds whatever the move.
-    this.steam = term(this.absorption, 1 / (chiller.cop * drop));
+    // m = q / (COP (h - h_c)): bilinear in q and the header's move, so taken
+    // to first order about the last pass's q0, as a duty user's flow is. The
+    // heat it brings, q / COP, is exact in the energy row.
+    const perKW = 1 / (chiller.cop * drop);
+    const q0 = context.pointValue(term(this.absorption));
+    this.steam = term(this.absorption, perKW);
+    if (context.linearises(chiller.header)) this.steam.addExpression(context.headerMove(chiller.header), -q0 * perKW / drop);
     const energy = term(this.absorption, 1 / chiller.cop).addExpression(this.steam, condensate.h);
     const pressure = context.pressure(chiller.header);
     context.stream({ from: chiller.header, to: chiller.id, kind: 'process', flow: this.steam, h: this.headerH, p: pressure, energy });
