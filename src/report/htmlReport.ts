@@ -12,6 +12,8 @@ import { reportAssumptions } from './assumptions.js';
 import { createHash } from 'node:crypto';
 import { REPORT_SCRIPT, REPORT_STYLE } from './htmlAssets.js';
 import { SAFETY_CAUTION } from './safety.js';
+import type { SavingsResult } from '../savings/index.js';
+import { savingsSectionHtml } from './savingsTables.js';
 
 /** CSP source for the inline script: sha256 of its exact text (CSP Level 2, hash-source). */
 const SCRIPT_HASH = `sha256-${createHash('sha256').update(REPORT_SCRIPT, 'utf8').digest('base64')}`;
@@ -24,6 +26,8 @@ export interface ReportOptions {
   generatedAt?: string;
   /** the case's scenarios, solved: compared side by side, each with its own diagram */
   scenarios?: ScenarioSection[];
+  /** the savings found (`report --savings`): ranked measures, the roadmap and their charts */
+  savings?: SavingsResult;
 }
 
 /** The display format of a plant's own unit system, currency and atmosphere. */
@@ -45,7 +49,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   );
   const scenarios = options.scenarios ?? [];
   body.push(
-    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
+    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${options.savings ? ' <a href="#savings">Savings</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
   );
   body.push(
     `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
@@ -65,6 +69,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
       ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml)),
     );
   }
+  if (options.savings) body.push(savingsSectionHtml(options.savings, format, tableHtml, e));
   const audit = result.audit;
   body.push(
     '<section id="audit"><h2>Audit</h2>',

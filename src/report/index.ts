@@ -13,3 +13,4 @@ export { reportAssumptions, type Assumptions } from './assumptions.js';
 export * from './diagram/index.js';
 export { compareText, compareCsv, compareMarkdown } from './compareTables.js';
 export { projectsText, screenText } from './evaluateTables.js';
+export { savingsTables, measureOverlaysYaml, savingsCharts, physicalWords, savingsSectionHtml } from './savingsTables.js';

@@ -32,11 +32,11 @@ export function condensateMeasures(plant: Plant, runs: SolvedRun[]): Measure[] {
       ...base(plant),
       id,
       kind: 'condensateReturn' as const,
-      title: `return ${percent(RETURN_TARGET)} of ${user.id}'s condensate`,
+      title: `return ${percent(RETURN_TARGET)} of the condensate of ${user.id}`,
       change: `${user.id} returns ${percent(RETURN_TARGET)} of its condensate instead of ${percent(user.condensate.returnFraction)}, up to ${tonnesPerHour(added)} more, to ${to}`,
       touches: [user.id, to],
       capital: added * costs.condensateReturnPerKgS,
-      capitalBasis: `${tonnesPerHour(added)} more returned at ${Math.round(costs.condensateReturnPerKgS / 3.6)} ${plant.site.currency} per t/h (costs.condensate_return)`,
+      capitalBasis: `${(added * 3.6).toPrecision(3)} t/h more returned at ${Math.round(costs.condensateReturnPerKgS / 3.6)} ${plant.site.currency} per t/h (costs.condensate_return)`,
       changes: { users: [{ id: user.id, condensate: { return: percent(RETURN_TARGET), temperature: kelvin(user.condensate.temperature), to } }] },
     }];
   });
