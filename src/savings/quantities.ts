@@ -20,3 +20,8 @@ export function kilowatts(kW: number): string {
 export function percent(fraction: number): string {
   return `${+(fraction * 100).toPrecision(8)} %`;
 }
+
+/** A flow for a sentence: three significant figures, t/h. */
+export function flowWords(kgPerSecond: number): string {
+  return `${+(kgPerSecond * 3.6).toPrecision(3)} t/h`;
+}

@@ -6,6 +6,7 @@ import { expandIsentropic } from '../plant/index.js';
 import { statePH } from '../properties/index.js';
 import type { Measure } from './measureTypes.js';
 import { kilopascals, percent, tonnesPerHour } from './quantities.js';
+import { flowWords } from './quantities.js';
 import { headerState, largest, unitValue, type SolvedRun } from './sizing.js';
 
 /**
@@ -47,7 +48,7 @@ export function letdownTurbines(plant: Plant, runs: SolvedRun[]): Measure[] {
       id,
       kind: 'letdownTurbine',
       title: `back-pressure turbine generator beside ${letdown.id} (${letdown.from} to ${letdown.to})`,
-      change: `a turbine generator of about ${Math.round(kW)} kW in parallel with ${letdown.id}, passing up to ${tonnesPerHour(flow)} (the letdown's largest flow over the scenarios); the valve stays for the rest and as a bypass`,
+      change: `a turbine generator of about ${Math.round(kW)} kW in parallel with ${letdown.id}, passing up to ${flowWords(flow)} (the letdown's largest flow over the scenarios); the valve stays for the rest and as a bypass`,
       cause: null,
       ways: [],
       touches: [letdown.id, letdown.from, letdown.to],
@@ -91,7 +92,7 @@ export function condensingTurbine(plant: Plant, runs: SolvedRun[], headerId: str
     id,
     kind: 'ventTurbine',
     title: `condensing turbine generator on ${headerId} for the steam it vents`,
-    change: `a condensing turbine generator of about ${Math.round(kW)} kW taking up to ${tonnesPerHour(vent)} from ${headerId} to a condenser at ${kilopascals(CONDENSING.condenserPressure)}, condensate to the deaerator`,
+    change: `a condensing turbine generator of about ${Math.round(kW)} kW taking up to ${flowWords(vent)} from ${headerId} to a condenser at ${kilopascals(CONDENSING.condenserPressure)}, condensate to the deaerator`,
     cause,
     ways: [],
     touches: [headerId],

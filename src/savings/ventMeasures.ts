@@ -6,6 +6,7 @@ import type { Plant } from '../model/index.js';
 import { saturatedLiquid } from '../properties/index.js';
 import type { Measure } from './measureTypes.js';
 import { kilowatts, tonnesPerHour } from './quantities.js';
+import { flowWords } from './quantities.js';
 import { headerState, largest, type SolvedRun } from './sizing.js';
 import { condensingTurbine } from './turbineMeasures.js';
 
@@ -100,7 +101,7 @@ function chillerMeasure(plant: Plant, runs: SolvedRun[], header: string, vent: n
     id,
     kind: 'ventChiller',
     title: `absorption chilling on ${header} in place of electric chillers (${chiller.id})`,
-    change: `${Math.round(added)} kW (${(added / 3.5168528).toFixed(0)} TR) more absorption capacity in ${chiller.id}${moved ? `, fed from ${header} instead of ${chiller.header}` : ''}, sized to the cooling the vented ${tonnesPerHour(vent)} can make, at most the cooling demand`,
+    change: `${Math.round(added)} kW (${(added / 3.5168528).toFixed(0)} TR) more absorption capacity in ${chiller.id}${moved ? `, fed from ${header} instead of ${chiller.header}` : ''}, sized to the cooling the vented ${flowWords(vent)} can make, at most the cooling demand`,
     cause,
     ways: [],
     touches: [chiller.id, header, ...(moved ? [chiller.header] : [])],

@@ -5,6 +5,7 @@ import type { Plant } from '../model/index.js';
 import { saturationTemperature } from '../properties/index.js';
 import type { Measure } from './measureTypes.js';
 import { kelvin, kilopascals, percent, tonnesPerHour } from './quantities.js';
+import { flowWords } from './quantities.js';
 import { largest, unitValue, type SolvedRun } from './sizing.js';
 
 /** The return a repaired condensate system reaches: 90 % (common practice, no source). */
@@ -33,7 +34,7 @@ export function condensateMeasures(plant: Plant, runs: SolvedRun[]): Measure[] {
       id,
       kind: 'condensateReturn' as const,
       title: `return ${percent(RETURN_TARGET)} of the condensate of ${user.id}`,
-      change: `${user.id} returns ${percent(RETURN_TARGET)} of its condensate instead of ${percent(user.condensate.returnFraction)}, up to ${tonnesPerHour(added)} more, to ${to}`,
+      change: `${user.id} returns ${percent(RETURN_TARGET)} of its condensate instead of ${percent(user.condensate.returnFraction)}, up to ${flowWords(added)} more, to ${to}`,
       touches: [user.id, to],
       capital: added * costs.condensateReturnPerKgS,
       capitalBasis: `${(added * 3.6).toPrecision(3)} t/h more returned at ${Math.round(costs.condensateReturnPerKgS / 3.6)} ${plant.site.currency} per t/h (costs.condensate_return)`,
@@ -117,7 +118,7 @@ export function trapMeasures(plant: Plant): Measure[] {
       id: `repair_${group.id}`,
       kind: 'trapRepair' as const,
       title: `repair the ${traps} failed-open traps of ${group.id}`,
-      change: `${traps} of ${group.installed} traps on ${group.header} repaired, ending ${tonnesPerHour(group.loss)} of steam blown through them`,
+      change: `${traps} of ${group.installed} traps on ${group.header} repaired, ending ${flowWords(group.loss)} of steam blown through them`,
       touches: [group.id, group.header],
       capital: traps * costs.trapRepair,
       capitalBasis: `${traps} traps at ${Math.round(costs.trapRepair)} ${plant.site.currency} each (costs.trap_repair)`,
