@@ -22,6 +22,9 @@ export interface CaseFile {
   flash_tanks?: FlashTankEntry[];
   deaerator: DeaeratorEntry;
   machines?: MachineEntry[];
+  absorption_chillers?: AbsorptionChillerEntry[];
+  steam_traps?: TrapGroupEntry[];
+  costs?: CostsEntry;
   objective?: 'minimum_cost' | 'minimum_fuel' | 'maximum_power' | 'minimum_co2';
   solver?: SolverEntry;
   scenarios?: ScenarioEntry[];
@@ -46,6 +49,8 @@ export interface ChangesEntry {
   users?: ChangedItemEntry[];
   flash_tanks?: ChangedItemEntry[];
   machines?: ChangedItemEntry[];
+  absorption_chillers?: ChangedItemEntry[];
+  steam_traps?: ChangedItemEntry[];
   site?: Record<string, unknown>;
   power?: Record<string, unknown>;
   deaerator?: Record<string, unknown>;
@@ -66,6 +71,8 @@ export interface AddEntry {
   users?: UserEntry[];
   flash_tanks?: FlashTankEntry[];
   machines?: MachineEntry[];
+  absorption_chillers?: AbsorptionChillerEntry[];
+  steam_traps?: TrapGroupEntry[];
 }
 
 export interface ScenarioEntry {
@@ -318,4 +325,43 @@ export interface SolverEntry {
   time_limit_seconds?: number;
   max_passes?: number;
   enthalpy_tolerance?: QuantityText;
+}
+
+/** A chilled-water plant: absorption chillers on steam up to their capacity, electric chillers for the rest. */
+export interface AbsorptionChillerEntry {
+  id: string;
+  name?: string;
+  header: string;
+  cooling: QuantityText;
+  capacity: QuantityText;
+  effect: 'single' | 'double';
+  cop?: number;
+  /** "0.65 kW/TR" or "0.18 kW/kW" */
+  electric_chillers: string;
+  condensate?: CondensateEntry;
+}
+
+/** Steam traps on one header from a survey. */
+export interface TrapGroupEntry {
+  id: string;
+  name?: string;
+  header: string;
+  installed: number;
+  /** a count, or a share such as "15 %" */
+  failed_open: number | QuantityText;
+  /** "1/8 in", "0.125 in", "3.2 mm" */
+  orifice: string;
+  discharge_coefficient?: number;
+}
+
+/** Unit costs for savings measures, each in the site currency. */
+export interface CostsEntry {
+  back_pressure_turbine?: string;
+  absorption_chilling?: string;
+  trap_repair?: string;
+  condensate_return?: string;
+  insulation?: string;
+  flash_tank?: string;
+  life?: number | string;
+  discount_rate?: QuantityText;
 }

@@ -386,6 +386,8 @@ export interface UnitCosts {
   discountRate: number;
   /** accuracy class in words */
   accuracy: string;
+  /** the unit costs the case left out and the defaults taken, each with its source */
+  defaults: DefaultApplied[];
 }
 
 export type Objective = 'minimumCost' | 'minimumFuel' | 'maximumPower' | 'minimumCo2';

@@ -2,7 +2,8 @@
 // Each one left out takes a default with its source (or "common practice, no
 // source") recorded for `check --verbose`. Every estimate is a screening one.
 import { parseYears } from './money.js';
-import type { UnitCosts } from './plantTypes.js';
+import type { DefaultApplied, UnitCosts } from './plantTypes.js';
+import { displayPath } from './issue.js';
 import type { ResolveContext } from './resolveContext.js';
 
 /** The accuracy class every capital estimate carries. */
@@ -24,7 +25,7 @@ const KLB_H_KG_S = 453.59237 / 3600;
 
 // Installed-cost defaults. Only the turbine has a published figure; the rest
 // are from memory of common practice and say so.
-const RULES: Record<Exclude<keyof UnitCosts, 'lifeYears' | 'discountRate' | 'accuracy'>, CostRule> = {
+const RULES: Record<Exclude<keyof UnitCosts, 'lifeYears' | 'discountRate' | 'accuracy' | 'defaults'>, CostRule> = {
   backPressureTurbinePerKW: {
     key: 'back_pressure_turbine', per: { kW: 1, MW: 1e-3 }, example: '600 USD/kW', fallback: null,
     reason: 'the size curve of US DOE Steam Tip Sheet #20 ("Replace Pressure-Reducing Valves with Backpressure Turbogenerators"): equipment with switchgear about $700/kW at 50 kW to $200/kW at 2,000 kW (log-linear between), installation 75 % of equipment',
@@ -76,7 +77,9 @@ function parseUnitCost(text: string, currency: string, rule: CostRule): { ok: tr
 
 export function resolveCosts(context: ResolveContext): UnitCosts {
   const currency = context.currency || 'USD';
-  const costs = {} as UnitCosts;
+  const costs = { defaults: [] as DefaultApplied[] } as UnitCosts;
+  // Kept apart from the plant's defaults: they change no balance, only the savings estimates.
+  const addDefault = (path: (string | number)[], value: string, reason: string): void => void costs.defaults.push({ path: displayPath(path), value, reason });
   const foreign = currency !== 'USD' ? ` The default is in USD and is taken as ${currency} one for one: give the cost in ${currency}.` : '';
   for (const [field, rule] of Object.entries(RULES) as [keyof typeof RULES, CostRule][]) {
     const path = ['costs', rule.key];
@@ -89,20 +92,20 @@ export function resolveCosts(context: ResolveContext): UnitCosts {
       }
       context.error('bad-cost', path, parsed.message);
     } else {
-      context.addDefault(path, rule.fallback === null ? 'DOE Tip Sheet #20 size curve' : rule.example.replace(/^[0-9]+/, (n) => n).replace('USD', currency), `cost not stated: ${rule.reason}.${foreign}`);
+      addDefault(path, rule.fallback === null ? 'DOE Tip Sheet #20 size curve' : rule.example.replace(/^[0-9]+/, (n) => n).replace('USD', currency), `cost not stated: ${rule.reason}.${foreign}`);
     }
     costs[field] = rule.fallback as never;
   }
   const lifeRaw = context.raw(['costs', 'life']);
   costs.lifeYears = 15;
-  if (lifeRaw === undefined) context.addDefault(['costs', 'life'], '15 years', 'life of measures not stated: 15 years (common practice, no source)');
+  if (lifeRaw === undefined) addDefault(['costs', 'life'], '15 years', 'life of measures not stated: 15 years (common practice, no source)');
   else {
     const life = parseYears(lifeRaw);
     if (life.ok) costs.lifeYears = life.years;
     else context.error('bad-life', ['costs', 'life'], life.message);
   }
   costs.discountRate = 0.1;
-  if (context.raw(['costs', 'discount_rate']) === undefined) context.addDefault(['costs', 'discount_rate'], '10 %', 'discount rate not stated: 10 % a year (common practice, no source)');
+  if (context.raw(['costs', 'discount_rate']) === undefined) addDefault(['costs', 'discount_rate'], '10 %', 'discount rate not stated: 10 % a year (common practice, no source)');
   else costs.discountRate = context.fraction(['costs', 'discount_rate']) ?? 0.1;
   costs.accuracy = ACCURACY_CLASS;
   return costs;
