@@ -39,7 +39,7 @@ const RULES: Record<Exclude<keyof UnitCosts, 'lifeYears' | 'discountRate' | 'acc
     reason: '350 per failed trap replaced, parts and labour (common practice, no source; from memory)',
   },
   condensateReturnPerKgS: {
-    key: 'condensate_return', per: { 't/h': 1 / 3.6, 'klb/h': 1 / KLB_H_KG_S }, example: '20000 USD/(t/h)', fallback: 20_000 * 3.6,
+    key: 'condensate_return', per: { 't/h': 3.6, 'klb/h': 1 / KLB_H_KG_S }, example: '20000 USD/(t/h)', fallback: 20_000 * 3.6,
     reason: '20,000 per t/h of condensate returned: piping, receiver and pump (common practice, no source; from memory)',
   },
   insulationPerMetre: {
