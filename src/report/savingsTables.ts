@@ -54,7 +54,7 @@ export function savingsTables(result: SavingsResult, format: DisplayFormat): Rep
     {
       id: 'measures',
       title: `Measures ranked by ${CRITERION_WORDS[result.criterion]} (each solved on every scenario, weighted by hours)`,
-      headings: ['rank', 'measure', 'physical change', 'annual saving', 'fuel', 'power', 'water', 'carbon', 'CO2 avoided', 'capital', 'payback', 'NPV', 'IRR'],
+      headings: ['rank', 'measure', 'physical change', 'annual saving', 'fuel', 'power', 'steam bought', 'water', 'carbon', 'CO2 avoided', 'capital', 'payback', 'NPV', 'IRR'],
       rows: ranked.map((entry) => {
         const solved = entry.result as Extract<MeasureResult['result'], { ok: true }>;
         return [
@@ -64,6 +64,7 @@ export function savingsTables(result: SavingsResult, format: DisplayFormat): Rep
           `${money(format, solved.annual_saving)}/yr`,
           money(format, solved.annual_saving_by_component.fuel),
           money(format, solved.annual_saving_by_component.power),
+          money(format, solved.annual_saving_by_component.steam),
           money(format, solved.annual_saving_by_component.water),
           money(format, solved.annual_saving_by_component.carbon),
           `${Math.round(solved.co2_avoided_t_per_year).toLocaleString('en')} t/yr`,

@@ -116,15 +116,18 @@ export async function findSavings(caseText: string, plant: Plant, variants: Case
       standalone_saving: entry.result.ok ? entry.result.annual_saving : null,
     };
   });
-  return { plant: plant.name, currency, criterion, accuracy: plant.costs!.accuracy, base: base.runs, vents, measures: ranked, roadmap, interactions: interactionsOf(ranked, roadmap, currency) };
+  return { plant: plant.name, currency, criterion, accuracy: plant.costs!.accuracy, base: base.runs, vents, measures: ranked, roadmap, interactions: interactionsOf(ranked, roadmap, currency, plant) };
 }
 
-function interactionsOf(measures: MeasureResult[], roadmap: RoadmapStep[], currency: string): Interaction[] {
+function interactionsOf(measures: MeasureResult[], roadmap: RoadmapStep[], currency: string, plant: Plant): Interaction[] {
   const interactions: Interaction[] = [];
+  // Sharing a header or the deaerator is the rule, not news: the roadmap's
+  // re-solves measure those interactions. Two overlays on one unit are named.
+  const shared = new Set(['deaerator', ...plant.headers.map((header) => header.id)]);
   for (let i = 0; i < measures.length; i++) {
     for (let j = i + 1; j < measures.length; j++) {
-      const shared = measures[i].touches.filter((id) => measures[j].touches.includes(id));
-      if (shared.length > 0) interactions.push({ measures: [measures[i].id, measures[j].id], how: `both change ${shared.join(', ')}: their savings do not add` });
+      const both = measures[i].touches.filter((id) => !shared.has(id) && measures[j].touches.includes(id));
+      if (both.length > 0) interactions.push({ measures: [measures[i].id, measures[j].id], how: `both change ${both.join(', ')}: applied together, the later one's keys win where they overlap` });
     }
   }
   for (const step of roadmap) {
