@@ -4,7 +4,14 @@
 // of marginal values.
 import type { CaseVariants, Plant, ProjectDefinition } from '../model/index.js';
 import type { PassPoint } from '../plant/index.js';
-import { COST_COMPONENTS, evaluateProject, scenarioRun, solvePlants, type CostComponentName, type JobOutcome, type PoolOptions, type ScenarioRun } from '../scenarios/index.js';
+import { COST_COMPONENTS, evaluateProject, scenarioRun, solvePlants, type CostComponentName, type JobOutcome, type PoolOptions, type ScenarioRun, type WorkerPool } from '../scenarios/index.js';
+
+/** Pool options, with a worker pool kept across batches where the caller has one. */
+export type SavingsPoolOptions = PoolOptions & { pool?: WorkerPool };
+
+function solveBatch(plants: Plant[], options: SavingsPoolOptions, warm: Parameters<typeof solvePlants>[2] = []): Promise<JobOutcome[]> {
+  return options.pool ? options.pool.solve(plants, options, warm) : solvePlants(plants, options, warm);
+}
 import type { MeasurePlants } from './measurePlants.js';
 
 /** Physical change from the base, per hour in one scenario (positive: less loss, more made). */
@@ -62,8 +69,8 @@ export interface BaseSolves {
   warm: Map<string, { commitment: Record<string, number>; start?: PassPoint }>;
 }
 
-export async function solveBase(variants: CaseVariants, options: PoolOptions): Promise<BaseSolves> {
-  const outcomes = await solvePlants(variants.scenarios.map((scenario) => scenario.plant), options);
+export async function solveBase(variants: CaseVariants, options: SavingsPoolOptions): Promise<BaseSolves> {
+  const outcomes = await solveBatch(variants.scenarios.map((scenario) => scenario.plant), options);
   return baseFrom(variants, outcomes);
 }
 
@@ -81,13 +88,13 @@ export function baseFrom(variants: CaseVariants, outcomes: JobOutcome[]): BaseSo
 export async function evaluateChanges(
   base: BaseSolves,
   changes: { definition: ProjectDefinition; plants: MeasurePlants }[],
-  options: PoolOptions,
+  options: SavingsPoolOptions,
 ): Promise<ChangeOutcome[]> {
   const jobs: { index: number; scenario: string; plant: Plant }[] = [];
   changes.forEach((change, index) => {
     if (change.plants.ok) for (const entry of change.plants.plants) jobs.push({ index, scenario: entry.scenario, plant: entry.plant });
   });
-  const outcomes = await solvePlants(jobs.map((job) => job.plant), options, jobs.map((job) => base.warm.get(job.scenario)));
+  const outcomes = await solveBatch(jobs.map((job) => job.plant), options, jobs.map((job) => base.warm.get(job.scenario)));
   return changes.map((change, index) => {
     if (!change.plants.ok) return { ok: false, reason: change.plants.reason };
     const runs = jobs.flatMap((job, jobIndex) => {

@@ -3,7 +3,7 @@
 // applied one after another, the plant re-solved at each step, so the
 // interactions between measures are counted.
 import type { CaseVariants, Plant, ProjectDefinition } from '../model/index.js';
-import type { CostComponentName, PoolOptions, ScenarioRun } from '../scenarios/index.js';
+import { WorkerPool, type CostComponentName, type PoolOptions, type ScenarioRun } from '../scenarios/index.js';
 import { evaluateChanges, solveBase, type BaseSolves, type ChangeOutcome, type SolvedChange } from './evaluateMeasures.js';
 import { generateMeasures } from './generateMeasures.js';
 import { resolveMeasurePlants } from './measurePlants.js';
@@ -75,6 +75,16 @@ function differs(a: number, b: number): boolean {
 }
 
 export async function findSavings(caseText: string, plant: Plant, variants: CaseVariants, options: SavingsOptions = {}): Promise<SavingsResult> {
+  // One pool of workers for the three batches: each loads HiGHS once.
+  const pool = WorkerPool.forJobs(Number.MAX_SAFE_INTEGER, options);
+  try {
+    return await savingsWith(caseText, plant, variants, { ...options, pool });
+  } finally {
+    await pool.close();
+  }
+}
+
+async function savingsWith(caseText: string, plant: Plant, variants: CaseVariants, options: SavingsOptions & { pool: WorkerPool }): Promise<SavingsResult> {
   const criterion = options.criterion ?? 'npv';
   const currency = plant.site.currency;
   const base: BaseSolves = await solveBase(variants, options);

@@ -2,7 +2,7 @@
 // proven by solving; ranking; the cumulative roadmap.
 export { findSavings, rankKey, RANK_CRITERIA, type Interaction, type MeasureResult, type RankCriterion, type RoadmapStep, type SavingsOptions, type SavingsResult } from './findSavings.js';
 export { generateMeasures } from './generateMeasures.js';
-export { evaluateChanges, physicalChange, solveBase, type BaseSolves, type ChangeOutcome, type PhysicalChange, type SolvedChange } from './evaluateMeasures.js';
+export { evaluateChanges, physicalChange, solveBase, type SavingsPoolOptions, type BaseSolves, type ChangeOutcome, type PhysicalChange, type SolvedChange } from './evaluateMeasures.js';
 export { caseWithProjects, resolveMeasurePlants, type MeasurePlants } from './measurePlants.js';
 export { measureAsProject, type Measure, type MeasureKind } from './measureTypes.js';
 export { mergeChanges } from './mergeChanges.js';

@@ -6,6 +6,8 @@ import { getBackend, type BackendName } from '../../lp/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
 import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, type ScenarioSection } from '../../report/index.js';
 import { compareScenarios } from '../../scenarios/index.js';
+import { findSavings, type SavingsResult } from '../../savings/index.js';
+import { readFile } from 'node:fs/promises';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { solveFailure } from '../solveFailure.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
@@ -21,6 +23,7 @@ interface ReportArgs {
   csv?: string;
   objective?: string;
   solver: BackendName;
+  savings: boolean;
 }
 
 /** "cases/mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
@@ -43,6 +46,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .option('csv', { type: 'string', describe: 'write the tables as CSV to FILE (no FILE or "-": standard output)' })
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
+      .option('savings', { type: 'boolean', default: false, describe: 'add a savings section: the ranked measures and the roadmap (as `steamwright savings`), with their charts' })
       .example('$0 report cases/mill.yaml', 'write mill.report.html here')
       .example('$0 report cases/mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
       .example('$0 report cases/mill.yaml --scenario winter', 'one scenario: mill.winter.report.html')
@@ -85,11 +89,17 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       }
     }
 
+    let savings: SavingsResult | undefined;
+    if (args.savings) {
+      const text = (await readFile(args.case)).toString('utf8').replace(/^\uFEFF/, '');
+      savings = await findSavings(text, loaded.plant, variants, { backend: args.solver, objective });
+    }
+
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections }),
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, ...(savings ? { savings } : {}) }),
       '--svg': () => `${balanceDiagram(result, format)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),
