@@ -4,13 +4,21 @@
 // of marginal values.
 import type { CaseVariants, Plant, ProjectDefinition } from '../model/index.js';
 import type { PassPoint } from '../plant/index.js';
-import { COST_COMPONENTS, evaluateProject, scenarioRun, solvePlants, type CostComponentName, type JobOutcome, type PoolOptions, type ScenarioRun, type WorkerPool } from '../scenarios/index.js';
+import { COST_COMPONENTS, evaluateProject, scenarioRun, WorkerPool, type CostComponentName, type JobOutcome, type PoolOptions, type ScenarioRun } from '../scenarios/index.js';
 
 /** Pool options, with a worker pool kept across batches where the caller has one. */
 export type SavingsPoolOptions = PoolOptions & { pool?: WorkerPool };
 
-function solveBatch(plants: Plant[], options: SavingsPoolOptions, warm: Parameters<typeof solvePlants>[2] = []): Promise<JobOutcome[]> {
-  return options.pool ? options.pool.solve(plants, options, warm) : solvePlants(plants, options, warm);
+/** Savings compares costs: no solve here needs the marginal-value probes. */
+async function solveBatch(plants: Plant[], options: SavingsPoolOptions, warm: Parameters<WorkerPool['solve']>[2] = []): Promise<JobOutcome[]> {
+  const quiet = { ...options, probeMarginalValues: false };
+  if (options.pool) return options.pool.solve(plants, quiet, warm);
+  const pool = WorkerPool.forJobs(plants.length, options);
+  try {
+    return await pool.solve(plants, quiet, warm);
+  } finally {
+    await pool.close();
+  }
 }
 import type { MeasurePlants } from './measurePlants.js';
 

@@ -27,7 +27,7 @@ export class WorkerPool {
   /** Solves every plant; outcomes in the order given; `warm[i]` as in solvePlants. */
   async solve(plants: Plant[], options: PoolOptions = {}, warm: (Pick<JobOptions, 'commitment' | 'start'> | undefined)[] = []): Promise<JobOutcome[]> {
     if (this.closed) throw new Error('the worker pool is closed. Make a new one.');
-    const baseOptions: JobOptions = { objective: options.objective, backend: options.backend };
+    const baseOptions: JobOptions = { objective: options.objective, backend: options.backend, ...(options.probeMarginalValues === false ? { probeMarginalValues: false } : {}) };
     const optionsOf = (index: number): JobOptions => (warm[index] ? { ...baseOptions, ...warm[index] } : baseOptions);
     const outcomes: JobOutcome[] = new Array(plants.length);
     let done = 0;
