@@ -24,6 +24,7 @@ export interface CaseFile {
   machines?: MachineEntry[];
   absorption_chillers?: AbsorptionChillerEntry[];
   steam_traps?: TrapGroupEntry[];
+  insulation_survey?: InsulationRepairEntry[];
   costs?: CostsEntry;
   objective?: 'minimum_cost' | 'minimum_fuel' | 'maximum_power' | 'minimum_co2';
   solver?: SolverEntry;
@@ -364,4 +365,12 @@ export interface CostsEntry {
   flash_tank?: string;
   life?: number | string;
   discount_rate?: QuantityText;
+}
+
+/** Bare pipe on one header from an insulation survey. */
+export interface InsulationRepairEntry {
+  header: string;
+  /** "80 m" or "260 ft" */
+  bare_length: string;
+  heat_loss_after?: QuantityText;
 }

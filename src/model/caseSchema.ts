@@ -293,6 +293,11 @@ const defs: Record<string, Schema> = {
     orifice: { type: 'string', description: 'orifice diameter of the traps: "1/8 in", "0.125 in" or "3.2 mm"', examples: ['1/8 in'] },
     discharge_coefficient: { type: 'number', exclusiveMinimum: 0, maximum: 1, description: 'discharge coefficient on Napier\'s orifice relation; default 0.73 (matches the DOE Steam Tip Sheet #1 table)' },
   }, ['id', 'header', 'installed', 'failed_open', 'orifice']),
+  insulationRepair: object('bare pipe on one header found by an insulation survey', {
+    header: reference('header whose piping is bare'),
+    bare_length: { type: 'string', description: 'length of bare pipe: "80 m" or "260 ft"', examples: ['80 m'] },
+    heat_loss_after: quantity('power', '10 kW', 'the header\'s whole heat loss once insulated; default 10 % of its heat_loss'),
+  }, ['header', 'bare_length']),
   costs: object('unit costs for savings measures (screening estimates); each left out takes a default whose source check --verbose names', {
     back_pressure_turbine: { type: 'string', description: 'installed cost of a back-pressure turbine generator per kW', examples: ['600 USD/kW'] },
     absorption_chilling: { type: 'string', description: 'installed cost of absorption chilling per ton of refrigeration or per kW of cooling', examples: ['1500 USD/TR'] },
@@ -391,6 +396,7 @@ export const caseSchema: Schema = {
     machines: list('machine', 'machines turbines may drive'),
     absorption_chillers: list('absorptionChiller', 'chilled-water plants with absorption chillers on steam'),
     steam_traps: list('trapGroup', 'a steam trap survey, one group per header'),
+    insulation_survey: list('insulationRepair', 'bare pipe found by an insulation survey, one entry per header'),
     costs: ref('costs'),
     objective: choice(['minimum_cost', 'minimum_fuel', 'maximum_power', 'minimum_co2'], 'what the optimiser minimises or maximises; default minimum_cost'),
     solver: ref('solver'),

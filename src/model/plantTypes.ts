@@ -366,6 +366,15 @@ export interface TrapGroup {
   loss: number;
 }
 
+/** Bare pipe on one header: insulating it brings the header's heat loss down to lossAfter. */
+export interface InsulationRepair {
+  header: string;
+  /** bare length, m */
+  bareLength: number;
+  /** the header's whole heat loss once insulated, kW */
+  lossAfter: number;
+}
+
 /** Unit costs for screening estimates, each in the site currency. */
 export interface UnitCosts {
   /** back-pressure turbine generator installed, currency per kW; null: the size curve of DOE Steam Tip Sheet #20 */
@@ -427,6 +436,8 @@ export interface Plant {
   absorptionChillers?: AbsorptionChiller[];
   /** the trap survey's groups */
   steamTraps?: TrapGroup[];
+  /** bare pipe from an insulation survey */
+  insulation?: InsulationRepair[];
   /** unit costs for savings measures, defaults applied */
   costs?: UnitCosts;
   objective: Objective;

@@ -14,6 +14,7 @@ import { resolveTurbines } from './resolveTurbines.js';
 import { resolveAbsorptionChillers } from './resolveChillers.js';
 import { resolveCosts } from './resolveCosts.js';
 import { resolveSteamTraps } from './resolveTraps.js';
+import { resolveInsulation } from './resolveInsulation.js';
 
 const ID_LISTS: [string, IdKind][] = [
   ['fuels', 'fuel'], ['headers', 'header'], ['boilers', 'boiler'], ['heat_recovery_boilers', 'heatRecoveryBoiler'],
@@ -60,6 +61,7 @@ export function resolvePlant(context: ResolveContext): Plant | null {
     machines: resolveMachines(context),
     absorptionChillers: resolveAbsorptionChillers(context, byId),
     steamTraps: resolveSteamTraps(context, byId),
+    insulation: resolveInsulation(context, byId),
     costs: resolveCosts(context),
     objective: resolveObjective(context),
     solver: resolveSolver(context),

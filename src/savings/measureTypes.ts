@@ -8,7 +8,8 @@ export type MeasureKind =
   | 'condensateReturn'
   | 'blowdownFlash'
   | 'condensateFlash'
-  | 'trapRepair';
+  | 'trapRepair'
+  | 'insulation';
 
 export interface Measure {
   /** id, usable as a project id */

@@ -126,3 +126,23 @@ export function trapMeasures(plant: Plant): Measure[] {
     };
   });
 }
+
+/** Insulating the bare pipe an insulation survey found: the header's heat loss down to its figure after. */
+export function insulationMeasures(plant: Plant): Measure[] {
+  const costs = plant.costs!;
+  return (plant.insulation ?? []).flatMap((repair) => {
+    const header = plant.headers.find((entry) => entry.id === repair.header)!;
+    if (!(header.heatLoss - repair.lossAfter > 1e-6)) return [];
+    return [{
+      ...base(plant),
+      id: `insulate_${repair.header}`,
+      kind: 'insulation' as const,
+      title: `insulate the bare pipe of ${repair.header}`,
+      change: `${+repair.bareLength.toPrecision(3)} m of bare pipe on ${repair.header} insulated: its heat loss from ${+header.heatLoss.toPrecision(3)} kW to ${+repair.lossAfter.toPrecision(3)} kW`,
+      touches: [repair.header],
+      capital: repair.bareLength * costs.insulationPerMetre,
+      capitalBasis: `${+repair.bareLength.toPrecision(3)} m at ${Math.round(costs.insulationPerMetre)} ${plant.site.currency}/m (costs.insulation)`,
+      changes: { headers: [{ id: repair.header, heat_loss: `${+repair.lossAfter.toPrecision(8)} kW` }] },
+    }];
+  });
+}

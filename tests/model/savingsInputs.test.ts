@@ -78,3 +78,21 @@ describe('absorption chillers', () => {
     expect(chiller.electricPerCooling).toBeCloseTo(0.6 / 3.516852842, 9);
   });
 });
+
+describe('insulation survey', () => {
+  const withLoss = (entry: string): string => withSection(`insulation_survey:\n  - ${entry}`).replace('    temperature: 220 degC\n', '    temperature: 220 degC\n    heat_loss: 40 kW\n');
+  test('a length that cannot be read, or a loss after above the loss now, is refused with its line', () => {
+    expect(issuesOf(withLoss('{ header: hp, bare_length: long }'))).toMatch(/^case\.yaml:\d+:\d+ {2}insulation_survey\[0\]\.bare_length {2}expected a length such as "80 m" or "260 ft", found "long"$/m);
+    expect(issuesOf(withLoss('{ header: hp, bare_length: 30 m, heat_loss_after: 50 kW }'))).toMatch(/insulation_survey\[0\]\.heat_loss_after {2}expected at most the header's heat_loss \(40(\.0+)? kW\), found "50 kW"/);
+  });
+  test('a header without a heat loss cannot be insulated to any effect', () => {
+    expect(issuesOf(withSection('insulation_survey:\n  - { header: hp, bare_length: 30 m }'))).toMatch(/insulation_survey\[0\]\.header {2}header hp states no heat_loss/);
+  });
+  test('the loss after defaults to a tenth of the header\'s, and the default is listed', () => {
+    const result = loadCaseText(withLoss('{ header: hp, bare_length: 100 ft }'), 'case.yaml');
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.plant.insulation).toEqual([{ header: 'hp', bareLength: 30.48, lossAfter: 4 }]);
+    expect(result.plant.defaults.map((entry) => entry.path)).toContain('insulation_survey[0].heat_loss_after');
+  });
+});
