@@ -68,11 +68,14 @@ export function ventMeasures(plant: Plant, runs: SolvedRun[], finding: VentFindi
   }
   const turbine = condensingTurbine(plant, runs, header, vent, finding.cause);
   if (turbine) measures.push(turbine);
-  finding.ways.push(
-    ...measures.map((measure) => measure.title),
-    `a lower back-pressure on the turbines that exhaust into ${header}, or less extraction to it`,
-    `a changed set point: where the vent comes from spray holding a set temperature, a lower set temperature or a higher letdown outlet temperature lets the steam go to users instead`,
-  );
+  finding.ways.push(...measures.map((measure) => measure.title));
+  const exhausting = plant.turbines.filter((turbine) => turbine.stages.some((stage) => stage.exhaust.kind === 'header' && stage.exhaust.id === header)).map((turbine) => turbine.id);
+  if (exhausting.length > 0) finding.ways.push(`less steam through ${exhausting.join(', ')} into ${header}: a lower back-pressure (a stage to a lower header) or a lower minimum flow`);
+  const sprayed = plant.letdowns.filter((letdown) => letdown.to === header && letdown.desuperheater).map((letdown) => letdown.id);
+  const controlled = plant.headers.find((entry) => entry.id === header)?.state.kind === 'controlled';
+  if (sprayed.length > 0 || controlled) finding.ways.push(`a changed set point: ${controlled ? `a lower set temperature on ${header} needs less steam to hold it` : `a higher outlet temperature on ${sprayed.join(', ')} needs less spray water`}`);
+  const minimums = plant.steamImports.filter((supply) => supply.flow.min > 0).map((supply) => supply.id);
+  if (minimums.length > 0) finding.ways.push(`a lower contract minimum on ${minimums.join(', ')}, where the purchase's minimum forces steam the plant cannot use`);
   finding.measures.push(...measures.map((measure) => measure.id));
   return measures;
 }
