@@ -56,7 +56,7 @@ export async function main(argv: string[]): Promise<number> {
     .check(checkOptionValues, true)
     .help()
     .version()
-    .wrap(Math.min(100, process.stdout.columns ?? 100))
+    .wrap(null)
     .fail((message, error) => {
       // Errors thrown by a command (ours or a bug) go on to the catch below;
       // yargs' own usage errors (unknown option, missing argument) end here.

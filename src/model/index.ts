@@ -4,7 +4,7 @@ export { displayPath, formatIssue, sortIssues, type CasePath, type Issue, type S
 export { caseSchema, QUANTITY_PATTERN, ID_PATTERN, SCHEMA_ID } from './caseSchema.js';
 export type * from './plantTypes.js';
 export type * from './caseFileTypes.js';
-export { starterCase } from './starterCase.js';
+export { starterCase, type StarterUnits } from './starterCase.js';
 export { summarisePlant } from './summary.js';
 export { schemaFilePath } from './schemaLocation.js';
 export type * from './variantTypes.js';

@@ -3,6 +3,7 @@
 import { LinearModel, expr, term, type LinearExpression, type Variable, type VariableOptions } from '../lp/index.js';
 import type { Plant } from '../model/index.js';
 import type { BalanceNode, Stream } from './network.js';
+import { meanPumpEfficiency } from './feedwater.js';
 
 /** The point a pass linearises about. */
 export interface PassPoint {
@@ -48,8 +49,14 @@ export class BuildContext {
   readonly generation = expr();
   /** electricity used by modelled motors and pumps, kW (site demand is added by the builder) */
   readonly electricLoad = expr();
-  /** feedwater pumping shaft power, kW, declared by every unit fed from the deaerator */
+  /** feedwater pumps' ideal lift power v dp m, kW, declared by every unit fed from the deaerator */
+  readonly pumpLift = expr();
+  /** feedwater pumps' shaft power, kW: each pump's share of the lift over its own efficiency (set by the deaerator) */
   readonly pumpShaft = expr();
+  /** the pumps' mean efficiency this pass's feedwater enthalpies assume (lift / shaft at the point) */
+  readonly pumpEfficiency: number;
+  /** the largest lift per kg of feedwater in this pass, kJ/kg */
+  largestLift = 0;
   /** shaft power supplied to a driven machine or pump by turbines, kW, by machine id */
   readonly shaftSupply = new Map<string, LinearExpression>();
   /**
@@ -82,6 +89,7 @@ export class BuildContext {
     this.headerEnthalpy = new Map(point.headerEnthalpy);
     this.previous = point.previous;
     this.trust = point.trust;
+    this.pumpEfficiency = meanPumpEfficiency(plant, point.previous);
   }
 
   /**

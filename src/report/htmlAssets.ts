@@ -28,14 +28,18 @@ table.data tr.picked td { outline: 2px solid var(--ink); background: #fff6d8; }
 button { font: inherit; font-size: 12px; }
 details { margin: 8px 0; }
 summary { cursor: pointer; font-weight: bold; }
+/* Print: each balance diagram on its own A3 landscape page (the wall copy),
+   with its heading; the tables and charts on A4 portrait pages. */
+@page { size: A4 portrait; margin: 12mm; }
+@page wall { size: A3 landscape; margin: 8mm; }
 @media print {
-  body { background: #ffffff; padding: 0; font-size: 10pt; }
-  nav, .hint button { display: none; }
-  .diagram-wrap { overflow: visible; border: none; }
-  .diagram-wrap svg { width: 100%; height: auto; }
-  section { break-before: page; }
-  section#diagram { break-before: avoid; }
-  table.data { break-inside: auto; }
+  body { background: #ffffff; padding: 0; font-size: 9pt; }
+  nav, .hint, button { display: none; }
+  body > header, section#diagram > h2, section.scenario > h2, section.scenario > p.facts { page: wall; }
+  .diagram-wrap { page: wall; overflow: visible; border: none; break-inside: avoid; }
+  .diagram-wrap svg { width: 100%; height: auto; max-height: 245mm; }
+  h2 { break-after: avoid; margin-top: 14px; }
+  table.data { break-inside: auto; font-size: 8pt; }
   tr { break-inside: avoid; }
   details > * { display: block; }
 }

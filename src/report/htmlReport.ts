@@ -5,6 +5,9 @@ import type { Plant } from '../model/index.js';
 import type { PlantResult } from '../plant/index.js';
 import { barChartSvg } from './barChart.js';
 import { balanceDiagram } from './balanceDiagram.js';
+import type { TitleBlock } from './diagram/index.js';
+import type { ProjectEvaluation } from '../scenarios/index.js';
+import { projectChart, projectScenarioTable, projectSummaryTable } from './projectSections.js';
 import { displayFormat, steamValueNumber, type DisplayFormat } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
@@ -17,7 +20,7 @@ import { savingsSectionHtml } from './savingsTables.js';
 
 /** CSP source for the inline script: sha256 of its exact text (CSP Level 2, hash-source). */
 const SCRIPT_HASH = `sha256-${createHash('sha256').update(REPORT_SCRIPT, 'utf8').digest('base64')}`;
-import { annualCostChart, comparisonTable, scenarioCostChart, scenarioSectionHtml, type ScenarioSection } from './scenarioSections.js';
+import { annualCostChart, comparisonTable, failedScenariosHtml, scenarioCostChart, scenarioSectionHtml, type FailedScenario, type ScenarioSection } from './scenarioSections.js';
 
 export interface ReportOptions {
   /** e.g. the scenario shown; printed under the title */
@@ -26,6 +29,12 @@ export interface ReportOptions {
   generatedAt?: string;
   /** the case's scenarios, solved: compared side by side, each with its own diagram */
   scenarios?: ScenarioSection[];
+  /** the case's projects, evaluated over the scenarios */
+  projects?: ProjectEvaluation[];
+  /** scenarios that could not be solved: marked, with their diagnosis */
+  failedScenarios?: FailedScenario[];
+  /** the diagrams' title block (date, version, case hash); the scenario is filled in per diagram */
+  titleBlock?: TitleBlock;
   /** the savings found (`report --savings`): ranked measures, the roadmap and their charts */
   savings?: SavingsResult;
 }
@@ -48,25 +57,39 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     '</header>',
   );
   const scenarios = options.scenarios ?? [];
+  const failed = options.failedScenarios ?? [];
+  const projects = options.projects ?? [];
+  if (failed.length > 0) body.splice(body.length - 1, 0, `<p class="caution failed">${failed.length} scenario${failed.length === 1 ? '' : 's'} could not be solved: ${failed.map((scenario) => e(scenario.id)).join(', ')}. See <a href="#failed-scenarios">the diagnosis</a>.</p>`);
   body.push(
-    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${options.savings ? ' <a href="#savings">Savings</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
+    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${failed.length > 0 ? ' <a href="#failed-scenarios">Failed scenarios</a>' : ''}${projects.length > 0 ? ' <a href="#projects">Projects</a>' : ''}${options.savings ? ' <a href="#savings">Savings</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
   );
   body.push(
     `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
     '<p class="hint">Headers from the highest pressure at the top; sources feed them from above, users hang below, turbines and letdowns join them. Click a unit to find its row in the tables. <button type="button" id="fit-toggle">Actual size</button></p>',
-    `<div class="diagram-wrap fit">${balanceDiagram(result, format)}</div></section>`,
+    `<div class="diagram-wrap fit">${balanceDiagram(result, format, options.titleBlock ? { ...options.titleBlock, scenario: options.titleBlock.scenario ?? (scenarios.length > 0 ? 'plant as written' : undefined) } : null)}</div></section>`,
   );
   body.push('<section id="tables"><h2>Tables</h2>');
   for (const table of tables.filter((candidate) => candidate.id !== 'audit' && candidate.id !== 'independent-audit')) body.push(tableHtml(table));
   body.push('</section>');
   body.push('<section id="charts"><h2>Charts</h2><div class="charts">', costChart(result, format), valueChart(result, format), '</div></section>');
+  if (failed.length > 0) body.push(failedScenariosHtml(failed));
   if (scenarios.length > 0) {
     body.push(
       '<section id="scenarios"><h2>Scenarios</h2>',
       tableHtml(comparisonTable(scenarios)),
       `<div class="charts">${annualCostChart(scenarios)}${scenarioCostChart(scenarios)}</div>`,
       '</section>',
-      ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml)),
+      ...scenarios.map((section) => scenarioSectionHtml(section, tableHtml, options.titleBlock ? { ...options.titleBlock, scenario: `scenario ${section.id}: ${section.name}` } : null)),
+    );
+  }
+  if (projects.length > 0) {
+    body.push(
+      '<section id="projects"><h2>Projects</h2>',
+      tableHtml(projectSummaryTable(projects, format)),
+      tableHtml(projectScenarioTable(projects, format)),
+      `<div class="charts">${projectChart(projects, format)}</div>`,
+      '<p class="hint">Savings are differences of two solves of the whole plant, scenario by scenario, weighted by hours; capital and O&amp;M are as the case states them.</p>',
+      '</section>',
     );
   }
   if (options.savings) body.push(savingsSectionHtml(options.savings, format, tableHtml, e));

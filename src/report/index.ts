@@ -8,7 +8,7 @@ export { tablesMarkdown, tablesCsv } from './textTables.js';
 export { balanceDiagram, balanceDiagramLayout } from './balanceDiagram.js';
 export { barChartSvg, type Bar } from './barChart.js';
 export { htmlReport, plantDisplayFormat, objectiveWords, type ReportOptions } from './htmlReport.js';
-export { comparisonTable, annualCostChart, scenarioCostChart, scenarioSectionHtml, type ScenarioSection } from './scenarioSections.js';
+export { comparisonTable, annualCostChart, scenarioCostChart, scenarioSectionHtml, failedScenariosHtml, type FailedScenario, type ScenarioSection } from './scenarioSections.js';
 export { reportAssumptions, type Assumptions } from './assumptions.js';
 export * from './diagram/index.js';
 export { compareText, compareCsv, compareMarkdown } from './compareTables.js';

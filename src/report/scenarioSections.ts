@@ -5,6 +5,7 @@ import type { Plant } from '../model/index.js';
 import type { PlantResult } from '../plant/index.js';
 import { barChartSvg } from './barChart.js';
 import { balanceDiagram } from './balanceDiagram.js';
+import type { TitleBlock } from './diagram/index.js';
 import { displayFormat, type DisplayFormat } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
@@ -18,7 +19,30 @@ export interface ScenarioSection {
   result: PlantResult;
 }
 
+/** A scenario that could not be solved: the report marks it with its diagnosis. */
+export interface FailedScenario {
+  id: string;
+  name: string;
+  hours: number;
+  reason: string;
+  /** what failed and why, in plant terms (the diagnosis) */
+  message: string;
+}
+
 const COMPONENTS = ['fuel', 'power', 'steam', 'water', 'carbon'] as const;
+
+/** The scenarios that could not be solved, each with its diagnosis, and what the totals leave out. */
+export function failedScenariosHtml(failed: FailedScenario[]): string {
+  const e = escapeMarkup;
+  return [
+    '<section id="failed-scenarios" class="failed"><h2>Scenarios that could not be solved</h2>',
+    `<p class="caution">${failed.length === 1 ? 'This scenario has' : `These ${failed.length} scenarios have`} no balance. The scenario table, the charts and the annual total cover the solved scenarios only (${failed.reduce((total, scenario) => total + scenario.hours, 0)} h a year left out).</p>`,
+    '<ul>',
+    ...failed.map((scenario) => `<li><strong>${e(scenario.id)}</strong> (${e(scenario.name)}, ${scenario.hours} h a year): ${e(scenario.reason)}. ${e(scenario.message)}</li>`),
+    '</ul>',
+    '</section>',
+  ].join('\n');
+}
 
 function formatOf(plant: Plant): DisplayFormat {
   return displayFormat(plant.site.unitSystem, plant.site.currency, plant.site.atmosphericPressure);
@@ -72,7 +96,7 @@ export function scenarioCostChart(sections: ScenarioSection[]): string {
 }
 
 /** Diagram and tables of one scenario; `tableHtml` renders tables the same way as the main report. */
-export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table: ReportTable, prefix: string) => string): string {
+export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table: ReportTable, prefix: string) => string, block: TitleBlock | null = null): string {
   const format = formatOf(section.plant);
   const e = escapeMarkup;
   const prefix = `scenario-${section.id}`;
@@ -81,7 +105,7 @@ export function scenarioSectionHtml(section: ScenarioSection, tableHtml: (table:
   return [
     `<section id="${e(prefix)}" class="scenario"><h2>Scenario ${e(section.id)}: ${e(section.name)}</h2>`,
     `<p class="facts">${section.hours} h a year · ${format.money(section.result.totals.cost_per_h)} per hour · audit: largest mass residual ${format.massResidual(audit.max_mass_residual_kg_s)}, energy ${format.heatResidual(audit.max_energy_residual_kW)}; independent audit: ${audit.independent.ok ? 'every unit passes' : 'FAILS'}</p>`,
-    `<div class="diagram-wrap fit">${balanceDiagram(section.result, format)}</div>`,
+    `<div class="diagram-wrap fit">${balanceDiagram(section.result, format, block)}</div>`,
     `<details><summary>Tables of scenario ${e(section.id)}</summary>`,
     ...tables.map((table) => tableHtml(table, prefix)),
     '</details>',

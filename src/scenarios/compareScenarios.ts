@@ -1,5 +1,5 @@
 // Solving scenarios (or a sweep's steps) side by side.
-import { HOURS_PER_YEAR, type CaseVariants } from '../model/index.js';
+import { HOURS_PER_YEAR, type CaseVariants, type Plant, type ScenarioPlant } from '../model/index.js';
 import { annualTotals, scenarioRun, type AnnualTotals, type ScenarioRun } from './annual.js';
 import { solvePlants, type PoolOptions } from './solvePool.js';
 
@@ -8,12 +8,23 @@ export interface Comparison {
   annual: AnnualTotals;
 }
 
-/** The named scenarios (all when ids is empty), in the order asked; unknown ids throw a ScenarioLookupError. */
-export async function compareScenarios(variants: CaseVariants, ids: string[] = [], options: PoolOptions = {}): Promise<Comparison> {
-  const chosen = ids.length === 0 ? variants.scenarios : ids.map((id) => findScenario(variants, id));
+/** The id that names the plant as written among scenario ids, as sweeps and scenario bases name it. */
+export const AS_WRITTEN = 'plant';
+
+/**
+ * The named scenarios (all when ids is empty), in the order asked; unknown
+ * ids throw a ScenarioLookupError. With `asWritten`, the id "plant" is the
+ * plant as written: a column for a whole year beside the scenarios, an
+ * alternative to them, so it is left out of the annual total.
+ */
+export async function compareScenarios(variants: CaseVariants, ids: string[] = [], options: PoolOptions = {}, asWritten: Plant | null = null): Promise<Comparison> {
+  const pick = (id: string): ScenarioPlant =>
+    id === AS_WRITTEN && asWritten ? { id: AS_WRITTEN, name: 'the plant as written', hours: HOURS_PER_YEAR, plant: asWritten } : findScenario(variants, id);
+  const chosen = ids.length === 0 ? variants.scenarios : ids.map(pick);
   const outcomes = await solvePlants(chosen.map((scenario) => scenario.plant), options);
   const runs = chosen.map((scenario, index) => scenarioRun(scenario.id, scenario.name, scenario.hours, outcomes[index]));
-  return { runs, annual: annualTotals(runs) };
+  const counted = runs.filter((_, index) => chosen[index].plant !== asWritten);
+  return { runs, annual: annualTotals(counted) };
 }
 
 /**
@@ -35,6 +46,6 @@ export class ScenarioLookupError extends Error {}
 
 export function findScenario(variants: CaseVariants, id: string): CaseVariants['scenarios'][number] {
   const scenario = variants.scenarios.find((entry) => entry.id === id);
-  if (!scenario) throw new ScenarioLookupError(`no scenario "${id}" in the case; known: ${variants.scenarios.map((entry) => entry.id).join(', ')}`);
+  if (!scenario) throw new ScenarioLookupError(`no scenario "${id}" in the case; known: ${variants.scenarios.map((entry) => entry.id).join(', ')}, and ${AS_WRITTEN} for the plant as written`);
   return scenario;
 }

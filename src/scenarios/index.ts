@@ -2,7 +2,7 @@
 // when there are several), annual weighting, project evaluation, and the
 // letdown-to-power screen.
 export { annualTotals, scenarioRun, COST_COMPONENTS, type AnnualTotals, type CostComponentName, type ScenarioRun } from './annual.js';
-export { compareScenarios, findScenario, runSweep, ScenarioLookupError, type Comparison } from './compareScenarios.js';
+export { AS_WRITTEN, compareScenarios, findScenario, runSweep, ScenarioLookupError, type Comparison } from './compareScenarios.js';
 export { internalRateOfReturn, netPresentValue, projectCashFlows, simplePayback } from './economics.js';
 export { evaluateProject, evaluateProjects, ProjectLookupError, type ProjectEvaluation, type ProjectScenarioChange, type ProjectsOutcome } from './evaluateProjects.js';
 export { plantOfJob, jobLabel, type Job, type JobOptions, type JobOutcome } from './jobs.js';

@@ -80,6 +80,31 @@ describe('steamwright init', () => {
     expect(readFileSync(file, 'utf8')).toMatch(/^# yaml-language-server: \$schema=.*schema\/case\.schema\.json\n/);
   });
 
+  test('--units us writes the same starter in US units; both have a turbine, scenarios and a project, and both solve', async () => {
+    const folder = mkdtempSync(join(tmpdir(), 'steamwright-init-'));
+    const si = join(folder, 'si.yaml');
+    const us = join(folder, 'us.yaml');
+    expect((await runCli(['init', si])).code).toBe(0);
+    expect((await runCli(['init', us, '--units', 'us'])).code).toBe(0);
+    const usText = readFileSync(us, 'utf8');
+    expect(usText).toContain('units: us');
+    expect(usText).toMatch(/psig/);
+    expect(usText).not.toMatch(/\d (barg|degC|t\/h|EUR)\b/);
+    for (const file of [si, us]) {
+      const text = readFileSync(file, 'utf8');
+      for (const key of ['turbines:', 'scenarios:', 'projects:']) expect(text, `${file} has ${key}`).toContain(key);
+      const check = await runCli(['check', file]);
+      expect(check.stderr, file).toBe('');
+      const solved = await runCli(['solve', file, '--json']);
+      expect(solved.code, solved.stderr).toBe(0);
+      const result = JSON.parse(solved.stdout);
+      expect(result.units.find((unit: { id: string }) => unit.id === 'bpt_1').values.power_kW).toBeGreaterThan(0);
+    }
+    // The same invented plant in either system (prices aside): boiler steam within the rounding of the US figures.
+    const steam = await Promise.all([si, us].map(async (file) => JSON.parse((await runCli(['solve', file, '--json'])).stdout).units.find((unit: { id: string }) => unit.id === 'boiler_1').values.steam_kg_s as number));
+    expect(Math.abs(steam[1] / steam[0] - 1)).toBeLessThan(0.03);
+  });
+
   test('refuses to overwrite an existing file, exit 2', async () => {
     const folder = mkdtempSync(join(tmpdir(), 'steamwright-init-'));
     const file = join(folder, 'plant.yaml');

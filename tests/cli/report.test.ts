@@ -77,6 +77,51 @@ describe('steamwright report', () => {
     expect(readdirSync(dir)).toEqual(['short.yaml']);
   });
 
+  it('a scenario that cannot be met: the report is still written whole, marks it with the diagnosis solve gives, and the exit code is 1', async () => {
+    const dir = folder();
+    const casePath = join(dir, 'creamery.yaml');
+    const text = readFileSync(join(projectRoot, 'cases', 'millbrook-creamery.yaml'), 'utf8');
+    // Summer (and "reduced", which starts from summer) asks for far more heating steam than both boilers can raise.
+    const broken = text.replace('- { id: space_heating, steam: 0.5 klb/h }', '- { id: space_heating, steam: 500 klb/h }');
+    expect(broken).not.toBe(text);
+    writeFileSync(casePath, broken);
+    const run = await runCli(['report', casePath, '--out', join(dir, 'r.html')]);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain('wrote');
+    expect(run.stderr).toMatch(/2 of 3 scenarios could not be solved; the report marks them:\n {2}summer: the case cannot be met.*\n {2}reduced: the case cannot be met/);
+    expect(run.stderr).not.toContain('    at ');
+    const html = readFileSync(join(dir, 'r.html'), 'utf8');
+    expect(html).toMatch(/<\/html>\n$/);
+    expect(html).toContain('<section id="failed-scenarios"');
+    // The diagnosis in the report is the one `solve --scenario summer` prints.
+    const solve = await runCli(['solve', casePath, '--scenario', 'summer']);
+    expect(solve.code).toBe(1);
+    const diagnosis = /cannot be met: ([^.]*)\./.exec(solve.stderr)?.[1] ?? 'missing';
+    expect(html).toContain(diagnosis);
+    // The other scenarios are reported as usual.
+    expect(html).toContain('<section id="scenario-winter" class="scenario">');
+    expect(html).not.toContain('<section id="scenario-summer"');
+  });
+
+  it('carries the projects: savings by component, payback, NPV and IRR, as evaluate computes them', async () => {
+    const dir = folder();
+    const out = join(dir, 'mill.html');
+    const run = await runCli(['report', DEMO, '--out', out]);
+    expect(run.code).toBe(0);
+    const html = readFileSync(out, 'utf8');
+    expect(html).toContain('<section id="projects">');
+    const evaluated = await runCli(['evaluate', DEMO, '--json', '--no-screen']);
+    expect(evaluated.code).toBe(0);
+    const projects = JSON.parse(evaluated.stdout).projects as { id: string; ok: boolean; npv: number; annual_saving: number }[];
+    expect(projects.length).toBe(2);
+    for (const project of projects) {
+      const row = new RegExp(`<tr data-id="${project.id}">(.*?)</tr>`).exec(html.slice(html.indexOf('data-table="projects"')))?.[1] ?? '';
+      const npv = Math.round(project.npv).toLocaleString('en-US');
+      expect(row, project.id).toContain(`>${npv} EUR at`);
+      expect(row, project.id).toContain(`>${Math.round(project.annual_saving).toLocaleString('en-US')} EUR<`);
+    }
+  });
+
   it('a file that cannot be written is exit code 1 and leaves no temporary file', async () => {
     const dir = folder();
     const run = await runCli(['report', DEMO, '--out', join(dir, 'missing', 'r.html')], { cwd: dir });

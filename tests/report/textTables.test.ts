@@ -36,9 +36,10 @@ describe('tablesMarkdown', () => {
 describe('tablesCsv', () => {
   it('writes each table as a block keyed by its id, quoting by RFC 4180 and neutralising formulas', () => {
     expect(tablesCsv(TABLES).split('\r\n')).toEqual([
-      'table,header,pressure',
-      'headers,hp,42.0 barg',
-      'headers,a|b,-',
+      // One unit down the column: it goes to the heading, the cells keep the number; "-" (none) is empty.
+      'table,header,pressure (barg)',
+      'headers,hp,42.0',
+      'headers,a|b,',
       '',
       'table,where,flow',
       '',
@@ -47,5 +48,20 @@ describe('tablesCsv', () => {
       `odd,"say ""hi"", then\nleave",'=1+1`,
       '',
     ]);
+  });
+
+  it('keeps columns of words or of mixed units as shown, and drops thousands separators and plus signs from numbers', () => {
+    const tables: ReportTable[] = [
+      {
+        id: 't',
+        title: 'T',
+        headings: ['cost', 'change', 'mixed', 'words', 'count'],
+        rows: [
+          ['1,866,568 EUR', '+2.50 kW', '3 t/h', 'at minimum steam', '12'],
+          ['-389,333 EUR', '-26 kW', '4 kW', '-', '1,200'],
+        ],
+      },
+    ];
+    expect(tablesCsv(tables).split('\r\n')).toEqual(['table,cost (EUR),change (kW),mixed,words,count', 't,1866568,2.50,3 t/h,at minimum steam,12', `t,-389333,-26,4 kW,-,1200`, '']);
   });
 });

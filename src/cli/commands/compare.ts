@@ -3,7 +3,7 @@
 import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
 import { compareCsv, compareMarkdown, compareText, plantDisplayFormat } from '../../report/index.js';
-import { compareScenarios, progressLine, runSweep, ScenarioLookupError, type Comparison } from '../../scenarios/index.js';
+import { AS_WRITTEN, compareScenarios, progressLine, runSweep, ScenarioLookupError, type Comparison } from '../../scenarios/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { checkOneOf, checkWorkers } from '../optionChecks.js';
@@ -27,7 +27,7 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
   builder: (yargs: Argv<object>) =>
     yargs
       .positional('case', { type: 'string', demandOption: true, describe: 'the plant case file (YAML)' })
-      .option('scenarios', { type: 'string', describe: 'comma-separated scenario ids, in column order (default: all)' })
+      .option('scenarios', { type: 'string', describe: 'comma-separated scenario ids, in column order (default: all); "plant" is the plant as written, a whole year beside the scenarios, not in the annual total' })
       .option('sweep', { type: 'string', describe: 'solve the steps of this sweep instead of the scenarios' })
       .option('json', { type: 'boolean', default: false, describe: 'print scenarios[] as JSON (SI units)' })
       .option('csv', { type: 'boolean', default: false, describe: 'print the table as CSV' })
@@ -41,8 +41,9 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
         checkWorkers(args.workers);
         return true;
       })
-      .example('$0 compare cases/mill.yaml', 'every scenario side by side')
-      .example('$0 compare cases/mill.yaml --sweep import_price --csv', 'a sweep as CSV') as Argv<CompareArgs>,
+      .example('$0 compare cases/kestrel-bay-board-mill.yaml', 'every scenario side by side')
+      .example('$0 compare cases/kestrel-bay-board-mill.yaml --scenarios plant,winter,summer', 'the plant as written beside two scenarios')
+      .example('$0 compare cases/kestrel-bay-board-mill.yaml --sweep import_price --csv', 'a sweep as CSV') as Argv<CompareArgs>,
   handler: async (args) => {
     const loaded = await loadCaseOrFail(args.case);
     const progress = progressLine('compare', process.stderr, args.json);
@@ -58,8 +59,9 @@ export const compareCommand: CommandModule<object, CompareArgs> = {
         title = `${loaded.plant.name}: sweep "${args.sweep}" of ${sweep.target} on ${sweep.scenario === 'plant' ? 'the plant as written' : `scenario "${sweep.scenario}"`}, differences against the first step`;
       } else {
         const ids = args.scenarios ? args.scenarios.split(',').map((id) => id.trim()).filter((id) => id !== '') : [];
-        comparison = await compareScenarios(loaded.variants, ids, options);
-        title = `${loaded.plant.name}: scenarios side by side, differences against ${comparison.runs[0]?.id ?? 'the first'}`;
+        comparison = await compareScenarios(loaded.variants, ids, options, loaded.plant);
+        const asWritten = ids.includes(AS_WRITTEN) ? ` ("${AS_WRITTEN}" is the plant as written, left out of the annual total)` : '';
+        title = `${loaded.plant.name}: scenarios side by side, differences against ${comparison.runs[0]?.id ?? 'the first'}${asWritten}`;
       }
     } catch (error) {
       if (error instanceof ScenarioLookupError) throw new CliError(`${args.case}: ${error.message}`, EXIT_USAGE);

@@ -45,8 +45,8 @@ export const evaluateCommand: CommandModule<object, EvaluateArgs> = {
         checkWorkers(args.workers);
         return true;
       })
-      .example('$0 evaluate cases/mill.yaml', 'every project and the letdown screen')
-      .example('$0 evaluate cases/mill.yaml --project bpt_mp_lp --json', 'one project as JSON') as Argv<EvaluateArgs>,
+      .example('$0 evaluate cases/kestrel-bay-board-mill.yaml', 'every project and the letdown screen')
+      .example('$0 evaluate cases/kestrel-bay-board-mill.yaml --project bpt_mp_lp --json', 'one project as JSON') as Argv<EvaluateArgs>,
   handler: async (args) => {
     const efficiency = percentOption(args['turbine-efficiency'], 'turbine-efficiency', SCREEN_DEFAULTS.isentropicEfficiency);
     const generator = percentOption(args['generator-efficiency'], 'generator-efficiency', SCREEN_DEFAULTS.generatorEfficiency);

@@ -7,7 +7,8 @@ import { initCommand } from './init.js';
 import { reportCommand } from './report.js';
 import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
+import { watchCommand } from './watch.js';
 import { savingsCommand } from './savings.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, savingsCommand, reportCommand, checkCommand, initCommand, stateCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, savingsCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand];

@@ -2,13 +2,14 @@
 import { link, unlink, writeFile } from 'node:fs/promises';
 import { dirname, relative, sep } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
-import { schemaFilePath, starterCase } from '../../model/index.js';
+import { schemaFilePath, starterCase, type StarterUnits } from '../../model/index.js';
 import { CliError, EXIT_USAGE } from '../errors.js';
 import { temporaryName } from '../outputFiles.js';
 import { holdPending, releasePending } from '../pendingFiles.js';
 
 interface InitArgs {
   file: string;
+  units: StarterUnits;
 }
 
 function errorCode(error: unknown): string | undefined {
@@ -32,7 +33,9 @@ export const initCommand: CommandModule<object, InitArgs> = {
   builder: (yargs: Argv<object>) =>
     yargs
       .positional('file', { type: 'string', demandOption: true, describe: 'the case file to create' })
-      .example('$0 init plant.yaml', 'start a new case') as Argv<InitArgs>,
+      .option('units', { choices: ['si', 'us'] as const, default: 'si' as const, describe: 'unit system of the starter: si (barg, degC, t/h, EUR) or us (psig, degF, klb/h, USD)' })
+      .example('$0 init plant.yaml', 'start a new case in SI units')
+      .example('$0 init plant.yaml --units us', 'the same starter in US units') as Argv<InitArgs>,
   handler: async (args) => {
     const target = args.file;
     if (target.trim() === '') throw new CliError('init needs a file name, found an empty one', EXIT_USAGE);
@@ -41,7 +44,7 @@ export const initCommand: CommandModule<object, InitArgs> = {
     const temporary = temporaryName(target);
     holdPending(temporary);
     try {
-      await writeFile(temporary, starterCase(schema), { flag: 'wx' });
+      await writeFile(temporary, starterCase(schema, args.units), { flag: 'wx' });
     } catch (error) {
       releasePending(temporary);
       await unlink(temporary).catch(() => undefined);
@@ -58,6 +61,6 @@ export const initCommand: CommandModule<object, InitArgs> = {
       await unlink(temporary).catch(() => undefined);
       releasePending(temporary);
     }
-    process.stdout.write(`wrote ${target}; edit it, then run: steamwright check ${target}\n`);
+    process.stdout.write(`wrote ${target}; edit it, then run: npx steamwright check ${target}\n`);
   },
 };

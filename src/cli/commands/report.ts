@@ -1,16 +1,17 @@
 // `steamwright report CASE`: the balance diagram and a self-contained HTML
 // report, plus the same tables as Markdown or CSV.
+import { createHash } from 'node:crypto';
+import { readFileSync } from 'node:fs';
 import { basename, extname } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
-import { getBackend, type BackendName } from '../../lp/index.js';
-import { plantResult, solvePlant } from '../../plant/index.js';
-import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown, type ScenarioSection } from '../../report/index.js';
-import { compareScenarios } from '../../scenarios/index.js';
+import type { BackendName } from '../../lp/index.js';
+import { packageVersion } from '../../version.js';
+import type { TitleBlock } from '../../report/diagram/index.js';
+import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown } from '../../report/index.js';
 import { findSavings, type SavingsResult } from '../../savings/index.js';
-import { readFile } from 'node:fs/promises';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
-import { solveFailure } from '../solveFailure.js';
-import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { solveForReport } from '../reportSolve.js';
+import { CliError, EXIT_PROBLEMS } from '../errors.js';
 import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
@@ -26,9 +27,15 @@ interface ReportArgs {
   savings: boolean;
 }
 
-/** "cases/mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
+/** "cases/kestrel-bay-board-mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
 export function defaultReportName(casePath: string, scenario?: string): string {
   return `${basename(casePath, extname(casePath))}${scenario ? `.${scenario}` : ''}.report.html`;
+}
+
+/** The drawing's title block: which scenario, drawn when, by which version, from which case file (short SHA-256). */
+export function titleBlockFor(casePath: string, scenario: string | undefined): TitleBlock {
+  const caseHash = createHash('sha256').update(readFileSync(casePath)).digest('hex').slice(0, 8);
+  return { scenario, date: new Date().toISOString().slice(0, 10), version: packageVersion(), caseHash };
 }
 
 const toStdout = (target: string | undefined): boolean => target === '' || target === '-';
@@ -47,10 +54,10 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
       .option('savings', { type: 'boolean', default: false, describe: 'add a savings section: the ranked measures and the roadmap (as `steamwright savings`), with their charts' })
-      .example('$0 report cases/mill.yaml', 'write mill.report.html here')
-      .example('$0 report cases/mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
-      .example('$0 report cases/mill.yaml --scenario winter', 'one scenario: mill.winter.report.html')
-      .example('$0 report cases/mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
+      .example('$0 report cases/kestrel-bay-board-mill.yaml', 'write kestrel-bay-board-mill.report.html here')
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --scenario winter', 'one scenario: kestrel-bay-board-mill.winter.report.html')
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
   handler: async (args) => {
     // Every output is named and checked before any work is done.
     const requests: OutputRequest[] = [];
@@ -61,46 +68,24 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     if (args.csv !== undefined) requests.push({ option: '--csv', path: toStdout(args.csv) ? '-' : args.csv });
     const planned = await planOutputs([{ option: 'case file', path: args.case }], requests);
     const loaded = await loadCaseOrFail(args.case, 'no report was written');
-    const variants = loaded.variants;
-    let plant = loaded.plant;
-    let subtitle: string | undefined;
-    if (args.scenario !== undefined) {
-      const scenario = variants.implicitBase ? undefined : variants.scenarios.find((entry) => entry.id === args.scenario);
-      if (!scenario) {
-        const known = variants.implicitBase ? 'the case has no scenarios' : `known: ${variants.scenarios.map((entry) => entry.id).join(', ')}`;
-        throw new CliError(`--scenario: no scenario "${args.scenario}" in ${args.case}; ${known}`, EXIT_USAGE);
-      }
-      plant = scenario.plant;
-      subtitle = `Scenario ${scenario.id}: ${scenario.name} (${scenario.hours} h a year)`;
-    }
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
-    const outcome = await solvePlant(plant, { objective, backend: getBackend(args.solver) });
-    if (!outcome.ok) throw solveFailure(args.case, args.scenario, outcome, args.solver);
-    const result = plantResult(outcome);
+    const solved = await solveForReport(args.case, loaded, { scenario: args.scenario, objective, solver: args.solver });
+    const { plant, result, subtitle, sections, failed, projects } = solved;
     const format = plantDisplayFormat(plant);
-
-    // Without --scenario, a case with scenarios reports them all side by side.
-    const sections: ScenarioSection[] = [];
-    if (args.scenario === undefined && !variants.implicitBase) {
-      const comparison = await compareScenarios(variants, [], { objective, backend: args.solver });
-      for (const [index, run] of comparison.runs.entries()) {
-        if (!run.ok) throw new CliError(`${args.case} scenario "${run.id}": ${run.message}`, EXIT_PROBLEMS);
-        sections.push({ id: run.id, name: run.name, hours: run.hours, plant: variants.scenarios[index].plant, result: run.result });
-      }
-    }
 
     let savings: SavingsResult | undefined;
     if (args.savings) {
-      const text = (await readFile(args.case)).toString('utf8').replace(/^\uFEFF/, '');
-      savings = await findSavings(text, loaded.plant, variants, { backend: args.solver, objective });
+      const text = readFileSync(args.case).toString('utf8').replace(/^\uFEFF/, '');
+      savings = await findSavings(text, loaded.plant, loaded.variants, { backend: args.solver, objective });
     }
 
+    const block = titleBlockFor(args.case, subtitle);
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, ...(savings ? { savings } : {}) }),
-      '--svg': () => `${balanceDiagram(result, format)}\n`,
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, projects, titleBlock: block, ...(savings ? { savings } : {}) }),
+      '--svg': () => `${balanceDiagram(result, format, block)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),
     };
@@ -113,5 +98,10 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const notice = outputs.filter((output) => output.kind !== 'stdout').map((output) => `wrote ${output.path}\n`).join('');
     if (outputs.some((output) => output.kind === 'stdout')) process.stderr.write(notice);
     else process.stdout.write(notice);
+    // The report is complete and marks what failed; the exit code still says so.
+    const problems: string[] = [];
+    if (failed.length > 0) problems.push(`${failed.length} of ${failed.length + sections.length} scenarios could not be solved; the report marks them:`, ...failed.map((scenario) => `  ${scenario.id}: ${scenario.message}`));
+    for (const project of projects) if (!project.ok) problems.push(`project ${project.id} could not be evaluated; the report marks it:`, ...project.failed.map((failure) => `  ${failure.scenario} (${failure.which}): ${failure.message}`));
+    if (problems.length > 0) throw new CliError(`${args.case}: ${problems.join('\n')}`, EXIT_PROBLEMS);
   },
 };

@@ -38,8 +38,8 @@ export const solveCommand: CommandModule<object, SolveArgs> = {
       .option('export-lp', { type: 'string', describe: 'also write the final linear model in CPLEX LP format to FILE' })
       .option('scenario', { type: 'string', describe: 'solve this scenario of the case instead of the plant as written' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
-      .example('$0 solve cases/mill.yaml', 'solve the demo plant')
-      .example('$0 solve cases/mill.yaml --objective max-power --json', 'most on-site power, as JSON') as Argv<SolveArgs>,
+      .example('$0 solve cases/kestrel-bay-board-mill.yaml', 'solve the demo board mill')
+      .example('$0 solve cases/kestrel-bay-board-mill.yaml --objective max-power --json', 'most on-site power, as JSON') as Argv<SolveArgs>,
   handler: async (args) => {
     const requests = [{ option: 'the summary', path: '-' }];
     if (args['export-lp'] !== undefined) requests.push({ option: '--export-lp', path: args['export-lp'] });

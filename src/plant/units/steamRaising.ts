@@ -18,8 +18,9 @@ export interface SteamRaising {
   heatPerKg: number;
   /** blowdown per kg of steam */
   blowdownPerKg: number;
-  /** feedwater enthalpy at the boiler inlet and pump work per kg, kJ/kg */
+  /** feedwater enthalpy at the boiler inlet, ideal lift and pump shaft work per kg, kJ/kg */
   feedwaterH: number;
+  lift: number;
   pumpWork: number;
   /** saturated drum water, kJ/kg */
   drumWaterH: number;
@@ -29,13 +30,15 @@ export interface SteamRaising {
 /** The fixed states of a boiler at a header for one pass. */
 export function steamRaisingPoint(context: BuildContext, headerId: string, outlet: FixedState, blowdownFraction: number): SteamRaising {
   const pressure = context.pressure(headerId);
-  const feedwater = feedwaterAt(context.plant, pressure);
+  const feedwater = feedwaterAt(context.plant, pressure, context.pumpEfficiency);
+  context.largestLift = Math.max(context.largestLift, feedwater.lift);
   const drumWaterH = saturatedLiquid(pressure).h;
   const blowdownPerKg = blowdownFraction / (1 - blowdownFraction);
   return {
     heatPerKg: outlet.h - feedwater.h + blowdownPerKg * (drumWaterH - feedwater.h),
     blowdownPerKg,
     feedwaterH: feedwater.h,
+    lift: feedwater.lift,
     pumpWork: feedwater.pumpWork,
     drumWaterH,
     pressure,
@@ -45,7 +48,7 @@ export function steamRaisingPoint(context: BuildContext, headerId: string, outle
 /**
  * Declares the streams of a boiler making `steam` (kg/s) into `headerId`:
  * feedwater F = S / (1 - b) from the deaerator, blowdown B = S b / (1 - b) of
- * saturated drum water, and the pump work to lift the feedwater.
+ * saturated drum water, and the pumps' lift of the feedwater.
  */
 export function declareSteamRaising(
   context: BuildContext,
@@ -64,5 +67,5 @@ export function declareSteamRaising(
   if (point.blowdownPerKg > 0) {
     context.stream({ from: owner, to: liquidNode(blowdownTo), kind: 'blowdown', flow: expr().addExpression(steam, point.blowdownPerKg), h: point.drumWaterH, p: point.pressure });
   }
-  context.pumpShaft.addExpression(steam, feedPerKg * point.pumpWork);
+  context.pumpLift.addExpression(steam, feedPerKg * point.lift);
 }

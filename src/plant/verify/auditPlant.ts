@@ -72,7 +72,7 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
   auditFlashTanks(plant, solved, ledger, attempt);
   auditDeaerator(plant, solved, states, ledger, attempt);
   auditDeaeratorVent(plant, solved, ledger);
-  const pumpShaft = auditFeedPumps(solved, ledger);
+  const pumpShaft = auditFeedPumps(plant, solved, states, ledger);
   auditPower(plant, solved, ledger, turbinePower, pumpShaft);
 
   const units: UnitAudit[] = [];

@@ -37,6 +37,15 @@ export class AuditStates {
   readonly feedwater: Point;
   readonly deaeratorVapour: Point;
   readonly makeup: Point;
+  /**
+   * The pumps' mean efficiency: lift over shaft power, each pump's lift its
+   * solved shaft power times its own efficiency from the case. The solve's
+   * shares are themselves checked against the drives (see power.ts) and the
+   * feedwater's needs (see supplies.ts).
+   */
+  readonly pumpEfficiency: number;
+  /** ideal lift v dp m of all feedwater pumped, kW, as boilers are audited */
+  lift = 0;
 
   constructor(
     readonly plant: Plant,
@@ -50,6 +59,7 @@ export class AuditStates {
     this.feedwater = point(saturatedLiquid(plant.deaerator.pressure));
     this.deaeratorVapour = point(saturatedVapour(plant.deaerator.pressure));
     this.makeup = point(statePT(plant.site.atmosphericPressure, plant.site.makeupWater.temperature));
+    this.pumpEfficiency = meanEfficiency(plant, solved);
   }
 
   header(id: string): Point {
@@ -64,16 +74,20 @@ export class AuditStates {
 
   /**
    * Feedwater pump work per kg lifted from the deaerator to `pressure`:
-   * w = v_f (p - p_da) / eta (incompressible liquid). The plant's convention is
-   * the first listed pump's efficiency for all feedwater, 100 % with no pump,
-   * and no work at all when the case says feedwater_pumps: none.
+   * w = v_f (p - p_da) / eta (incompressible liquid), at the pumps' mean
+   * efficiency; 100 % with no pump described, and no work at all when the
+   * case says feedwater_pumps: none.
    */
   pumpWork(pressure: number): number {
+    return this.pumpLift(pressure) / this.pumpEfficiency;
+  }
+
+  /** The ideal lift per kg, v_f (p - p_da), kJ/kg. */
+  pumpLift(pressure: number): number {
     if (!this.plant.deaerator.pumpWork) return 0;
-    const efficiency = this.plant.deaerator.feedwaterPumps[0]?.pumpEfficiency ?? 1;
     const liquid = saturatedLiquid(this.plant.deaerator.pressure);
     // v [m3/kg] x dp [MPa] x 1000 = kJ/kg
-    return Math.max(0, (liquid.v * (pressure - this.plant.deaerator.pressure) * 1000) / efficiency);
+    return Math.max(0, liquid.v * (pressure - this.plant.deaerator.pressure) * 1000);
   }
 
   /** Feedwater at a boiler's inlet: deaerator water plus the pump's work. */
@@ -87,6 +101,20 @@ export class AuditStates {
   get ambient(): number {
     return this.plant.site.ambientTemperature;
   }
+}
+
+/** Lift over shaft power of the pumps as the solve shared the work; the first pump's efficiency when none runs. */
+function meanEfficiency(plant: Plant, solved: SolvedPlant): number {
+  const pumps = plant.deaerator.feedwaterPumps;
+  if (pumps.length === 0) return 1;
+  let lift = 0;
+  let shaft = 0;
+  for (const pump of pumps) {
+    const share = Math.max(0, solved.deaerator.pumps.find((entry) => entry.id === pump.id)?.shaft ?? 0);
+    shaft += share;
+    lift += share * pump.pumpEfficiency;
+  }
+  return shaft > 1e-9 ? lift / shaft : pumps[0].pumpEfficiency;
 }
 
 /** A controlled header sits at its set point from the case; a floating one where the solve left it. */

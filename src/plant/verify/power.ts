@@ -25,6 +25,12 @@ export function auditPower(plant: Plant, solved: SolvedPlant, ledger: Ledger, tu
   if (pumps.length > 0) {
     const driven = pumps.reduce((total, pump) => total + turbineShaft(pump.id), 0) + solved.deaerator.pumpMotorShaft;
     ledger.check(FEED_PUMPS, 'shaft power from turbines and motors', pumpShaft, driven, 'kW', BALANCE_TOLERANCE, 1e-3);
+    // Each pump's share is driven by its own turbine and motor.
+    for (const pump of pumps) {
+      const share = solved.deaerator.pumps.find((entry) => entry.id === pump.id);
+      if (!share) throw new Error(`the solve reports no shaft power for feedwater pump "${pump.id}". The plant and the solve must match.`);
+      ledger.check(FEED_PUMPS, `${pump.id} shaft power from its turbine and motor`, share.shaft, turbineShaft(pump.id) + share.motorShaft, 'kW', BALANCE_TOLERANCE, 1e-3);
+    }
     motors += solved.deaerator.pumpMotorElectric;
   } else {
     // No pumps described: their work is bought as electricity.

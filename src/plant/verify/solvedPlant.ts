@@ -15,7 +15,16 @@ export interface SolvedPlant {
   letdowns: { id: string; steam: number; spray: number; outlet: number }[];
   users: { id: string; steam: number }[];
   flashTanks: { id: string; vapour: number; liquid: number }[];
-  deaerator: { heatingSteam: number; makeup: number; vent: number; pumpShaft: number; pumpMotorElectric: number; pumpMotorShaft: number };
+  deaerator: {
+    heatingSteam: number;
+    makeup: number;
+    vent: number;
+    pumpShaft: number;
+    pumpMotorElectric: number;
+    pumpMotorShaft: number;
+    /** each feedwater pump's shaft power and its motor's part of it, kW, as the solve shared the lift */
+    pumps: { id: string; shaft: number; motorShaft: number }[];
+  };
   machines: { id: string; motorShaft: number; motorElectric: number }[];
   absorptionChillers: { id: string; steam: number; absorptionCooling: number; electricCooling: number; electric: number }[];
   trapGroups: { id: string; steam: number }[];
@@ -88,6 +97,12 @@ export function solvedPlantFromReports(headers: readonly ReportedHeader[], units
       pumpShaft: num(deaerator, 'pump_shaft_kW'),
       pumpMotorElectric: num(deaerator, 'pump_motor_kW'),
       pumpMotorShaft: num(deaerator, 'pump_motor_shaft_kW'),
+      pumps: Object.keys(deaerator.values)
+        .filter((key) => key.startsWith('pump_shaft_kW:'))
+        .map((key) => {
+          const id = key.slice('pump_shaft_kW:'.length);
+          return { id, shaft: num(deaerator, key), motorShaft: num(deaerator, `pump_motor_shaft_kW:${id}`) };
+        }),
     },
     machines: byKind('machine').map((unit) => ({ id: unit.id, motorShaft: num(unit, 'motor_shaft_kW'), motorElectric: num(unit, 'motor_electric_kW') })),
     absorptionChillers: byKind('absorptionChiller').map((unit) => ({

@@ -36,6 +36,7 @@ function raiseSteam(ledger: Ledger, states: AuditStates, unit: FiredBoiler | Hea
   const outlet = deliveredSteam(pressure, unit.outlet);
   const blowdown = (steam * unit.blowdownFraction) / (1 - unit.blowdownFraction);
   const feed = states.boilerFeed(pressure);
+  states.lift += (steam + blowdown) * states.pumpLift(pressure);
   const drum = point(saturatedLiquid(pressure));
   ledger.stream({ from: 'deaerator', to: FEED_PUMPS, label: `feedwater for ${unit.id}`, m: steam + blowdown, ...states.feedwater });
   ledger.stream({ from: FEED_PUMPS, to: unit.id, label: 'feedwater', m: steam + blowdown, ...feed });
@@ -85,10 +86,19 @@ export function auditBoilers(plant: Plant, solved: SolvedPlant, states: AuditSta
   }
 }
 
-/** The pumps' shaft work against the solve's. */
-export function auditFeedPumps(solved: SolvedPlant, ledger: Ledger): number {
+/**
+ * The pumps' shaft work against the solve's, and the lift the pumps' shares
+ * give (each share times its pump's own efficiency) against the ideal lift
+ * v dp m the boilers' feedwater needs.
+ */
+export function auditFeedPumps(plant: Plant, solved: SolvedPlant, states: AuditStates, ledger: Ledger): number {
   const work = ledger.crossings.filter((crossing) => crossing.volume === FEED_PUMPS).reduce((total, crossing) => total + crossing.kW, 0);
   ledger.check(FEED_PUMPS, 'pump shaft power', work, solved.deaerator.pumpShaft, 'kW', BALANCE_TOLERANCE, 1e-3);
+  const pumps = plant.deaerator.feedwaterPumps;
+  if (pumps.length > 0 && plant.deaerator.pumpWork) {
+    const given = pumps.reduce((total, pump) => total + (solved.deaerator.pumps.find((entry) => entry.id === pump.id)?.shaft ?? 0) * pump.pumpEfficiency, 0);
+    ledger.check(FEED_PUMPS, 'lift of the pumps (shaft x own efficiency) against v dp of the feedwater', states.lift, given, 'kW', BALANCE_TOLERANCE, 1e-3);
+  }
   return work;
 }
 

@@ -33,11 +33,29 @@ export interface DiagramItem {
   lines: string[];
   /** drawn as a warning: a vent */
   alarm: boolean;
+  /** a unit that is off or carries no flow: drawn greyed */
+  idle?: boolean;
+  /** fed from the feedwater rail: its column is kept clear up to the top */
+  feedwater?: boolean;
+  /** a turbine's exhaust to its condenser, kg/s: its line runs on down to the water side */
+  toCondenser_kg_s?: number;
+}
+
+/** What an engineering drawing carries in its corner: what, which case, when, by what. */
+export interface TitleBlock {
+  /** e.g. "scenario winter: Winter, full production" or "plant as written" */
+  scenario?: string;
+  /** the day it was drawn, YYYY-MM-DD */
+  date?: string;
+  /** tool version */
+  version?: string;
+  /** short hash of the case file */
+  caseHash?: string;
 }
 
 export interface BottomNode {
   id: string;
-  kind: 'deaerator' | 'flashTank' | 'machine' | 'power' | 'condensate';
+  kind: 'deaerator' | 'flashTank' | 'machine' | 'power' | 'condensate' | 'condenser';
   lines: string[];
   /** lines of the node that are vents (drawn in the vent style) */
   alarmLines: number[];
@@ -45,6 +63,10 @@ export interface BottomNode {
 
 export interface DiagramModel {
   title: string;
+  /** the title block's lines, or null when none was asked for */
+  titleBlock: string[] | null;
+  /** feedwater from the deaerator, and the items (by id) it feeds: boilers and spray */
+  feedwater: { flow_kg_s: number; to: string[]; label: string } | null;
   headers: DiagramHeader[];
   items: DiagramItem[];
   bottom: BottomNode[];
@@ -56,7 +78,7 @@ const SOURCE_GLYPHS: Record<string, Glyph> = { boiler: 'boiler', heatRecoveryBoi
 const TINY = 1e-7;
 
 /** The diagram's content from a solved plant. `names` maps header ids to their display names. */
-export function diagramModel(result: PlantResult, format: DisplayFormat): DiagramModel {
+export function diagramModel(result: PlantResult, format: DisplayFormat, block: TitleBlock | null = null): DiagramModel {
   const headers = [...result.headers].sort((a, b) => b.pressure_MPa - a.pressure_MPa);
   const headerIndex = new Map(headers.map((header, index) => [header.id, index]));
   const units = new Map(result.units.map((unit) => [unit.id, unit]));
@@ -70,7 +92,8 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
     lines: [
       header.name && header.name !== header.id ? `${header.id} · ${header.name}` : header.id,
       `${format.pressure(header.pressure_MPa)} · ${format.temperature(header.T_K)}`,
-      `flow ${flow(header.inflow_kg_s)} · steam value ${format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit)}`,
+      `flow ${flow(header.inflow_kg_s)}`,
+      `steam value ${format.valuePerMass(header.marginal_value_per_t, result.marginal_value_unit)}`,
     ],
     throughput_kg_s: header.inflow_kg_s,
   }));
@@ -84,13 +107,15 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
       const mass = flowSum(streams);
       const glyph: Glyph = SOURCE_GLYPHS[kindOf(from)] ?? (kindOf(from) === 'flashTank' ? 'flashVapour' : from === 'deaerator' ? 'spray' : 'other');
       items.push({
-        id: glyph === 'spray' ? `${header.id}.spray` : glyph === 'flashVapour' ? `${from}.vapour` : from,
+        // A flash tank whose vapour feeds a header is drawn here, once, with its liquid side in its label.
+        id: glyph === 'spray' ? `${header.id}.spray` : from,
         glyph,
         placement: { kind: 'feeds', header: index },
         flow_kg_s: mass,
         exitFlows_kg_s: [],
-        lines: feederLines(from, glyph, mass, unit, format),
+        lines: glyph === 'flashVapour' ? flashLines(from, unit, result, format) : feederLines(from, glyph, mass, unit, format),
         alarm: false,
+        idle: unit !== undefined && (unit.values.running === false || mass <= TINY),
       });
     }
     // Outflows not to a turbine or letdown: users, deaerator steam, vents.
@@ -110,8 +135,9 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
           placement: { kind: 'hangs', header: index },
           flow_kg_s: mass,
           exitFlows_kg_s: [],
-          lines: [to, `${flow(mass)} · ${format.heatRate(num(unit, 'heat_kW'))}`, `condensate back ${flow(num(unit, 'condensate_returned_kg_s'))}`],
+          lines: [to, `${flow(mass)} · ${format.heatRate(num(unit, 'heat_kW'))}`, `returned ${flow(num(unit, 'condensate_returned_kg_s'))}`],
           alarm: false,
+          idle: mass <= TINY,
         });
       } else if (to === 'deaerator') {
         items.push({ id: `${header.id}.deaerator`, glyph: 'heatingSteam', placement: { kind: 'hangs', header: index }, flow_kg_s: mass, exitFlows_kg_s: [], lines: ['to deaerator', flow(mass)], alarm: false });
@@ -129,6 +155,7 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
     const to: number[] = [];
     const exitFlows: number[] = [];
     const exitLines: string[] = [];
+    let condensed = 0;
     for (const [target, streams] of exits) {
       const mass = flowSum(streams);
       const index = headerIndex.get(target);
@@ -138,6 +165,7 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
         exitLines.push(`→ ${target} ${flow(mass)}`);
       } else {
         exitLines.push(`→ condenser ${flow(mass)}`);
+        condensed += mass;
       }
     }
     const order = to.map((_, position) => position).sort((a, b) => to[a] - to[b]);
@@ -156,15 +184,61 @@ export function diagramModel(result: PlantResult, format: DisplayFormat): Diagra
       exitFlows_kg_s: order.map((position) => exitFlows[position]),
       lines: [unit.id, first, ...exitLines],
       alarm: false,
+      idle: off || inletFlow <= TINY,
+      ...(unit.kind === 'turbine' && exits.size > to.length ? { toCondenser_kg_s: condensed } : {}),
     });
   }
 
-  return { title: result.plant, headers: diagramHeaders, items, bottom: bottomNodes(result, format), maxFlow_kg_s: maxFlow(result) };
+  const drawn = new Set(items.map((item) => item.id));
+  const bottom = bottomNodes(result, format).filter((node) => node.kind !== 'flashTank' || !drawn.has(node.id));
+  const condensers = items.filter((item) => item.toCondenser_kg_s !== undefined);
+  if (condensers.length > 0) {
+    const condensateTo = (id: string): string => result.streams.find((stream) => stream.from === id && stream.kind === 'condensate')?.to ?? 'drain';
+    const lines = ['condenser', ...condensers.map((item) => `${item.id} ${flow(item.toCondenser_kg_s ?? 0)} → ${condensateTo(item.id)}`)];
+    bottom.splice(1, 0, { id: 'condenser', kind: 'condenser', lines, alarmLines: [] });
+  }
+  // Feedwater: from the deaerator up to every boiler and the spray it feeds.
+  const feedStreams = result.streams.filter((stream) => stream.from === 'deaerator' && stream.kind === 'feedwater' && stream.mass_kg_s > TINY);
+  const fed = [...new Set(feedStreams.map((stream) => stream.to))].filter((id) => drawn.has(id));
+  const feedFlow = sum(feedStreams);
+  for (const item of items) if (fed.includes(item.id)) item.feedwater = true;
+  const feedwater = fed.length > 0 ? { flow_kg_s: feedFlow, to: fed, label: `boiler feedwater ${flow(feedFlow)}` } : null;
+  const model: DiagramModel = { title: result.plant, titleBlock: block ? titleBlockLines(result, format, block) : null, feedwater, headers: diagramHeaders, items, bottom, maxFlow_kg_s: maxFlow(result) };
+  return withDegreeSigns(model);
+}
+
+function titleBlockLines(result: PlantResult, format: DisplayFormat, block: TitleBlock): string[] {
+  const objective: Record<string, string> = { minimumCost: 'minimum cost', minimumFuel: 'minimum fuel', maximumPower: 'maximum on-site power', minimumCo2: 'minimum CO2' };
+  return [
+    result.plant,
+    block.scenario ?? 'plant as written',
+    `objective: ${objective[result.objective] ?? result.objective} · ${format.money(result.totals.cost_per_h)} per hour`,
+    [block.date ? `drawn ${block.date}` : null, `steamwright ${block.version ?? ''}`.trim(), block.caseHash ? `case ${block.caseHash}` : null].filter((part) => part !== null).join(' · '),
+  ];
+}
+
+/** Degrees as a drawing writes them: °C and °F. */
+function withDegreeSigns(model: DiagramModel): DiagramModel {
+  const degrees = (lines: string[]): string[] => lines.map((line) => line.replace(/ deg([CF])\b/g, ' °$1'));
+  return {
+    ...model,
+    headers: model.headers.map((header) => ({ ...header, lines: degrees(header.lines) })),
+    items: model.items.map((item) => ({ ...item, lines: degrees(item.lines) })),
+    bottom: model.bottom.map((node) => ({ ...node, lines: degrees(node.lines) })),
+    titleBlock: model.titleBlock ? degrees(model.titleBlock) : null,
+  };
+}
+
+/** A flash tank drawn where its vapour feeds a header: what comes in, and where vapour and liquid go. */
+function flashLines(id: string, unit: UnitReport | undefined, result: PlantResult, format: DisplayFormat): string[] {
+  const { flow } = format;
+  const vapour = result.streams.find((stream) => stream.from === id && stream.kind === 'flashVapour');
+  const liquid = result.streams.find((stream) => stream.from === id && stream.kind === 'flashLiquid');
+  return [id, `in ${flow(num(unit, 'inflow_kg_s'))}`, `vapour → ${vapour?.to ?? '-'} ${flow(num(unit, 'vapour_kg_s'))}`, `liquid → ${liquid?.to ?? '-'} ${flow(num(unit, 'liquid_kg_s'))}`];
 }
 
 function feederLines(from: string, glyph: Glyph, mass: number, unit: UnitReport | undefined, format: DisplayFormat): string[] {
   if (glyph === 'spray') return ['spray water', format.flow(mass)];
-  if (glyph === 'flashVapour') return [from, `flash vapour ${format.flow(mass)}`];
   const lines = [from];
   if (unit?.values.running === false) lines.push('off');
   else lines.push(format.flow(mass));

@@ -15,12 +15,18 @@ export const FONT_SIZE = 11;
 const TITLE_FONT = 15;
 const GLYPH = 24;
 const LABEL_OFFSET = 6;
-const COLUMN_GAP = 22;
+const COLUMN_GAP = 16;
 const TOP_PAD = 18;
 const BOTTOM_PAD = 26;
 const MARGIN = 16;
 const HEADER_LABEL_GAP = 8;
 const NODE_PAD = 7;
+/** Space between the zone of items hanging from a header and the zone of items feeding the next one down. */
+const ZONE_GAP = 26;
+/** Height of the strip under the title that carries the feedwater rail. */
+const RAIL_SPACE = 26;
+/** Distance of the feedwater riser from the right end of the headers. */
+const RISER_GAP = 18;
 
 export type LegendStyle = 'steam' | 'water' | 'vent' | 'pass';
 
@@ -93,6 +99,10 @@ export interface DiagramLayout {
   /** the condensate collector line */
   collector: { y: number; x1: number; x2: number };
   nodes: PlacedNode[];
+  /** the feedwater path from the deaerator to the rail, and a drop into each boiler it feeds */
+  feedwater: { path: { x: number; y: number }[]; drops: { x: number; y1: number; y2: number; passes: number[] }[]; label: PlacedLabel } | null;
+  /** the title block: plant, scenario, objective, cost, date, version, case hash */
+  titleBlock: { box: Box; label: PlacedLabel } | null;
   legendY: number;
   /** legend entries: a line sample starting at sampleX, then its label */
   legend: { style: LegendStyle; sampleX: number; label: PlacedLabel }[];
@@ -121,27 +131,40 @@ function unionBox(boxes: Box[]): Box {
   return { x, y, width: right - x, height: bottom - y };
 }
 
-/** First and last band an item occupies; band b lies above header b (band H below the last header). */
-export function bandsOf(item: DiagramItem): [number, number] {
+/** The band an item's glyph sits in: a feeder the band above its header, a hanging item or crossing the band below. */
+export function homeBand(item: DiagramItem): number {
   const placement = item.placement;
-  if (placement.kind === 'feeds') return [placement.header, placement.header];
+  if (placement.kind === 'feeds') return placement.header;
+  if (placement.kind === 'hangs') return placement.header + 1;
+  return placement.from + 1;
+}
+
+/**
+ * First and last band an item's column is taken over: its home band, and
+ * further where its lines run on: a boiler fed from the feedwater rail at
+ * the top up to band 0, a condensing turbine down to the water side.
+ */
+export function bandsOf(item: DiagramItem, headerCount = Infinity): [number, number] {
+  const placement = item.placement;
+  if (placement.kind === 'feeds') return [item.feedwater ? 0 : placement.header, placement.header];
   if (placement.kind === 'hangs') return [placement.header + 1, placement.header + 1];
-  return [placement.from + 1, Math.max(placement.from + 1, ...placement.to)];
+  const last = Math.max(placement.from + 1, ...placement.to);
+  return [placement.from + 1, item.toCondenser_kg_s !== undefined && Number.isFinite(headerCount) ? headerCount : last];
 }
 
 const RANK = { crosses: 0, feeds: 1, hangs: 2 } as const;
 
 /** Column of each item (by index in model.items). */
-export function assignColumns(items: DiagramItem[]): number[] {
+export function assignColumns(items: DiagramItem[], headerCount = Infinity): number[] {
   const order = items.map((_, index) => index).sort((a, b) => {
-    const [startA] = bandsOf(items[a]);
-    const [startB] = bandsOf(items[b]);
+    const [startA] = bandsOf(items[a], headerCount);
+    const [startB] = bandsOf(items[b], headerCount);
     return startA - startB || RANK[items[a].placement.kind] - RANK[items[b].placement.kind] || a - b;
   });
   const lastBand: number[] = [];
   const columns = items.map(() => 0);
   for (const index of order) {
-    const [start, end] = bandsOf(items[index]);
+    const [start, end] = bandsOf(items[index], headerCount);
     let column = lastBand.findIndex((last) => last < start);
     if (column === -1) column = lastBand.push(end) - 1;
     else lastBand[column] = end;
@@ -160,7 +183,7 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
   // Gutter: the header labels, left of every column.
   const gutter = MARGIN + Math.max(120, ...model.headers.map((header) => labelWidth(header.lines))) + COLUMN_GAP;
 
-  const columns = assignColumns(model.items);
+  const columns = assignColumns(model.items, headerCount);
   const columnCount = Math.max(0, ...columns.map((column) => column + 1));
   const columnWidths = Array.from({ length: columnCount }, () => 0);
   model.items.forEach((item, index) => {
@@ -169,13 +192,25 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
   const columnX: number[] = [];
   columnWidths.reduce((x, width, column) => ((columnX[column] = x), x + width), gutter);
 
-  // Band heights: the tallest item label starting in the band, or the header label below it.
-  const bandHeights = Array.from({ length: headerCount + 1 }, (_, band) => (band < headerCount ? blockHeight(model.headers[band].lines) + HEADER_LABEL_GAP + 14 : 30));
+  // Band heights. A band has two zones: at its top, the items that hang from
+  // the header above it (users, turbines and letdowns leaving it); at its
+  // bottom, the items that feed the header below it. So a user sits right under
+  // the header it draws from, never beside the next header down.
+  const hangZone = Array.from({ length: headerCount + 1 }, () => 0);
+  const feedZone = Array.from({ length: headerCount + 1 }, () => 0);
   model.items.forEach((item) => {
-    const [start] = bandsOf(item);
-    bandHeights[start] = Math.max(bandHeights[start], TOP_PAD + Math.max(GLYPH, blockHeight(item.lines)) + BOTTOM_PAD);
+    const start = homeBand(item);
+    const tall = Math.max(GLYPH, blockHeight(item.lines));
+    if (item.placement.kind === 'feeds') feedZone[start] = Math.max(feedZone[start], tall);
+    else hangZone[start] = Math.max(hangZone[start], tall);
   });
-  const titleHeight = MARGIN + TITLE_FONT * 1.6;
+  const bandHeights = Array.from({ length: headerCount + 1 }, (_, band) => {
+    const header = band < headerCount ? blockHeight(model.headers[band].lines) + HEADER_LABEL_GAP + 14 : 30;
+    const zones = hangZone[band] + feedZone[band] + (hangZone[band] > 0 && feedZone[band] > 0 ? ZONE_GAP : 0);
+    return Math.max(header, zones > 0 ? TOP_PAD + zones + BOTTOM_PAD : 0);
+  });
+  // Room under the title for the feedwater rail, when there is one.
+  const titleHeight = MARGIN + TITLE_FONT * 1.6 + (model.feedwater ? RAIL_SPACE : 0);
   const bandTops: number[] = [titleHeight];
   for (let band = 1; band <= headerCount; band++) bandTops[band] = bandTops[band - 1] + bandHeights[band - 1];
   const headerY = (index: number): number => bandTops[index + 1];
@@ -188,11 +223,15 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
     return { id: header.id, y, x1: MARGIN, x2: contentRight, width: Math.max(3, strokeFor(header.throughput_kg_s, model.maxFlow_kg_s) + 1), label: labelAt(header.id, header.lines, MARGIN, baseline, fontSize, true) };
   });
 
+  // The water side's collector line, under the last band.
+  const collectorY = bandTops[headerCount] + bandHeights[headerCount] + 6;
+
   const items: PlacedItem[] = model.items.map((item, index) => {
     const column = columns[index];
     const x = columnX[column] + GLYPH / 2;
-    const [start] = bandsOf(item);
-    const top = bandTops[start];
+    const start = homeBand(item);
+    // Feeders sit at the bottom of their band, just above the header they feed; the rest at its top.
+    const top = item.placement.kind === 'feeds' ? bandTops[start] + bandHeights[start] - BOTTOM_PAD - feedZone[start] - TOP_PAD : bandTops[start];
     const glyphY = top + TOP_PAD + GLYPH / 2;
     const label = labelAt(item.id, item.lines, columnX[column] + GLYPH + LABEL_OFFSET, top + TOP_PAD - 2 + fontSize * 0.95 - 4, fontSize, true, item.alarm ? item.lines.map((_, line) => line) : []);
     const width = strokeFor(item.flow_kg_s, model.maxFlow_kg_s);
@@ -217,14 +256,18 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
         remaining -= item.exitFlows_kg_s[exit];
         y = headerY(target);
       });
-      const last = Math.max(placement.from, ...placement.to);
+      let last = Math.max(placement.from, ...placement.to);
+      if (item.toCondenser_kg_s !== undefined) {
+        // The exhaust runs on down past the lower headers to the condenser on the water side.
+        segments.push({ x, y1: y, y2: collectorY, width: strokeFor(item.toCondenser_kg_s, model.maxFlow_kg_s) });
+        last = headerCount;
+      }
       for (let header = placement.from + 1; header < last; header++) if (!placement.to.includes(header)) passes.push({ y: headerY(header) });
     }
     return { item, x, glyphY, segments, joins, passes, label };
   });
 
-  // The water side: a collector line, then the nodes in rows.
-  const collectorY = bandTops[headerCount] + bandHeights[headerCount] + 6;
+  // The nodes of the water side, in rows under the collector.
   const nodesTop = collectorY + 22;
   const rowLimit = Math.max(contentRight, 640);
   const nodes: PlacedNode[] = [];
@@ -248,10 +291,52 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
     x += width + mark + COLUMN_GAP;
     rowHeight = Math.max(rowHeight, height);
   }
-  const legendY = rowTop + rowHeight + 26;
+  const nodesBottom = rowTop + rowHeight;
+
+  // Feedwater: from the deaerator down under the nodes, across to a riser
+  // right of the headers, up to a rail under the title, and down into each
+  // boiler it feeds.
+  let feedwater: DiagramLayout['feedwater'] = null;
+  const deaeratorNode = nodes.find((node) => node.node.kind === 'deaerator');
+  if (model.feedwater && deaeratorNode) {
+    const riserX = contentRight + RISER_GAP;
+    const railY = bandTops[0] - RAIL_SPACE / 2;
+    const underY = nodesBottom + 12;
+    const fedIds = new Set(model.feedwater.to);
+    const drops = items
+      .filter((placed) => fedIds.has(placed.item.id))
+      .map((placed) => {
+        const header = placed.item.placement.kind === 'feeds' ? placed.item.placement.header : 0;
+        return { x: placed.x, y1: railY, y2: placed.glyphY - GLYPH / 2, passes: headers.slice(0, header).map((entry) => entry.y) };
+      });
+    const railX1 = Math.min(riserX, ...drops.map((drop) => drop.x));
+    const startX = deaeratorNode.box.x + deaeratorNode.box.width / 2;
+    const path = [
+      { x: startX, y: deaeratorNode.box.y + deaeratorNode.box.height },
+      { x: startX, y: underY },
+      { x: riserX, y: underY },
+      { x: riserX, y: railY },
+      { x: railX1, y: railY },
+    ];
+    const text = model.feedwater.label;
+    const label = labelAt('feedwater', [text], riserX - textWidth(text, fontSize) - 4, railY - 5, fontSize, false);
+    feedwater = { path, drops, label };
+  }
+
+  const legendY = nodesBottom + 26 + (feedwater ? 14 : 0);
   const legendWidth = LEGEND.reduce((total, [, text]) => total + LEGEND_SAMPLE + 6 + textWidth(text, fontSize) + COLUMN_GAP, MARGIN);
-  const width = Math.max(rowLimit, legendWidth, textWidth(model.title, TITLE_FONT, true) + MARGIN, ...nodes.map((node) => node.box.x + node.box.width + (node.ventMark ? GLYPH + 10 : 0))) + MARGIN;
-  const height = legendY + 20 + MARGIN;
+  const width = Math.max(rowLimit, legendWidth, textWidth(model.title, TITLE_FONT, true) + MARGIN, (feedwater ? contentRight + RISER_GAP + 8 : 0), ...nodes.map((node) => node.box.x + node.box.width + (node.ventMark ? GLYPH + 10 : 0))) + MARGIN;
+  let height = legendY + 20 + MARGIN;
+
+  // The title block, bottom right as on a drawing.
+  let titleBlock: DiagramLayout['titleBlock'] = null;
+  if (model.titleBlock) {
+    const boxWidth = labelWidth(model.titleBlock) + 2 * NODE_PAD;
+    const boxHeight = blockHeight(model.titleBlock) + 2 * NODE_PAD;
+    const box = { x: width - MARGIN - boxWidth, y: legendY + 18, width: boxWidth, height: boxHeight };
+    titleBlock = { box, label: labelAt('title-block', model.titleBlock, box.x + NODE_PAD, box.y + NODE_PAD + fontSize * 0.95, fontSize, true) };
+    height = box.y + boxHeight + MARGIN;
+  }
 
   const legend: DiagramLayout['legend'] = [];
   let legendX = MARGIN;
@@ -260,7 +345,15 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
     legend.push({ style, sampleX: legendX, label });
     legendX = label.box.x + label.box.width + COLUMN_GAP;
   }
-  const labels = [title, ...headers.map((header) => header.label), ...items.map((item) => item.label), ...nodes.map((node) => node.label), ...legend.map((entry) => entry.label)];
+  const labels = [
+    title,
+    ...headers.map((header) => header.label),
+    ...items.map((item) => item.label),
+    ...nodes.map((node) => node.label),
+    ...legend.map((entry) => entry.label),
+    ...(feedwater ? [feedwater.label] : []),
+    ...(titleBlock ? [titleBlock.label] : []),
+  ];
   const resolved = resolveCollisions(labels.map((label) => ({ box: label.box, fixed: label.owner === 'title' })));
   let moved = 0;
   labels.forEach((label, index) => {
@@ -270,5 +363,6 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
     label.baseline += shift;
     label.box = resolved.boxes[index];
   });
-  return { width, height: height + Math.max(0, ...resolved.shifts), title, headers, items, collector: { y: collectorY, x1: MARGIN, x2: width - MARGIN }, nodes, legendY, legend, labels, moved };
+  const collectorEnd = feedwater ? contentRight + RISER_GAP - 10 : width - MARGIN;
+  return { width, height: height + Math.max(0, ...resolved.shifts), title, headers, items, collector: { y: collectorY, x1: MARGIN, x2: collectorEnd }, nodes, feedwater, titleBlock, legendY, legend, labels, moved };
 }

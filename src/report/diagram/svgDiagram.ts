@@ -44,7 +44,7 @@ export function renderDiagramSvg(layout: DiagramLayout, description: string): st
     const box = placed.box;
     const kind = placed.node.kind;
     const dashed = kind === 'condensate' || kind === 'power';
-    if (kind === 'deaerator' || kind === 'flashTank' || kind === 'condensate') {
+    if (kind === 'deaerator' || kind === 'flashTank' || kind === 'condensate' || kind === 'condenser') {
       parts.push(`<line x1="${f(box.x + 14)}" x2="${f(box.x + 14)}" y1="${f(collector.y)}" y2="${f(box.y)}" stroke="${WATER_INK}" stroke-width="2" stroke-dasharray="${WATER_DASH}"/>`);
     }
     parts.push(
@@ -52,6 +52,23 @@ export function renderDiagramSvg(layout: DiagramLayout, description: string): st
     );
   }
   parts.push('</g>');
+
+  if (layout.feedwater) {
+    // Feedwater: the deaerator's water back to the boilers, in the water style.
+    const feed = layout.feedwater;
+    const points = feed.path.map((point) => `${f(point.x)},${f(point.y)}`).join(' ');
+    parts.push(`<g class="feedwater" data-id="feedwater"><polyline points="${points}" fill="none" stroke="${WATER_INK}" stroke-width="2.5" stroke-dasharray="${WATER_DASH}"/>`);
+    for (const drop of feed.drops) {
+      for (const y of drop.passes) parts.push(`<rect class="pass" x="${f(drop.x - 5)}" y="${f(y - 7)}" width="10" height="14" fill="${PAPER}"/>`);
+      parts.push(`<line x1="${f(drop.x)}" x2="${f(drop.x)}" y1="${f(drop.y1)}" y2="${f(drop.y2)}" stroke="${WATER_INK}" stroke-width="2" stroke-dasharray="${WATER_DASH}"/>`);
+    }
+    parts.push(`${textSvg(feed.label, 'feedwater-label')}</g>`);
+  }
+
+  if (layout.titleBlock) {
+    const box = layout.titleBlock.box;
+    parts.push(`<g class="title-block"><rect x="${f(box.x)}" y="${f(box.y)}" width="${f(box.width)}" height="${f(box.height)}" fill="#ffffff" stroke="${HEADER_INK}" stroke-width="1.5"/>${textSvg(layout.titleBlock.label, 'title-block-label')}</g>`);
+  }
 
   parts.push('<g class="legend">');
   for (const entry of layout.legend) {
@@ -67,7 +84,8 @@ function itemSvg(placed: PlacedItem): string {
   const item = placed.item;
   const vent = item.glyph === 'vent';
   const ink = vent ? VENT_INK : STEAM_INK;
-  const pieces: string[] = [`<g class="unit unit-${item.glyph}" data-id="${escapeMarkup(item.id)}">`];
+  // An idle unit (off, or no flow) is drawn greyed, so the running plant stands out.
+  const pieces: string[] = [`<g class="unit unit-${item.glyph}${item.idle ? ' idle' : ''}" data-id="${escapeMarkup(item.id)}"${item.idle ? ' opacity="0.35"' : ''}>`];
   // Gaps where the line passes a header it does not join.
   for (const pass of placed.passes) {
     const width = Math.max(...placed.segments.map((segment) => segment.width)) + 5;

@@ -57,6 +57,8 @@ export function generatedDiagram(seed = 7): DiagramModel {
   add({ id: 'h4.vent', glyph: 'vent', placement: { kind: 'hangs', header: 4 }, flow_kg_s: 1.1, lines: ['VENT', '3.96 t/h to air'], alarm: true });
   return {
     title: 'Generated plant: 5 headers, 40 units',
+    titleBlock: ['Generated plant', 'plant as written', 'objective: minimum cost · 1,234.56 EUR per hour', 'drawn 2026-01-01 · steamwright 0.0.0 · case 0123abcd'],
+    feedwater: { flow_kg_s: 30, to: items.filter((item) => item.glyph === 'boiler').map((item) => item.id), label: 'feedwater from the deaerator 108 t/h' },
     headers,
     items,
     bottom: [
