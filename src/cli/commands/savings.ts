@@ -61,8 +61,8 @@ export const savingsCommand: CommandModule<object, SavingsArgs> = {
         if (toOut > 1) throw new CliError('only one of --json, --md and --csv may go to standard output; give the others a FILE');
         return true;
       })
-      .example('$0 savings cases/mill.yaml', 'the ranked measures and the roadmap')
-      .example('$0 savings cases/mill.yaml --rank payback --md savings.md', 'ranked by payback, tables also as Markdown') as Argv<SavingsArgs>,
+      .example('$0 savings cases/orchard-vale-foods.yaml', 'the ranked measures and the roadmap')
+      .example('$0 savings cases/orchard-vale-foods.yaml --rank payback --md savings.md', 'ranked by payback, tables also as Markdown') as Argv<SavingsArgs>,
   handler: async (args) => {
     const requests: OutputRequest[] = [];
     if (args.md !== undefined) requests.push({ option: '--md', path: toStdout(args.md) ? '-' : args.md });
