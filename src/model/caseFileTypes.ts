@@ -22,6 +22,10 @@ export interface CaseFile {
   flash_tanks?: FlashTankEntry[];
   deaerator: DeaeratorEntry;
   machines?: MachineEntry[];
+  absorption_chillers?: AbsorptionChillerEntry[];
+  steam_traps?: TrapGroupEntry[];
+  insulation_survey?: InsulationRepairEntry[];
+  costs?: CostsEntry;
   objective?: 'minimum_cost' | 'minimum_fuel' | 'maximum_power' | 'minimum_co2';
   solver?: SolverEntry;
   scenarios?: ScenarioEntry[];
@@ -54,6 +58,8 @@ export interface ChangesEntry {
   users?: ChangedItemEntry[];
   flash_tanks?: ChangedItemEntry[];
   machines?: ChangedItemEntry[];
+  absorption_chillers?: ChangedItemEntry[];
+  steam_traps?: ChangedItemEntry[];
   site?: Record<string, unknown>;
   power?: Record<string, unknown>;
   deaerator?: Record<string, unknown>;
@@ -74,6 +80,8 @@ export interface AddEntry {
   users?: UserEntry[];
   flash_tanks?: FlashTankEntry[];
   machines?: MachineEntry[];
+  absorption_chillers?: AbsorptionChillerEntry[];
+  steam_traps?: TrapGroupEntry[];
 }
 
 export interface ScenarioEntry {
@@ -336,4 +344,51 @@ export interface MeterEntry {
   to?: string;
   uncertainty: QuantityText;
   confidence?: QuantityText;
+}
+
+/** A chilled-water plant: absorption chillers on steam up to their capacity, electric chillers for the rest. */
+export interface AbsorptionChillerEntry {
+  id: string;
+  name?: string;
+  header: string;
+  cooling: QuantityText;
+  capacity: QuantityText;
+  effect: 'single' | 'double';
+  cop?: number;
+  /** "0.65 kW/TR" or "0.18 kW/kW" */
+  electric_chillers: string;
+  condensate?: CondensateEntry;
+}
+
+/** Steam traps on one header from a survey. */
+export interface TrapGroupEntry {
+  id: string;
+  name?: string;
+  header: string;
+  installed: number;
+  /** a count, or a share such as "15 %" */
+  failed_open: number | QuantityText;
+  /** "1/8 in", "0.125 in", "3.2 mm" */
+  orifice: string;
+  discharge_coefficient?: number;
+}
+
+/** Unit costs for savings measures, each in the site currency. */
+export interface CostsEntry {
+  back_pressure_turbine?: string;
+  absorption_chilling?: string;
+  trap_repair?: string;
+  condensate_return?: string;
+  insulation?: string;
+  flash_tank?: string;
+  life?: number | string;
+  discount_rate?: QuantityText;
+}
+
+/** Bare pipe on one header from an insulation survey. */
+export interface InsulationRepairEntry {
+  header: string;
+  /** "80 m" or "260 ft" */
+  bare_length: string;
+  heat_loss_after?: QuantityText;
 }

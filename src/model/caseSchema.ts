@@ -280,6 +280,43 @@ const defs: Record<string, Schema> = {
     shaft_power: quantity('power', '400 kW', 'shaft power it needs while running'),
     motor_efficiency: percent('efficiency of its electric motor; leave out if only a turbine drives it', '95 %'),
   }, ['id', 'type', 'shaft_power']),
+  absorptionChiller: object('a chilled-water plant: absorption chillers on steam up to their capacity, electric chillers for the rest of the cooling demand', {
+    id, name,
+    header: reference('header the absorption generator takes steam from'),
+    cooling: quantity('power', '350 TR', 'cooling demand of the chilled-water plant (kW, MW or TR, tons of refrigeration)'),
+    capacity: quantity('power', '400 TR', 'absorption cooling that can be made; 0 when there are only electric chillers'),
+    effect: choice(['single', 'double'], 'single-effect (low-pressure steam) or double-effect (higher pressure, higher COP)'),
+    cop: { type: 'number', exclusiveMinimum: 0, maximum: 3, description: 'cooling over the heat the steam gives up; default 0.7 single-effect, 1.2 double-effect', examples: [0.7] },
+    electric_chillers: { type: 'string', description: 'electricity of the electric chillers the absorption cooling displaces, per ton or per kW of cooling: "0.65 kW/TR" or "0.18 kW/kW"', examples: ['0.65 kW/TR'] },
+    condensate: ref('condensate'),
+  }, ['id', 'header', 'cooling', 'capacity', 'effect', 'electric_chillers']),
+  trapGroup: object('steam traps on one header, from a trap survey', {
+    id, name,
+    header: reference('header the traps drain'),
+    installed: { type: 'integer', minimum: 0, description: 'traps installed' },
+    failed_open: {
+      description: 'traps found failed open (blowing steam): a count, or a share of those installed such as "15 %"',
+      oneOf: [{ type: 'integer', minimum: 0 }, percent('share of the installed traps failed open', '15 %')],
+      'x-message': 'expected a count such as 12 or a share such as "15 %"',
+    },
+    orifice: { type: 'string', description: 'orifice diameter of the traps: "1/8 in", "0.125 in" or "3.2 mm"', examples: ['1/8 in'] },
+    discharge_coefficient: { type: 'number', exclusiveMinimum: 0, maximum: 1, description: 'discharge coefficient on Napier\'s orifice relation; default 0.73 (matches the DOE Steam Tip Sheet #1 table)' },
+  }, ['id', 'header', 'installed', 'failed_open', 'orifice']),
+  insulationRepair: object('bare pipe on one header found by an insulation survey', {
+    header: reference('header whose piping is bare'),
+    bare_length: { type: 'string', description: 'length of bare pipe: "80 m" or "260 ft"', examples: ['80 m'] },
+    heat_loss_after: quantity('power', '10 kW', 'the header\'s whole heat loss once insulated; default 10 % of its heat_loss'),
+  }, ['header', 'bare_length']),
+  costs: object('unit costs for savings measures (screening estimates); each left out takes a default whose source check --verbose names', {
+    back_pressure_turbine: { type: 'string', description: 'installed cost of a back-pressure turbine generator per kW', examples: ['600 USD/kW'] },
+    absorption_chilling: { type: 'string', description: 'installed cost of absorption chilling per ton of refrigeration or per kW of cooling', examples: ['1500 USD/TR'] },
+    trap_repair: { type: 'string', description: 'cost of repairing or replacing one failed trap', examples: ['350 USD/trap'] },
+    condensate_return: { type: 'string', description: 'installed cost of condensate return per t/h (or klb/h) returned', examples: ['20000 USD/(t/h)'] },
+    insulation: { type: 'string', description: 'cost of insulation repaired per m (or ft)', examples: ['120 USD/m'] },
+    flash_tank: { type: 'string', description: 'installed cost of one flash tank with its piping and trap', examples: ['30000 USD'] },
+    life: { type: ['number', 'string'], description: 'economic life of measures, years; default 15', examples: [15, '15 years'] },
+    discount_rate: percent('discount rate per year; default 10 %', '10 %'),
+  }, []),
   changedItem: {
     type: 'object',
     description: 'changes to one listed item, matched by id; any of its keys, checked after merging (null removes an optional key)',
@@ -287,7 +324,7 @@ const defs: Record<string, Schema> = {
     required: ['id'],
   },
   changes: object('an overlay merged onto its base: maps merge key by key, listed items by id, other values are replaced', {
-    ...Object.fromEntries(['fuels', 'headers', 'boilers', 'heat_recovery_boilers', 'steam_imports', 'turbines', 'letdowns', 'users', 'flash_tanks', 'machines']
+    ...Object.fromEntries(['fuels', 'headers', 'boilers', 'heat_recovery_boilers', 'steam_imports', 'turbines', 'letdowns', 'users', 'flash_tanks', 'machines', 'absorption_chillers', 'steam_traps']
       .map((key) => [key, { type: 'array', items: ref('changedItem'), description: `changes to ${key.replace(/_/g, ' ')}, matched by id` }])),
     site: { type: 'object', description: 'changes to the site (merged key by key)' },
     power: { type: 'object', description: 'changes to power import, export and site demand (merged key by key)' },
@@ -308,6 +345,8 @@ const defs: Record<string, Schema> = {
     users: list('user', 'new users'),
     flash_tanks: list('flashTank', 'new flash tanks'),
     machines: list('machine', 'new machines'),
+    absorption_chillers: list('absorptionChiller', 'new chilled-water plants'),
+    steam_traps: list('trapGroup', 'new trap survey groups'),
   }, []),
   scenario: object('a season or production case: an overlay on the plant or on another scenario', {
     id: reference('scenario id, unique among scenarios'),
@@ -383,6 +422,10 @@ export const caseSchema: Schema = {
     flash_tanks: list('flashTank', 'flash tanks'),
     deaerator: ref('deaerator'),
     machines: list('machine', 'machines turbines may drive'),
+    absorption_chillers: list('absorptionChiller', 'chilled-water plants with absorption chillers on steam'),
+    steam_traps: list('trapGroup', 'a steam trap survey, one group per header'),
+    insulation_survey: list('insulationRepair', 'bare pipe found by an insulation survey, one entry per header'),
+    costs: ref('costs'),
     objective: choice(['minimum_cost', 'minimum_fuel', 'maximum_power', 'minimum_co2'], 'what the optimiser minimises or maximises; default minimum_cost'),
     solver: ref('solver'),
     scenarios: list('scenario', 'seasons and production cases, each an overlay with its hours per year'),

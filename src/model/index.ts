@@ -13,3 +13,7 @@ export { parseMoney, parseYears } from './money.js';
 export { resolveMeters, type Meter, type MeteredFlow } from './resolveMeters.js';
 export { PHYSICAL_RANGES } from './physicalRanges.js';
 export { MOST_PROFILE_HOURS } from './resolveProfile.js';
+export { ACCURACY_CLASS, tipSheet20TurbineCost } from './resolveCosts.js';
+export { napierSteamFlow } from './napier.js';
+export { DEFAULT_COP } from './resolveChillers.js';
+export { DEFAULT_DISCHARGE_COEFFICIENT } from './resolveTraps.js';

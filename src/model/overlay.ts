@@ -7,7 +7,7 @@ import { describeFound } from './issue.js';
 
 /** The top-level lists whose items carry ids; `changes.<list>` merges by id. */
 export const OVERLAY_LISTS = [
-  'fuels', 'headers', 'boilers', 'heat_recovery_boilers', 'steam_imports', 'turbines', 'letdowns', 'users', 'flash_tanks', 'machines',
+  'fuels', 'headers', 'boilers', 'heat_recovery_boilers', 'steam_imports', 'turbines', 'letdowns', 'users', 'flash_tanks', 'machines', 'absorption_chillers', 'steam_traps',
 ] as const;
 
 /** The top-level maps (and the objective) an overlay may change. */

@@ -327,6 +327,78 @@ export interface DrivenMachine {
   turbine: string | null;
 }
 
+/**
+ * A chilled-water plant with absorption capacity: a cooling demand met by
+ * absorption chillers on steam (up to their capacity) and electric chillers
+ * for the rest. Steam = absorption cooling / (COP x latent heat given up).
+ */
+export interface AbsorptionChiller {
+  id: string;
+  kind: 'absorptionChiller';
+  /** header the generator takes steam from */
+  header: string;
+  /** cooling demand of the chilled-water plant, kW */
+  cooling: number;
+  /** absorption cooling that can be made, kW (0: electric chillers only) */
+  capacity: number;
+  effect: 'single' | 'double';
+  /** cooling over heat given up by the steam, fraction */
+  cop: number;
+  /** electricity of the electric chillers per kW of cooling they make, kW/kW */
+  electricPerCooling: number;
+  condensate: SteamUser['condensate'];
+}
+
+/** One group of steam traps on a header from a trap survey. */
+export interface TrapGroup {
+  id: string;
+  kind: 'trapGroup';
+  header: string;
+  /** traps installed */
+  installed: number;
+  /** traps failed open (blowing steam), a count; may be fractional when given as a share */
+  failedOpen: number;
+  /** orifice diameter, m */
+  orifice: number;
+  /** discharge coefficient on Napier's relation */
+  dischargeCoefficient: number;
+  /** steam lost through the failed traps, kg/s (Napier's relation at the header pressure) */
+  loss: number;
+}
+
+/** Bare pipe on one header: insulating it brings the header's heat loss down to lossAfter. */
+export interface InsulationRepair {
+  header: string;
+  /** bare length, m */
+  bareLength: number;
+  /** the header's whole heat loss once insulated, kW */
+  lossAfter: number;
+}
+
+/** Unit costs for screening estimates, each in the site currency. */
+export interface UnitCosts {
+  /** back-pressure turbine generator installed, currency per kW; null: the size curve of DOE Steam Tip Sheet #20 */
+  backPressureTurbinePerKW: number | null;
+  /** absorption chilling installed, currency per kW of cooling */
+  absorptionPerKWCooling: number;
+  /** one failed trap repaired or replaced, currency */
+  trapRepair: number;
+  /** condensate return, currency per kg/s of condensate returned */
+  condensateReturnPerKgS: number;
+  /** insulation repaired, currency per m */
+  insulationPerMetre: number;
+  /** a flash tank with its piping and trap, installed, currency */
+  flashTank: number;
+  /** economic life of measures, years */
+  lifeYears: number;
+  /** discount rate, fraction per year */
+  discountRate: number;
+  /** accuracy class in words */
+  accuracy: string;
+  /** the unit costs the case left out and the defaults taken, each with its source */
+  defaults: DefaultApplied[];
+}
+
 export type Objective = 'minimumCost' | 'minimumFuel' | 'maximumPower' | 'minimumCo2';
 
 export interface SolverOptions {
@@ -360,6 +432,14 @@ export interface Plant {
   flashTanks: FlashTank[];
   deaerator: Deaerator;
   machines: DrivenMachine[];
+  /** absorption chilling (absent on plants built in code before it existed) */
+  absorptionChillers?: AbsorptionChiller[];
+  /** the trap survey's groups */
+  steamTraps?: TrapGroup[];
+  /** bare pipe from an insulation survey */
+  insulation?: InsulationRepair[];
+  /** unit costs for savings measures, defaults applied */
+  costs?: UnitCosts;
   objective: Objective;
   solver: SolverOptions;
   /** the case's scenarios as declared (each resolved plant is in LoadResult.variants); [] on a variant */

@@ -8,11 +8,12 @@ import { displayPath, type CasePath, type Issue, type Severity } from './issue.j
 import type { DefaultApplied, Range, UnitSystem } from './plantTypes.js';
 import { makeIssue, type YamlSource } from './yamlSource.js';
 
-export type IdKind = 'fuel' | 'header' | 'boiler' | 'heatRecoveryBoiler' | 'steamImport' | 'turbine' | 'letdown' | 'user' | 'flashTank' | 'feedwaterPump' | 'machine';
+export type IdKind = 'fuel' | 'header' | 'boiler' | 'heatRecoveryBoiler' | 'steamImport' | 'turbine' | 'letdown' | 'user' | 'flashTank' | 'feedwaterPump' | 'machine' | 'absorptionChiller' | 'trapGroup';
 
 export const ID_KIND_WORDS: Record<IdKind, string> = {
   fuel: 'fuel', header: 'header', boiler: 'boiler', heatRecoveryBoiler: 'heat-recovery boiler', steamImport: 'steam import',
   turbine: 'turbine', letdown: 'letdown', user: 'user', flashTank: 'flash tank', feedwaterPump: 'feedwater pump', machine: 'machine',
+  absorptionChiller: 'absorption chiller', trapGroup: 'trap group',
 };
 
 export class ResolveContext {

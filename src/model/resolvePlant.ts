@@ -12,11 +12,15 @@ import { resolveDeaerator, resolveFlashTanks, resolveLetdowns, resolveMachines, 
 import { resolveFuels, resolveObjective, resolvePower, resolveSite, resolveSolver } from './resolveSite.js';
 import { resolveBoilers, resolveHeatRecoveryBoilers, resolveSteamImports } from './resolveSupply.js';
 import { resolveTurbines } from './resolveTurbines.js';
+import { resolveAbsorptionChillers } from './resolveChillers.js';
+import { resolveCosts } from './resolveCosts.js';
+import { resolveSteamTraps } from './resolveTraps.js';
+import { resolveInsulation } from './resolveInsulation.js';
 
 const ID_LISTS: [string, IdKind][] = [
   ['fuels', 'fuel'], ['headers', 'header'], ['boilers', 'boiler'], ['heat_recovery_boilers', 'heatRecoveryBoiler'],
   ['steam_imports', 'steamImport'], ['turbines', 'turbine'], ['letdowns', 'letdown'], ['users', 'user'],
-  ['flash_tanks', 'flashTank'], ['machines', 'machine'],
+  ['flash_tanks', 'flashTank'], ['machines', 'machine'], ['absorption_chillers', 'absorptionChiller'], ['steam_traps', 'trapGroup'],
 ];
 
 /** Words with a fixed meaning in references; a unit may not take one as its id. */
@@ -56,6 +60,10 @@ export function resolvePlant(context: ResolveContext): Plant | null {
     users: resolveUsers(context, byId),
     flashTanks: resolveFlashTanks(context, byId),
     machines: resolveMachines(context),
+    absorptionChillers: resolveAbsorptionChillers(context, byId),
+    steamTraps: resolveSteamTraps(context, byId),
+    insulation: resolveInsulation(context, byId),
+    costs: resolveCosts(context),
     objective: resolveObjective(context),
     solver: resolveSolver(context),
     scenarios: [],

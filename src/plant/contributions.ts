@@ -15,6 +15,8 @@ import { MachineContribution } from './units/machine.js';
 import { SteamImportContribution } from './units/steamImport.js';
 import { TurbineContribution } from './units/turbine.js';
 import { UserContribution } from './units/user.js';
+import { AbsorptionChillerContribution } from './units/absorptionChiller.js';
+import { TrapGroupContribution } from './units/trapGroup.js';
 
 export function contributionsOf(plant: Plant): UnitContribution[] {
   const flashTanks = [...plant.flashTanks].sort((a, b) => b.pressure - a.pressure);
@@ -26,6 +28,8 @@ export function contributionsOf(plant: Plant): UnitContribution[] {
     ...plant.turbines.map((turbine) => new TurbineContribution(turbine)),
     ...plant.letdowns.map((letdown) => new LetdownContribution(letdown)),
     ...plant.users.map((user) => new UserContribution(user)),
+    ...(plant.absorptionChillers ?? []).map((chiller) => new AbsorptionChillerContribution(chiller)),
+    ...(plant.steamTraps ?? []).map((group) => new TrapGroupContribution(group)),
     ...flashTanks.map((tank) => new FlashTankContribution(tank)),
     new DeaeratorContribution(plant.deaerator),
     ...plant.machines.map((machine) => new MachineContribution(machine)),

@@ -24,7 +24,8 @@ export type StreamKind =
   | 'flashLiquid'
   | 'feedwater'
   | 'makeup'
-  | 'heatingSteam';
+  | 'heatingSteam'
+  | 'trapLoss';
 
 export interface Stream {
   /** unit, header or terminal id the stream leaves */

@@ -45,7 +45,7 @@ export function siteBalance(pass: Pass, solution: PassSolution, reports: readonl
     pump_work_kW: solution.evaluate(context.pumpShaft),
     makeup_water_kW: flowEnergy((from) => from === MAKEUP),
     imported_steam_kW: flowEnergy((from) => importIds.has(from)),
-    process_heat_kW: sum('user', 'heat_kW'),
+    process_heat_kW: sum('user', 'heat_kW') + sum('absorptionChiller', 'steam_heat_kW'),
     turbine_work_kW: sum('turbine', 'steam_work_kW'),
     condenser_kW: sum('turbine', 'condenser_kW'),
     stack_kW: fuel - firedAbsorbed,

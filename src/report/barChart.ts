@@ -15,15 +15,21 @@ const BAR = 18;
 const GAP = 8;
 const PLOT = 320;
 
-export function barChartSvg(id: string, title: string, bars: Bar[]): string {
+export function barChartSvg(id: string, title: string, given: Bar[]): string {
+  // A value within round-off of zero is drawn as zero: a -1e-12 must not put
+  // its text on the negative side, over its label.
+  const largest = Math.max(0, ...given.map((bar) => Math.abs(bar.value)));
+  const bars = given.map((bar) => (Math.abs(bar.value) <= 1e-9 * largest ? { ...bar, value: 0 } : bar));
   const labelWidth = Math.max(60, ...bars.map((bar) => textWidth(bar.label, FONT))) + 10;
   const textRoom = Math.max(60, ...bars.map((bar) => textWidth(bar.text, FONT))) + 10;
   const low = Math.min(0, ...bars.map((bar) => bar.value));
   const high = Math.max(0, ...bars.map((bar) => bar.value));
   const span = high - low || 1;
-  const scale = (value: number): number => labelWidth + ((value - low) / span) * PLOT;
+  // Negative values write their text left of their bar: room for it before the plot.
+  const plotLeft = labelWidth + (low < 0 ? textRoom : 0);
+  const scale = (value: number): number => plotLeft + ((value - low) / span) * PLOT;
   const top = 30;
-  const width = labelWidth + PLOT + textRoom * (low < 0 ? 2 : 1) + 10;
+  const width = plotLeft + PLOT + textRoom + 10;
   const height = top + bars.length * (BAR + GAP) + 10;
   const f = (value: number): string => (Math.round(value * 10) / 10).toString();
   const parts = [

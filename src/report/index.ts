@@ -16,3 +16,4 @@ export { projectsText, screenText } from './evaluateTables.js';
 export { reconcileText, reconcileCsv, RECONCILE_CAUTION } from './reconcileReport.js';
 export { yearText, yearCsv } from './yearTables.js';
 export { yearHtml, yearChartsSvg, lineChartSvg, stackedColumnsSvg } from './yearCharts.js';
+export { savingsTables, measureOverlaysYaml, savingsCharts, physicalWords, savingsSectionHtml } from './savingsTables.js';

@@ -10,3 +10,4 @@ export { screenLetdowns, SCREEN_DEFAULTS, type LetdownScreenRow, type ScreenOpti
 export { solveOne } from './solveOne.js';
 export { solvePlants, workerCount, workersAvailable, type PoolOptions } from './solvePool.js';
 export { progressLine, type ProgressStream } from './progressLine.js';
+export { WorkerPool } from './workerPool.js';

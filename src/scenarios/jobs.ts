@@ -20,6 +20,8 @@ export interface JobOptions {
   commitment?: Record<string, number>;
   /** that solve's converged point, to start the candidate from (Maps cross a worker boundary intact) */
   start?: PassPoint;
+  /** measure marginal values by probes (default true); savings compares costs only and leaves them out */
+  probeMarginalValues?: boolean;
 }
 
 /** The plant a job solves; throws for a job that names nothing in the variants (a programming error). */

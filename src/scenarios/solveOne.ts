@@ -8,7 +8,7 @@ import type { JobOptions, JobOutcome } from './jobs.js';
 export async function solveOne(plant: Plant, options: JobOptions): Promise<JobOutcome> {
   try {
     const commitment = options.commitment ? new Map(Object.entries(options.commitment)) : undefined;
-    const outcome = await solvePlant(plant, { objective: options.objective, backend: getBackend(options.backend ?? 'highs'), commitment, ...(options.start ? { start: options.start } : {}) });
+    const outcome = await solvePlant(plant, { objective: options.objective, backend: getBackend(options.backend ?? 'highs'), commitment, ...(options.start ? { start: options.start } : {}), ...(options.probeMarginalValues === false ? { probeMarginalValues: false } : {}) });
     if (!outcome.ok) return { ok: false, reason: outcome.reason, message: outcome.message };
     return { ok: true, result: plantResult(outcome), start: outcome.start };
   } catch (error) {

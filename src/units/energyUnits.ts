@@ -35,4 +35,6 @@ export const powerUnits: readonly UnitDefinition[] = [
   unit('Btu/h', BTU_IT_KJ / SECONDS_PER_HOUR, ['Btu/hr']),
   unit('kBtu/h', (1e3 * BTU_IT_KJ) / SECONDS_PER_HOUR, ['kBtu/hr']),
   unit('MMBtu/h', (1e6 * BTU_IT_KJ) / SECONDS_PER_HOUR, ['MMBtu/hr']),
+  // A ton of refrigeration is 12,000 Btu/h of cooling (the heat to melt a short ton of ice in a day).
+  unit('TR', (12_000 * BTU_IT_KJ) / SECONDS_PER_HOUR, ['ton_refrigeration', 'tons_refrigeration']),
 ];

@@ -52,6 +52,7 @@ function workspace(): string {
   writeFileSync(join(dir, 'c.yaml'), smallCase());
   writeFileSync(join(dir, 'absurd.yaml'), ABSURD);
   writeFileSync(join(dir, 'zero.yaml'), smallCase({ extra: '' }).replace('price: 10 USD/GJ', 'price: 0 USD/GJ').replace('cost: 0.5 USD/t', 'cost: 0 USD/t').replace('price: 100 USD/MWh', 'price: 0 USD/MWh'));
+  writeFileSync(join(dir, 'badcost.yaml'), `${smallCase()}\ncosts:\n  trap_repair: 350 USD/t\n`);
   writeFileSync(join(dir, 'existing.html'), 'old report');
   writeFileSync(join(dir, 'plain.txt'), 'not a folder');
   mkdirSync(join(dir, 'folder'));
@@ -142,6 +143,11 @@ const cases: HostileCase[] = [
   { title: 'compare: --json with --csv', args: ['compare', 'c.yaml', '--json', '--csv'], code: 2, says: /--json and --csv cannot be used together/, oneLine: true },
   ...['0', '-1', 'abc', '2.5'].map((workers): HostileCase => ({ title: `compare: --workers ${workers}`, args: ['compare', 'c.yaml', '--workers', workers], code: 2, says: /--workers expects a whole number of 1 or more/, oneLine: true })),
   { title: 'evaluate: --workers 0', args: ['evaluate', 'c.yaml', '--workers', '0'], code: 2, says: /--workers expects a whole number of 1 or more, found 0/, oneLine: true },
+  { title: 'savings: --md on the case file is refused', args: ['savings', 'c.yaml', '--md', 'c.yaml'], code: 2, says: /--md "c\.yaml" is the case file this command reads/, oneLine: true },
+  { title: 'savings: --json and --md both on standard output are refused', args: ['savings', 'c.yaml', '--json', '--md'], code: 2, says: /only one of --json, --md and --csv may go to standard output/, oneLine: true },
+  { title: 'savings: an unknown ranking', args: ['savings', 'c.yaml', '--rank', 'beauty'], code: 2, says: /rank/ },
+  { title: 'savings: a cost in the wrong unit gets a located message and nothing is solved', args: ['savings', 'badcost.yaml'], code: 1, says: /badcost\.yaml:\d+:\d+ +costs\.trap_repair +expected a cost such as "350 USD\/trap" \(per trap\), found "350 USD\/t" per t[\s\S]*nothing was solved/ },
+  { title: 'savings: a plant that solves lists its measures', args: ['savings', 'c.yaml', '--workers', '1'], code: 0, says: /^$/, then: (result) => expect(result.stdout).toMatch(/Measures ranked by net present value/) },
   { title: 'solve: an empty --export-lp', args: ['solve', 'c.yaml', '--export-lp', ''], code: 2, says: /--export-lp needs a value, found an empty one/, oneLine: true },
   { title: 'compare: an empty --scenarios', args: ['compare', 'c.yaml', '--scenarios', ''], code: 2, says: /--scenarios needs a value, found an empty one/, oneLine: true },
   { title: 'state: an empty --p', args: ['state', '--p', '', '--T', '300 K'], code: 2, says: /--p needs a value/, oneLine: true },
@@ -180,9 +186,9 @@ describe('every command under hostile input', () => {
 // of the documented ones, stderr has no stack frame, the inputs are unchanged
 // and no temporary file is left.
 const token = fc.oneof(
-  fc.constantFrom('check', 'solve', 'report', 'compare', 'evaluate', 'init', 'state'),
+  fc.constantFrom('check', 'solve', 'report', 'compare', 'evaluate', 'savings', 'init', 'state'),
   fc.constantFrom('c.yaml', 'absurd.yaml', 'folder', 'plain.txt', 'missing/x', '-', '', '/dev/null', '/dev/full', '/dev/stdout', './c.yaml', 'é.yaml', `${'n'.repeat(255)}`),
-  fc.constantFrom('--out', '--svg', '--md', '--csv', '--export-lp', '--json', '--solver', '--workers', '--scenarios', '--sweep', '--scenario', '--objective', '--batch', '--p', '--T', '--x', '--units', '--verbose', '--help', '--bogus', '-o', '--'),
+  fc.constantFrom('--out', '--svg', '--md', '--csv', '--export-lp', '--json', '--solver', '--workers', '--scenarios', '--sweep', '--scenario', '--objective', '--rank', '--batch', '--p', '--T', '--x', '--units', '--verbose', '--help', '--bogus', '-o', '--'),
   fc.constantFrom('highs', 'jslp', 'min-cost', 'max-power', '0', '-1', '2.5', 'abc', '1e308', 'NaN', '10 barg', '300 K'),
   fc.string({ maxLength: 8 }),
 );
@@ -194,7 +200,7 @@ describe('fuzzed command lines', () => {
     const before = new Map(inputs.map((name) => [name, readFileSync(join(dir, name), 'utf8')]));
     await fc.assert(
       fc.asyncProperty(
-        fc.constantFrom('check', 'solve', 'report', 'compare', 'evaluate', 'init', 'state'),
+        fc.constantFrom('check', 'solve', 'report', 'compare', 'evaluate', 'savings', 'init', 'state'),
         fc.array(token, { maxLength: 6 }),
         async (command, rest) => {
           const result = await run([command, ...rest], { cwd: dir });

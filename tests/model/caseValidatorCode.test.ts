@@ -26,7 +26,7 @@ function compiled(): (data: unknown) => boolean {
 describe('caseValidatorCode()', () => {
   const quick = precompiled();
   const full = compiled();
-  const demos = ['cases/kestrel-bay-board-mill.yaml', 'cases/millbrook-creamery.yaml'].map((path) => parse(readFileSync(path, 'utf8')));
+  const demos = ['cases/kestrel-bay-board-mill.yaml', 'cases/millbrook-creamery.yaml', 'cases/orchard-vale-foods.yaml'].map((path) => parse(readFileSync(path, 'utf8')));
 
   it('accepts the demo cases, as the compiled schema does', () => {
     for (const demo of demos) {

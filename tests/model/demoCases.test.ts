@@ -6,13 +6,13 @@ import { expectClose } from '../helpers/expectClose.js';
 
 const millPath = new URL('../../cases/kestrel-bay-board-mill.yaml', import.meta.url);
 
-test.each(['kestrel-bay-board-mill.yaml', 'millbrook-creamery.yaml'])('cases/%s loads with no errors or warnings', async (name) => {
+test.each(['kestrel-bay-board-mill.yaml', 'millbrook-creamery.yaml', 'orchard-vale-foods.yaml'])('cases/%s loads with no errors or warnings', async (name) => {
   const result = await loadCase(new URL(`../../cases/${name}`, import.meta.url).pathname);
   expect(result.ok ? result.warnings : result.issues).toEqual([]);
 });
 
 test('each demo case carries the schema modeline with a relative path', () => {
-  for (const name of ['kestrel-bay-board-mill.yaml', 'millbrook-creamery.yaml']) {
+  for (const name of ['kestrel-bay-board-mill.yaml', 'millbrook-creamery.yaml', 'orchard-vale-foods.yaml']) {
     const text = readFileSync(new URL(`../../cases/${name}`, import.meta.url), 'utf8');
     expect(text.split('\n')[0]).toBe('# yaml-language-server: $schema=../schema/case.schema.json');
   }

@@ -5,7 +5,7 @@ import { expect, test } from 'vitest';
 import { stringify } from 'yaml';
 import { loadCaseText, type Issue } from '../../src/model/index.js';
 
-const demos = ['kestrel-bay-board-mill.yaml', 'millbrook-creamery.yaml'].map((name) => readFileSync(new URL(`../../cases/${name}`, import.meta.url), 'utf8'));
+const demos = ['kestrel-bay-board-mill.yaml', 'millbrook-creamery.yaml', 'orchard-vale-foods.yaml'].map((name) => readFileSync(new URL(`../../cases/${name}`, import.meta.url), 'utf8'));
 const { parse } = await import('yaml');
 const demoData = demos.map((text) => parse(text) as unknown);
 

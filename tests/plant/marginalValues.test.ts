@@ -81,7 +81,7 @@ function expectAgree(check: Check): void {
   expect(difference, `${check.label}: reported ${check.reported.toFixed(4)} per t, re-solve says ${check.expected.toFixed(4)} per t`).toBeLessThanOrEqual(tolerance(check.expected));
 }
 
-const CASES = ['cases/kestrel-bay-board-mill.yaml', 'cases/millbrook-creamery.yaml'];
+const CASES = ['cases/kestrel-bay-board-mill.yaml', 'cases/millbrook-creamery.yaml', 'cases/orchard-vale-foods.yaml'];
 
 describe('marginal steam values agree with re-solving the converged plant', () => {
   for (const file of CASES) {

@@ -99,6 +99,6 @@ describe('formatQuantity', () => {
 
   test('bad digits and unknown units are programmer errors', () => {
     expect(() => formatQuantity(1, 'power', 'si', { digits: 0 })).toThrowErrorMatchingInlineSnapshot(`[RangeError: digits must be a positive integer, found 0]`);
-    expect(() => formatQuantity(1, 'power', 'si', { unit: 'barg' })).toThrowErrorMatchingInlineSnapshot(`[Error: unknown power unit "barg"; expected one of W, kW, MW, hp, GJ/h, Btu/h, kBtu/h, MMBtu/h]`);
+    expect(() => formatQuantity(1, 'power', 'si', { unit: 'barg' })).toThrowErrorMatchingInlineSnapshot(`[Error: unknown power unit "barg"; expected one of W, kW, MW, hp, GJ/h, Btu/h, kBtu/h, MMBtu/h, TR]`);
   });
 });

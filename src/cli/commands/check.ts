@@ -49,6 +49,11 @@ export const checkCommand: CommandModule<object, CheckArgs> = {
     if (args.verbose) {
       lines.push(result.plant.defaults.length === 0 ? 'defaults applied: none' : 'defaults applied:');
       for (const applied of result.plant.defaults) lines.push(`  ${applied.path} = ${applied.value}  (${applied.reason})`);
+      const costs = result.plant.costs;
+      if (costs && costs.defaults.length > 0) {
+        lines.push(`unit costs for savings, defaults applied (${costs.accuracy}):`);
+        for (const applied of costs.defaults) lines.push(`  ${applied.path} = ${applied.value}  (${applied.reason})`);
+      }
     }
     process.stdout.write(`${lines.join('\n')}\n`);
   },

@@ -9,8 +9,8 @@ import { solveCommand } from './solve.js';
 import { stateCommand } from './state.js';
 import { watchCommand } from './watch.js';
 import { reconcileCommand } from './reconcile.js';
-
+import { savingsCommand } from './savings.js';
 import { yearCommand } from './year.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, yearCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand, reconcileCommand];
+export const commands: CommandModule<any, any>[] = [solveCommand, compareCommand, evaluateCommand, savingsCommand, yearCommand, reportCommand, watchCommand, checkCommand, initCommand, stateCommand, reconcileCommand];

@@ -8,6 +8,7 @@ import type { BackendName } from '../../lp/index.js';
 import { packageVersion } from '../../version.js';
 import type { TitleBlock } from '../../report/diagram/index.js';
 import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown } from '../../report/index.js';
+import { findSavings, type SavingsResult } from '../../savings/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { solveForReport } from '../reportSolve.js';
 import { CliError, EXIT_PROBLEMS } from '../errors.js';
@@ -23,6 +24,7 @@ interface ReportArgs {
   csv?: string;
   objective?: string;
   solver: BackendName;
+  savings: boolean;
 }
 
 /** "cases/kestrel-bay-board-mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
@@ -51,6 +53,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .option('csv', { type: 'string', describe: 'write the tables as CSV to FILE (no FILE or "-": standard output)' })
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
+      .option('savings', { type: 'boolean', default: false, describe: 'add a savings section: the ranked measures and the roadmap (as `steamwright savings`), with their charts' })
       .example('$0 report cases/kestrel-bay-board-mill.yaml', 'write kestrel-bay-board-mill.report.html here')
       .example('$0 report cases/kestrel-bay-board-mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
       .example('$0 report cases/kestrel-bay-board-mill.yaml --scenario winter', 'one scenario: kestrel-bay-board-mill.winter.report.html')
@@ -70,12 +73,18 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const { plant, result, subtitle, sections, failed, projects } = solved;
     const format = plantDisplayFormat(plant);
 
+    let savings: SavingsResult | undefined;
+    if (args.savings) {
+      const text = readFileSync(args.case).toString('utf8').replace(/^\uFEFF/, '');
+      savings = await findSavings(text, loaded.plant, loaded.variants, { backend: args.solver, objective });
+    }
+
     const block = titleBlockFor(args.case, subtitle);
     // Everything is rendered before anything is written.
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, projects, titleBlock: block }),
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, projects, titleBlock: block, ...(savings ? { savings } : {}) }),
       '--svg': () => `${balanceDiagram(result, format, block)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),

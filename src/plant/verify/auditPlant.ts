@@ -11,6 +11,7 @@ import { solvedPlantFromReports, type ReportedUnit, type SolvedPlant } from './s
 import { auditBoilers, auditFeedPumps } from './supplies.js';
 import { BALANCE_TOLERANCE, ENTROPY_TOLERANCE } from './tolerances.js';
 import { auditTurbines } from './turbines.js';
+import { auditAbsorptionChillers, auditTrapGroups } from './chillersAndTraps.js';
 
 export interface UnitAudit {
   /** unit or node id ("feedwater pumps" and "site power" for those balances) */
@@ -66,6 +67,8 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
   const turbinePower = auditTurbines(plant, solved, states, ledger, attempt);
   auditLetdowns(plant, solved, states, ledger, attempt);
   auditUsers(plant, solved, states, ledger, attempt);
+  auditAbsorptionChillers(plant, solved, states, ledger, attempt);
+  auditTrapGroups(plant, solved, states, ledger, attempt);
   auditFlashTanks(plant, solved, ledger, attempt);
   auditDeaerator(plant, solved, states, ledger, attempt);
   auditDeaeratorVent(plant, solved, ledger);

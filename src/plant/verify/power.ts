@@ -36,6 +36,12 @@ export function auditPower(plant: Plant, solved: SolvedPlant, ledger: Ledger, tu
     // No pumps described: their work is bought as electricity.
     motors += pumpShaft;
   }
+  // Electric chillers: the cooling not made by absorption, at their kW per kW.
+  for (const chiller of plant.absorptionChillers ?? []) {
+    const result = find(solved.absorptionChillers, chiller.id);
+    ledger.check(chiller.id, 'electric chillers\' power', result.electricCooling * chiller.electricPerCooling, result.electric, 'kW', BALANCE_TOLERANCE, 1e-3);
+    motors += result.electric;
+  }
   const generated = plant.turbines.filter((turbine) => turbine.drives.kind === 'generator').reduce((total, turbine) => total + (turbinePower.get(turbine.id) ?? 0), 0);
   ledger.volume(SITE_POWER, 'sitePower');
   const met = generated + solved.grid.imported - solved.grid.exported - motors;

@@ -26,6 +26,8 @@ export interface SolvedPlant {
     pumps: { id: string; shaft: number; motorShaft: number }[];
   };
   machines: { id: string; motorShaft: number; motorElectric: number }[];
+  absorptionChillers: { id: string; steam: number; absorptionCooling: number; electricCooling: number; electric: number }[];
+  trapGroups: { id: string; steam: number }[];
   grid: { imported: number; exported: number };
 }
 
@@ -103,6 +105,14 @@ export function solvedPlantFromReports(headers: readonly ReportedHeader[], units
         }),
     },
     machines: byKind('machine').map((unit) => ({ id: unit.id, motorShaft: num(unit, 'motor_shaft_kW'), motorElectric: num(unit, 'motor_electric_kW') })),
+    absorptionChillers: byKind('absorptionChiller').map((unit) => ({
+      id: unit.id,
+      steam: num(unit, 'steam_kg_s'),
+      absorptionCooling: num(unit, 'absorption_cooling_kW'),
+      electricCooling: num(unit, 'electric_cooling_kW'),
+      electric: num(unit, 'electric_chiller_kW'),
+    })),
+    trapGroups: byKind('trapGroup').map((unit) => ({ id: unit.id, steam: num(unit, 'steam_lost_kg_s') })),
     grid: { imported: num(grid, 'import_kW'), exported: num(grid, 'export_kW') },
   };
 }

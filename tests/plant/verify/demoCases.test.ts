@@ -31,7 +31,7 @@ describe('the independent audit on the bundled cases', () => {
         }
         // Every unit of the plant is audited.
         const audited = new Set(audit.units.map((unit) => unit.id));
-        for (const id of [...plant.headers, ...plant.boilers, ...plant.turbines, ...plant.letdowns, ...plant.users, ...plant.flashTanks].map((unit) => unit.id)) {
+        for (const id of [...plant.headers, ...plant.boilers, ...plant.turbines, ...plant.letdowns, ...plant.users, ...plant.flashTanks, ...(plant.absorptionChillers ?? []), ...(plant.steamTraps ?? [])].map((unit) => unit.id)) {
           expect(audited.has(id), `${name} ${label}: ${id} audited`).toBe(true);
         }
       }

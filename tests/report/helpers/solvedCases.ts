@@ -7,7 +7,7 @@ import { plantResult, solvePlant, type PlantResult } from '../../../src/plant/in
 import type { ScenarioSection } from '../../../src/report/index.js';
 import { projectRoot } from '../../helpers/cli.js';
 
-export const DEMO_CASES = ['kestrel-bay-board-mill', 'millbrook-creamery'] as const;
+export const DEMO_CASES = ['kestrel-bay-board-mill', 'millbrook-creamery', 'orchard-vale-foods'] as const;
 
 export interface Solved {
   plant: Plant;

@@ -1,0 +1,19 @@
+// Candidate measures from a solved balance: vents (with their causes and the
+// ways to end them), turbines beside letdowns, condensate return, flash and
+// blowdown recovery, and trap repair.
+import type { Plant } from '../model/index.js';
+import type { Measure } from './measureTypes.js';
+import type { SolvedRun } from './sizing.js';
+import { letdownTurbines } from './turbineMeasures.js';
+import { findVents, ventMeasures, type VentFinding } from './ventMeasures.js';
+import { condensateMeasures, flashMeasures, insulationMeasures, trapMeasures } from './waterMeasures.js';
+
+export function generateMeasures(plant: Plant, runs: SolvedRun[]): { measures: Measure[]; vents: VentFinding[] } {
+  const vents = findVents(runs);
+  const measures: Measure[] = [];
+  for (const finding of vents) measures.push(...ventMeasures(plant, runs, finding));
+  measures.push(...letdownTurbines(plant, runs), ...condensateMeasures(plant, runs), ...flashMeasures(plant), ...trapMeasures(plant), ...insulationMeasures(plant));
+  // Two ways of ending the same vent may propose the same unit change; ids stay unique.
+  const seen = new Set<string>();
+  return { measures: measures.filter((measure) => (seen.has(measure.id) ? false : (seen.add(measure.id), true))), vents };
+}
