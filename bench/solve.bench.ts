@@ -19,6 +19,28 @@ function median(values: number[]): number {
   return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
 }
 
+// Start-up: a new process each time, interleaved so load hits all alike, and
+// each compared with `node -e 0` measured in the same rounds (a ratio).
+function wallMs(args: string[]): number {
+  const start = process.hrtime.bigint();
+  const run = spawnSync(process.execPath, args, { encoding: 'utf8' });
+  if (run.status !== 0) throw new Error(`${args.join(' ')} failed: ${run.stderr}`);
+  return Number(process.hrtime.bigint() - start) / 1e6;
+}
+{
+  const mill = `${root}/cases/kestrel-bay-board-mill.yaml`;
+  const runs: Record<string, string[]> = { 'node -e 0': ['-e', '0'], '--version': [cli, '--version'], '--help': [cli, '--help'], 'solve --help': [cli, 'solve', '--help'], 'solve mill --json': [cli, 'solve', mill, '--json'] };
+  const times: Record<string, number[]> = Object.fromEntries(Object.keys(runs).map((name) => [name, []]));
+  for (let round = 0; round < rounds; round += 1) for (const [name, args] of Object.entries(runs)) times[name].push(wallMs(args));
+  const base = median(times['node -e 0']);
+  const startup = Object.fromEntries(Object.entries(times).map(([name, values]) => [name, { ms_median: median(values), ratio_to_node: median(values) / base }]));
+  if (json) console.log(JSON.stringify({ startup, rounds }));
+  else {
+    console.log('start-up, new process each time (median ms, and ratio to node -e 0 in the same rounds)');
+    for (const [name, figures] of Object.entries(startup)) console.log(`  ${name.padEnd(18)} ${figures.ms_median.toFixed(0).padStart(6)} ms  x${figures.ratio_to_node.toFixed(1)}`);
+  }
+}
+
 const cases = readdirSync(`${root}/cases`).filter((name) => name.endsWith('.yaml'));
 for (const name of cases) {
   const path = `${root}/cases/${name}`;

@@ -1,12 +1,11 @@
 #!/usr/bin/env node
 // The steamwright command line: thin commands over the library, no physics here.
-import yargs from 'yargs';
-import { hideBin } from 'yargs/helpers';
-import { commands } from './commands/index.js';
+import { COMMAND_SUMMARIES } from './commandSummaries.js';
 import { CliError, EXIT_USAGE } from './errors.js';
 import { joinNegativeValues } from './negativeValues.js';
 import { removePendingOnExit } from './pendingFiles.js';
 import { handleStdoutErrors } from './stdout.js';
+import { packageVersion } from '../version.js';
 
 /** yargs reads a lone "-" as an unknown argument, not as an option's value ("--batch -" for stdin). */
 function joinStdinValues(argv: string[]): string[] {
@@ -49,6 +48,14 @@ function checkOptionValues(argv: Record<string, unknown>): true {
 }
 
 export async function main(argv: string[]): Promise<number> {
+  // No command named: the top-level help, the version or the request for a
+  // command need none of the commands' code, so none of it is loaded.
+  const named = argv.some((arg) => !arg.startsWith('-'));
+  if (!named && argv.length === 1 && argv[0] === '--version') {
+    process.stdout.write(`${packageVersion()}\n`);
+    return 0;
+  }
+  const { default: yargs } = await import('yargs');
   const parser = yargs(joinNegativeValues(joinStdinValues(argv), BOOLEAN_FLAGS))
     .scriptName('steamwright')
     .usage('$0 <command> [options]\n\nIndustrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.')
@@ -64,7 +71,12 @@ export async function main(argv: string[]): Promise<number> {
       // yargs' own usage errors (unknown option, missing argument) end here.
       throw error ?? new CliError(message, EXIT_USAGE);
     });
-  for (const command of commands) parser.command(command);
+  if (named) {
+    const { commands } = await import('./commands/index.js');
+    for (const command of commands) parser.command(command);
+  } else {
+    for (const summary of COMMAND_SUMMARIES) parser.command(summary.command, summary.describe);
+  }
   try {
     await parser.parseAsync();
   } catch (error) {
@@ -80,7 +92,8 @@ export async function main(argv: string[]): Promise<number> {
 handleStdoutErrors();
 removePendingOnExit();
 
-main(hideBin(process.argv)).then(
+// The arguments after node and the script (what yargs' hideBin gives for Node).
+main(process.argv.slice(2)).then(
   (code) => {
     process.exitCode = code;
   },

@@ -1,0 +1,11 @@
+// The top-level help is drawn from a light list so that it loads no command;
+// the list must say exactly what the commands themselves say.
+import { describe, expect, it } from 'vitest';
+import { COMMAND_SUMMARIES } from '../../src/cli/commandSummaries.js';
+import { commands } from '../../src/cli/commands/index.js';
+
+describe('the top-level command list', () => {
+  it('names every command, in order, with its own usage and description', () => {
+    expect(COMMAND_SUMMARIES).toEqual(commands.map((command) => ({ command: command.command, describe: command.describe })));
+  });
+});
