@@ -14,20 +14,10 @@ import {
   toLpFormat,
   type Variable,
 } from '../src/lp/index.js';
+import { seededRandom } from '../src/seededRandom.js';
 
 const solves = Number(process.env.BENCH_LP_SOLVES ?? 2000);
 const jslpSolves = Math.min(solves, Number(process.env.BENCH_LP_JSLP_SOLVES ?? 300));
-
-/** A seeded generator (mulberry32; common practice, no single source). */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let mixed = Math.imul(state ^ (state >>> 15), 1 | state);
-    mixed = (mixed + Math.imul(mixed ^ (mixed >>> 7), 61 | mixed)) ^ mixed;
-    return ((mixed ^ (mixed >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** 50 nodes on a ring with chords: 150 arcs with capacities, supplies at 5 nodes, demands elsewhere. */
 function networkModel(): { model: LinearModel; arcs: Variable[]; baseCosts: number[] } {

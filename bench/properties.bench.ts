@@ -10,21 +10,10 @@ import {
   temperatureB23,
   temperaturePHRegion2,
 } from '../src/properties/index.js';
+import { seededRandom as random } from '../src/seededRandom.js';
 
 const INPUTS = 1_000_000;
 const ROUNDS = 9;
-
-/** Small deterministic generator (mulberry32), so every run sees the same inputs. */
-function random(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 interface Inputs {
   first: Float64Array;

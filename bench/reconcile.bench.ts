@@ -5,23 +5,12 @@
 // Never part of the test suite.
 import { Matrix, solve } from 'ml-matrix';
 import { reconcileLinear, testReconciliation, type BalanceRow, type LinearProblem, type Reading } from '../src/reconcile/index.js';
+import { seededRandom } from '../src/seededRandom.js';
 
 const json = process.argv.includes('--json');
 const STREAMS = 1000;
 const NODES = 300;
 const ROUNDS = 5;
-
-/** mulberry32, seeded, so every run times the same plant. */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function generatedPlant(): { problem: LinearProblem; biased: number } {
   const random = seededRandom(15);

@@ -4,23 +4,12 @@
 // shapes are plausible, not measured. Regenerate the bundled file with
 //   npm run build && node dist/scripts/millProfile.js > cases/profiles/kestrel-bay-year.csv
 import { pathToFileURL } from 'node:url';
+import { seededRandom as random } from '../src/seededRandom.js';
 
 export interface MillProfileOptions {
   /** hourly rows, from 2026-01-01T00:00 */
   hours: number;
   seed?: number;
-}
-
-/** mulberry32: a small seeded generator, so the file is the same every run. */
-function random(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 const COLUMNS = [

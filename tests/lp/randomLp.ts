@@ -2,17 +2,8 @@
 // inside the variable boxes is drawn first and every row's bounds are set so
 // that it satisfies them; every variable has finite bounds.
 import { LinearModel, expr } from '../../src/lp/index.js';
-
-/** mulberry32, a small seeded generator (common practice, no single source). */
-export function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let mixed = Math.imul(state ^ (state >>> 15), 1 | state);
-    mixed = (mixed + Math.imul(mixed ^ (mixed >>> 7), 61 | mixed)) ^ mixed;
-    return ((mixed ^ (mixed >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom } from '../../src/seededRandom.js';
+import { seededRandom } from '../../src/seededRandom.js';
 
 export function randomFeasibleLp(seed: number): LinearModel {
   const random = seededRandom(seed);

@@ -1,18 +1,8 @@
 // Random flow networks for the reconciliation tests, from a seeded generator
 // so every run tests the same ones.
 import type { BalanceRow, Reading } from '../../../src/reconcile/index.js';
-
-/** mulberry32: a small seeded 32-bit generator (public domain, T. Ettinger). */
-export function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom } from '../../../src/seededRandom.js';
+import { seededRandom } from '../../../src/seededRandom.js';
 
 /** Standard normal draws by the Box-Muller transform (Box and Muller 1958). */
 export function normalDraws(random: () => number): () => number {

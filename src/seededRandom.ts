@@ -1,0 +1,15 @@
+// mulberry32: a small seeded 32-bit generator (public domain, T. Ettinger),
+// for benchmarks, generated demo data and generated tests that must see the
+// same numbers every run. Not for anything that needs real randomness.
+
+/** Uniform numbers in [0, 1), the same sequence for the same seed. */
+export function seededRandom(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
