@@ -22,8 +22,8 @@ function joinStdinValues(argv: string[]): string[] {
 const BOOLEAN_FLAGS = new Set(['json', 'verbose', 'screen', 'help', 'version']);
 /** Options whose empty value means something ("--md" alone: standard output). */
 const EMPTY_ALLOWED = new Set(['md', 'csv']);
-/** Positionals that take several values (`year merge PART...`): a list there is not an option given twice. */
-const LIST_POSITIONALS = new Set(['parts']);
+/** Positionals and options that take several values (`year merge PART...`, `report --year-parts PART...`): a list there is not an option given twice. */
+const LIST_POSITIONALS = new Set(['parts', 'year-parts']);
 
 /**
  * Every command: an option given twice, or given an empty value, is a usage

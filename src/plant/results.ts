@@ -5,7 +5,6 @@ import type { Audit } from './audit.js';
 import type { IndependentAudit } from './verify/index.js';
 import { GJ_PER_KWH, T_PER_H_PER_KG_S, type CostComponent } from './context.js';
 import type { UnitReport } from './contribution.js';
-import { ENERGY_ROW_SCALE, energyRowName, massRowName } from './buildPass.js';
 import { ATMOSPHERE, DRAIN, solvedEnthalpy } from './network.js';
 import type { Objective } from '../model/index.js';
 import type { MarginalValue } from './marginalValues.js';

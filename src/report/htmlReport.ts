@@ -17,6 +17,10 @@ import { REPORT_SCRIPT, REPORT_STYLE } from './htmlAssets.js';
 import { SAFETY_CAUTION } from './safety.js';
 import type { SavingsResult } from '../savings/index.js';
 import { savingsSectionHtml } from './savingsTables.js';
+import type { PeriodRecord, YearResult } from '../year/index.js';
+import { yearSectionHtml } from './yearCharts.js';
+import type { ReconcileOutcome } from '../reconcile/index.js';
+import { reconcileSectionHtml } from './reconcileReport.js';
 
 /** CSP source for the inline script: sha256 of its exact text (CSP Level 2, hash-source). */
 const SCRIPT_HASH = `sha256-${createHash('sha256').update(REPORT_SCRIPT, 'utf8').digest('base64')}`;
@@ -37,6 +41,10 @@ export interface ReportOptions {
   titleBlock?: TitleBlock;
   /** the savings found (`report --savings`): ranked measures, the roadmap and their charts */
   savings?: SavingsResult;
+  /** the year of the case's profile (`report --year`): its charts and tables */
+  year?: { result: YearResult; records: readonly PeriodRecord[] };
+  /** the meters reconciled (`report --readings`): tests, diagram of reconciled flows, tables */
+  reconciled?: { outcome: ReconcileOutcome; readingsFile: string };
 }
 
 /** The display format of a plant's own unit system, currency and atmosphere. */
@@ -61,7 +69,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   const projects = options.projects ?? [];
   if (failed.length > 0) body.splice(body.length - 1, 0, `<p class="caution failed">${failed.length} scenario${failed.length === 1 ? '' : 's'} could not be solved: ${failed.map((scenario) => e(scenario.id)).join(', ')}. See <a href="#failed-scenarios">the diagnosis</a>.</p>`);
   body.push(
-    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${failed.length > 0 ? ' <a href="#failed-scenarios">Failed scenarios</a>' : ''}${projects.length > 0 ? ' <a href="#projects">Projects</a>' : ''}${options.savings ? ' <a href="#savings">Savings</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
+    `<nav><a href="#diagram">Diagram</a> <a href="#tables">Tables</a> <a href="#charts">Charts</a>${scenarios.length > 0 ? ' <a href="#scenarios">Scenarios</a>' : ''}${failed.length > 0 ? ' <a href="#failed-scenarios">Failed scenarios</a>' : ''}${projects.length > 0 ? ' <a href="#projects">Projects</a>' : ''}${options.savings ? ' <a href="#savings">Savings</a>' : ''}${options.year ? ' <a href="#year">Year</a>' : ''}${options.reconciled ? ' <a href="#reconciliation">Meters</a>' : ''} <a href="#audit">Audit</a> <a href="#assumptions">Assumptions</a> <a href="#safety">Safety</a></nav>`,
   );
   body.push(
     `<section id="diagram"><h2>Steam balance${scenarios.length > 0 ? ', plant as written' : ''}</h2>`,
@@ -93,6 +101,8 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     );
   }
   if (options.savings) body.push(savingsSectionHtml(options.savings, format, tableHtml, e));
+  if (options.year) body.push(yearSectionHtml(options.year.result, options.year.records, format, tableHtml));
+  if (options.reconciled) body.push(reconcileSectionHtml(options.reconciled.outcome, format.system, options.reconciled.readingsFile, tableHtml, e));
   const audit = result.audit;
   body.push(
     '<section id="audit"><h2>Audit</h2>',

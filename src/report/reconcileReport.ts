@@ -4,6 +4,7 @@
 import type { ReconcileOutcome } from '../reconcile/index.js';
 import { formatQuantity, type UnitSystem } from '../units/index.js';
 import { csvCell } from './safeCells.js';
+import type { ReportTable } from './reportTables.js';
 import { table } from './table.js';
 
 export const RECONCILE_CAUTION = [
@@ -22,63 +23,108 @@ function statistic(value: number | null): string {
   return value === null ? 'not checkable' : value.toFixed(2);
 }
 
+/** The opening lines: the method and the three tests. */
+export function reconcileHeadline(outcome: ReconcileOutcome): string[] {
+  const g = outcome.global;
+  return [
+    `Method: ${outcome.method}.`,
+    `Global test: chi-square ${g.statistic.toFixed(2)} on ${g.dof} degree${g.dof === 1 ? '' : 's'} of freedom, critical ${g.critical.toFixed(2)} at ${(outcome.level * 100).toFixed(3).replace(/\.?0+$/, '')} %: ${g.dof === 0 ? 'nothing to test (no redundancy)' : g.passed ? 'passed' : `rejected (p = ${g.pValue.toPrecision(2)})`}.`,
+    `Measurement test: critical value ${outcome.measurementCritical.toFixed(2)} (Sidak-corrected for ${outcome.meters.filter((meter) => meter.redundant).length} redundant readings).`,
+    `VDI 2048 quality criteria: global ${outcome.vdi2048.globalPassed ? 'met' : 'not met'}; readings beyond ${outcome.vdi2048.critical.toFixed(2)} standard deviations: ${outcome.vdi2048.flagged.length === 0 ? 'none' : outcome.vdi2048.flagged.join(', ')}.`,
+  ];
+}
+
+/** The readings, the suspect meters (when any) and the streams, as tables shared by the text and the HTML report. */
+export function reconcileTables(outcome: ReconcileOutcome, system: UnitSystem): ReportTable[] {
+  const tables: ReportTable[] = [];
+  tables.push({
+    id: 'readings',
+    title: 'Readings (all meters in the fit):',
+    headings: ['meter', 'measured', 'reconciled', '95 % interval', 'adjustment', 'statistic', 'finding'],
+    rows: outcome.meters.map((meter) => [
+      meter.tag,
+      flow(meter.measured, system),
+      flow(meter.reconciled, system),
+      `±${flow(meter.reconciledSigma * 1.96, system)}`,
+      flow(meter.adjustment, system),
+      statistic(meter.statistic),
+      meter.suspectRank !== null ? `suspect ${meter.suspectRank}` : meter.flagged ? 'flagged' : meter.redundant ? 'ok' : 'not redundant',
+    ]),
+  });
+  if (outcome.suspects.length > 0) {
+    tables.push({
+      id: 'suspects',
+      title: 'Suspect meters, in the order serial elimination set them aside:',
+      headings: ['#', 'meter', 'statistic', 'estimated bias', '95 % interval', 'global test after'],
+      rows: outcome.suspects.map((suspect, index) => [
+        String(index + 1),
+        suspect.tag,
+        suspect.statistic.toFixed(2),
+        flow(suspect.bias, system),
+        `±${flow(suspect.biasSigma * 1.96, system)}`,
+        suspect.globalAfter.dof === 0 ? 'nothing left to test' : `${suspect.globalAfter.statistic.toFixed(2)} of ${suspect.globalAfter.critical.toFixed(2)}: ${suspect.globalAfter.passed ? 'passed' : 'rejected'}`,
+      ]),
+    });
+  }
+  tables.push({
+    id: 'streams',
+    title: outcome.suspects.length === 0 ? 'Streams:' : 'Streams (suspect meters set aside):',
+    headings: ['stream', 'meter', 'estimate', '95 % interval'],
+    rows: outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? flow(stream.value, system) : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
+  });
+  return tables;
+}
+
+/** What the tables leave to words: meters that cannot be told apart, those not checked, those unread, notes. */
+export function reconcileRemarks(outcome: ReconcileOutcome): string[] {
+  const remarks: string[] = [];
+  for (const suspect of outcome.suspects) {
+    if (suspect.equivalent.length > 0) remarks.push(`${suspect.tag} cannot be told apart from ${suspect.equivalent.join(', ')} by the balances: the bias may be in any of them (add a meter that separates them).`);
+  }
+  const notRedundant = outcome.meters.filter((meter) => !meter.redundant).map((meter) => meter.tag);
+  if (notRedundant.length > 0) remarks.push(`Not redundant, so not checked by any balance: ${notRedundant.join(', ')}.`);
+  if (outcome.unread.length > 0) remarks.push(`Meters with no reading (left out): ${outcome.unread.join(', ')}.`);
+  return remarks;
+}
+
 export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, title: string): string {
   const lines: string[] = [];
-  lines.push(`Reconciliation of ${title}`);
-  lines.push(`Method: ${outcome.method}.`);
-  lines.push('');
-  const g = outcome.global;
-  lines.push(`Global test: chi-square ${g.statistic.toFixed(2)} on ${g.dof} degree${g.dof === 1 ? '' : 's'} of freedom, critical ${g.critical.toFixed(2)} at ${(outcome.level * 100).toFixed(3).replace(/\.?0+$/, '')} %: ${g.dof === 0 ? 'nothing to test (no redundancy)' : g.passed ? 'passed' : `rejected (p = ${g.pValue.toPrecision(2)})`}.`);
-  lines.push(`Measurement test: critical value ${outcome.measurementCritical.toFixed(2)} (Sidak-corrected for ${outcome.meters.filter((meter) => meter.redundant).length} redundant readings).`);
-  lines.push(`VDI 2048 quality criteria: global ${outcome.vdi2048.globalPassed ? 'met' : 'not met'}; readings beyond ${outcome.vdi2048.critical.toFixed(2)} standard deviations: ${outcome.vdi2048.flagged.length === 0 ? 'none' : outcome.vdi2048.flagged.join(', ')}.`);
-  lines.push('');
-  lines.push('Readings (all meters in the fit):');
-  const rows = outcome.meters.map((meter) => [
-    meter.tag,
-    flow(meter.measured, system),
-    flow(meter.reconciled, system),
-    `±${flow(meter.reconciledSigma * 1.96, system)}`,
-    flow(meter.adjustment, system),
-    statistic(meter.statistic),
-    meter.suspectRank !== null ? `suspect ${meter.suspectRank}` : meter.flagged ? 'flagged' : meter.redundant ? 'ok' : 'not redundant',
-  ]);
-  lines.push(table(['meter', 'measured', 'reconciled', '95 % interval', 'adjustment', 'statistic', 'finding'], rows));
-  lines.push('');
-  if (outcome.suspects.length === 0) {
-    lines.push(g.passed ? 'Suspect meters: none (the global test passes).' : 'Suspect meters: none could be named.');
+  const [method, ...tests] = reconcileHeadline(outcome);
+  lines.push(`Reconciliation of ${title}`, method, '', ...tests, '');
+  const [readings, ...rest] = reconcileTables(outcome, system);
+  lines.push(readings.title, table(readings.headings, readings.rows), '');
+  const suspects = rest.find((entry) => entry.id === 'suspects');
+  if (!suspects) {
+    lines.push(outcome.global.passed ? 'Suspect meters: none (the global test passes).' : 'Suspect meters: none could be named.');
   } else {
-    lines.push('Suspect meters, in the order serial elimination set them aside:');
-    lines.push(
-      table(
-        ['#', 'meter', 'statistic', 'estimated bias', '95 % interval', 'global test after'],
-        outcome.suspects.map((suspect, index) => [
-          String(index + 1),
-          suspect.tag,
-          suspect.statistic.toFixed(2),
-          flow(suspect.bias, system),
-          `±${flow(suspect.biasSigma * 1.96, system)}`,
-          suspect.globalAfter.dof === 0 ? 'nothing left to test' : `${suspect.globalAfter.statistic.toFixed(2)} of ${suspect.globalAfter.critical.toFixed(2)}: ${suspect.globalAfter.passed ? 'passed' : 'rejected'}`,
-        ]),
-      ),
-    );
+    lines.push(suspects.title, table(suspects.headings, suspects.rows));
     for (const suspect of outcome.suspects) {
       if (suspect.equivalent.length > 0) lines.push(`  ${suspect.tag} cannot be told apart from ${suspect.equivalent.join(', ')} by the balances: the bias may be in any of them (add a meter that separates them).`);
     }
   }
-  lines.push('');
-  lines.push(outcome.suspects.length === 0 ? 'Streams:' : 'Streams (suspect meters set aside):');
-  lines.push(
-    table(
-      ['stream', 'meter', 'estimate', '95 % interval'],
-      outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? flow(stream.value, system) : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
-    ),
-  );
+  const streams = rest.find((entry) => entry.id === 'streams')!;
+  lines.push('', streams.title, table(streams.headings, streams.rows));
   const notRedundant = outcome.meters.filter((meter) => !meter.redundant).map((meter) => meter.tag);
   if (notRedundant.length > 0) lines.push('', `Not redundant, so not checked by any balance: ${notRedundant.join(', ')}.`);
   if (outcome.unread.length > 0) lines.push('', `Meters with no reading (left out): ${outcome.unread.join(', ')}.`);
   if (outcome.notes.length > 0) lines.push('', 'Notes:', ...outcome.notes.map((note) => `- ${note}`));
   lines.push('', RECONCILE_CAUTION, '');
   return lines.join('\n');
+}
+
+/** The HTML report's reconciliation section (`report --readings`): the tests, the diagram of reconciled flows when given, the tables. */
+export function reconcileSectionHtml(outcome: ReconcileOutcome, system: UnitSystem, readingsFile: string, tableHtml: (table: ReportTable, prefix?: string) => string, escape: (text: string) => string, diagram?: string): string {
+  return [
+    '<section id="reconciliation"><h2>Meter reconciliation</h2>',
+    `<p>Readings from ${escape(readingsFile)}.</p>`,
+    ...reconcileHeadline(outcome).map((line) => `<p>${escape(line)}</p>`),
+    ...(diagram ? [diagram] : []),
+    ...reconcileTables(outcome, system).map((entry) => tableHtml(entry, 'reconcile')),
+    ...reconcileRemarks(outcome).map((line) => `<p>${escape(line)}</p>`),
+    ...(outcome.notes.length > 0 ? ['<ul>', ...outcome.notes.map((note) => `<li>${escape(note)}</li>`), '</ul>'] : []),
+    `<p class="caution">${escape(RECONCILE_CAUTION.replace(/\n/g, ' '))}</p>`,
+    '</section>',
+  ].join('\n');
 }
 
 /** One row per reading, then one per stream, in SI (kg/s), for spreadsheets. */

@@ -7,7 +7,8 @@ import { barChartSvg } from './barChart.js';
 import { steamValueNumber, type DisplayFormat, type SteamValueUnit } from './displayFormat.js';
 import { escapeMarkup } from './escape.js';
 import { SAFETY_CAUTION } from './safety.js';
-import { yearText } from './yearTables.js';
+import type { ReportTable } from './reportTables.js';
+import { yearHeadline, yearReportTables, yearText } from './yearTables.js';
 
 const WIDTH = 640;
 const HEIGHT = 240;
@@ -133,5 +134,16 @@ export function yearHtml(result: YearResult, records: readonly PeriodRecord[], f
     `<pre>${escapeMarkup(yearText(result, format))}</pre>`,
     '</body></html>',
     '',
+  ].join('\n');
+}
+
+/** The HTML report's year section (`report --year`): how the year was solved, its charts, then its tables. */
+export function yearSectionHtml(result: YearResult, records: readonly PeriodRecord[], format: DisplayFormat, tableHtml: (table: ReportTable, prefix?: string) => string): string {
+  return [
+    '<section id="year"><h2>The year</h2>',
+    ...yearHeadline(result).map((line) => `<p>${escapeMarkup(line)}</p>`),
+    `<div class="charts">${yearChartsSvg(result, records, format).join('')}</div>`,
+    ...yearReportTables(result, format).map((entry) => tableHtml(entry, 'year')),
+    '</section>',
   ].join('\n');
 }

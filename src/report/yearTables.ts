@@ -6,6 +6,7 @@ import { COMPONENTS } from '../year/index.js';
 import { steamValueNumber, type DisplayFormat, type SteamValueUnit } from './displayFormat.js';
 import { csvCell } from './safeCells.js';
 import { SAFETY_CAUTION } from './safety.js';
+import type { ReportTable } from './reportTables.js';
 import { table } from './table.js';
 
 const KG_PER_LB = 0.45359237; // exact, by definition of the pound
@@ -27,61 +28,73 @@ function totalsIn(format: DisplayFormat): { mass: (t: number) => number; massUni
   };
 }
 
-export function yearText(result: YearResult, format: DisplayFormat): string {
+/** The year's figures as tables (annual cost and energy, months, units, limits, headers, failures), shared by the text and the HTML report. */
+export function yearReportTables(result: YearResult, format: DisplayFormat): ReportTable[] {
   const units = totalsIn(format);
   const valueUnit = result.marginal_value_unit as SteamValueUnit;
   const value = (perT: number | null): string => (perT === null ? 'n/a' : steamValueNumber(perT, valueUnit, format.system).toFixed(2));
-  const lines: string[] = [];
   const a = result.annual;
-  lines.push(`${result.plant}: the year from ${result.profile.file} (${result.periods} ${result.profile.kind === 'hourly' ? 'hourly periods' : 'periods'}, ${whole(result.hours)} h)`);
+  const tables: ReportTable[] = [];
+  tables.push({ id: 'year-cost', title: `Annual cost: ${format.money(a.cost)}`, headings: ['component', `cost (${format.currency})`, 'share'], rows: COMPONENTS.map((component) => [component, whole(a.cost_by_component[component]), a.cost > 0 ? `${((a.cost_by_component[component] / a.cost) * 100).toFixed(1)} %` : '-']) });
+  tables.push({
+    id: 'year-energy',
+    title: 'Annual energy',
+    headings: ['quantity', 'total', 'unit'],
+    rows: [
+      ['fuel fired', whole(units.energy(a.fuel_GJ)), units.energyUnit],
+      ['steam raised', whole(units.mass(a.steam_raised_t)), units.massUnit],
+      ['process steam', whole(units.mass(a.process_steam_t)), units.massUnit],
+      ['steam let down', whole(units.mass(a.let_down_t)), units.massUnit],
+      ['steam vented', whole(units.mass(a.vented_t)), units.massUnit],
+      ['makeup water', whole(units.mass(a.makeup_t)), units.massUnit],
+      ['power generated', whole(a.power_generated_MWh), 'MWh'],
+      ['power imported', whole(a.power_imported_MWh), 'MWh'],
+      ['power exported', whole(a.power_exported_MWh), 'MWh'],
+      ['CO2 emitted', whole(format.system === 'si' ? a.co2_t : a.co2_t / KG_PER_LB), format.system === 'si' ? 't' : 'klb'],
+    ],
+  });
+  if (result.months.length > 0) {
+    tables.push({
+      id: 'year-months',
+      title: 'Month by month',
+      headings: ['month', 'hours', `cost (${format.currency})`, `fuel (${units.energyUnit})`, `steam raised (${units.massUnit})`, 'imported (MWh)', 'exported (MWh)', `vented (${units.massUnit})`],
+      rows: result.months.map((month) => [MONTHS[month.month - 1], whole(month.hours), whole(month.cost), whole(units.energy(month.fuel_GJ)), whole(units.mass(month.steam_raised_t)), whole(month.power_imported_MWh), whole(month.power_exported_MWh), whole(units.mass(month.vented_t))]),
+    });
+  }
+  tables.push({
+    id: 'year-units',
+    title: 'Units over the year',
+    headings: ['unit', 'kind', 'hours running', 'starts', 'hours out of service', `steam (${units.massUnit})`, `fuel (${units.energyUnit})`, 'power (MWh)'],
+    rows: result.units.map((unit) => [unit.id, unit.kind, whole(unit.hours_running), String(unit.starts), whole(unit.hours_out_of_service), whole(units.mass(unit.steam_t)), whole(units.energy(unit.fuel_GJ)), whole(unit.power_MWh)]),
+  });
+  const limits = result.units.flatMap((unit) => Object.entries(unit.hours_at_limit).map(([limit, hours]) => [unit.id, limit, whole(hours)]));
+  if (limits.length > 0) tables.push({ id: 'year-limits', title: 'Hours at each limit', headings: ['unit', 'limit', 'hours'], rows: limits });
+  tables.push({
+    id: 'year-headers',
+    title: `Marginal value of steam by header (${format.valueUnit(valueUnit)}, weighted by hours)`,
+    headings: ['header', 'mean', 'min', '10 %', 'median', '90 %', 'max'],
+    rows: result.headers.map((header) => [header.id, value(header.mean_per_t), value(header.min_per_t), value(header.p10_per_t), value(header.median_per_t), value(header.p90_per_t), value(header.max_per_t)]),
+  });
+  if (result.failed.length > 0) tables.push({ id: 'year-failed', title: `Periods that could not be solved (${result.failed.length})`, headings: ['period', 'reason', 'diagnosis'], rows: result.failed.map((period) => [period.label, period.reason, period.message]) });
+  return tables;
+}
+
+/** The year's opening lines: where from, how on/off was chosen, how the periods were solved. */
+export function yearHeadline(result: YearResult): string[] {
+  const lines = [`${result.plant}: the year from ${result.profile.file} (${result.periods} ${result.profile.kind === 'hourly' ? 'hourly periods' : 'periods'}, ${whole(result.hours)} h)`];
   lines.push(`On/off across periods: ${result.mode}; ${result.mode_note}.`);
   const solved = result.periods - result.failed.length;
   lines.push(`Solved ${solved} of ${result.periods} periods: ${result.how.full} by a full search, ${result.how.neighbour} from the period before's on/off choices and point, ${result.how.same_as_earlier} identical to an earlier period; ${result.how.one_pass} settled in one pass.`);
   if (!result.complete) lines.push(`Totals cover the ${whole(result.hours_solved)} h that solved, not the ${whole(result.hours)} h of the profile: ${result.failed.length} periods failed (listed below).`);
-  lines.push('');
-  lines.push(`Annual cost: ${format.money(a.cost)}`);
-  lines.push(table(['component', `cost (${format.currency})`, 'share'], COMPONENTS.map((component) => [component, whole(a.cost_by_component[component]), a.cost > 0 ? `${((a.cost_by_component[component] / a.cost) * 100).toFixed(1)} %` : '-'])));
-  lines.push('');
-  lines.push('Annual energy');
-  lines.push(table(['quantity', 'total', 'unit'], [
-    ['fuel fired', whole(units.energy(a.fuel_GJ)), units.energyUnit],
-    ['steam raised', whole(units.mass(a.steam_raised_t)), units.massUnit],
-    ['process steam', whole(units.mass(a.process_steam_t)), units.massUnit],
-    ['steam let down', whole(units.mass(a.let_down_t)), units.massUnit],
-    ['steam vented', whole(units.mass(a.vented_t)), units.massUnit],
-    ['makeup water', whole(units.mass(a.makeup_t)), units.massUnit],
-    ['power generated', whole(a.power_generated_MWh), 'MWh'],
-    ['power imported', whole(a.power_imported_MWh), 'MWh'],
-    ['power exported', whole(a.power_exported_MWh), 'MWh'],
-    ['CO2 emitted', whole(format.system === 'si' ? a.co2_t : a.co2_t / KG_PER_LB), format.system === 'si' ? 't' : 'klb'],
-  ]));
-  if (result.months.length > 0) {
+  return lines;
+}
+
+export function yearText(result: YearResult, format: DisplayFormat): string {
+  const lines: string[] = [...yearHeadline(result)];
+  for (const entry of yearReportTables(result, format)) {
     lines.push('');
-    lines.push('Month by month');
-    lines.push(table(
-      ['month', 'hours', `cost (${format.currency})`, `fuel (${units.energyUnit})`, `steam raised (${units.massUnit})`, 'imported (MWh)', 'exported (MWh)', `vented (${units.massUnit})`],
-      result.months.map((month) => [MONTHS[month.month - 1], whole(month.hours), whole(month.cost), whole(units.energy(month.fuel_GJ)), whole(units.mass(month.steam_raised_t)), whole(month.power_imported_MWh), whole(month.power_exported_MWh), whole(units.mass(month.vented_t))]),
-    ));
-  }
-  lines.push('');
-  lines.push('Units over the year');
-  lines.push(table(
-    ['unit', 'kind', 'hours running', 'starts', 'hours out of service', `steam (${units.massUnit})`, `fuel (${units.energyUnit})`, 'power (MWh)'],
-    result.units.map((unit) => [unit.id, unit.kind, whole(unit.hours_running), String(unit.starts), whole(unit.hours_out_of_service), whole(units.mass(unit.steam_t)), whole(units.energy(unit.fuel_GJ)), whole(unit.power_MWh)]),
-  ));
-  const limits = result.units.flatMap((unit) => Object.entries(unit.hours_at_limit).map(([limit, hours]) => [unit.id, limit, whole(hours)]));
-  if (limits.length > 0) {
-    lines.push('');
-    lines.push('Hours at each limit');
-    lines.push(table(['unit', 'limit', 'hours'], limits));
-  }
-  lines.push('');
-  lines.push(`Marginal value of steam by header (${format.valueUnit(valueUnit)}, weighted by hours)`);
-  lines.push(table(['header', 'mean', 'min', '10 %', 'median', '90 %', 'max'], result.headers.map((header) => [header.id, value(header.mean_per_t), value(header.min_per_t), value(header.p10_per_t), value(header.median_per_t), value(header.p90_per_t), value(header.max_per_t)])));
-  if (result.failed.length > 0) {
-    lines.push('');
-    lines.push(`Periods that could not be solved (${result.failed.length})`);
-    lines.push(table(['period', 'reason', 'diagnosis'], result.failed.map((period) => [period.label, period.reason, period.message])));
+    lines.push(entry.title);
+    lines.push(table(entry.headings, entry.rows));
   }
   lines.push('');
   lines.push(SAFETY_CAUTION);

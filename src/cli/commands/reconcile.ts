@@ -1,13 +1,11 @@
 // `steamwright reconcile CASE --readings FILE`: meter readings fitted to the
 // plant's mass balances, tested, and the suspect meters named.
-import { open } from 'node:fs/promises';
 import type { Argv, CommandModule } from 'yargs';
-import { formatIssue, resolveMeters, type Issue } from '../../model/index.js';
-import { streamNetwork } from '../../plant/index.js';
-import { meterStreams, parseReadings, readingSigma, reconcilePlant, reconciledCase, type AveragedReading } from '../../reconcile/index.js';
+import { reconciledCase } from '../../reconcile/index.js';
 import { reconcileCsv, reconcileText } from '../../report/index.js';
-import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { CliError, EXIT_USAGE } from '../errors.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { reconcileFilesOrFail } from '../reconcileRun.js';
 import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 
 interface ReconcileArgs {
@@ -20,9 +18,6 @@ interface ReconcileArgs {
   from?: string;
   to?: string;
 }
-
-/** A readings file larger than this is refused (a year of minute readings of 50 meters is some 30 MB). */
-const MAX_READINGS_BYTES = 64_000_000;
 
 export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
   command: 'reconcile <case>',
@@ -61,38 +56,7 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
       requests,
     );
     const loaded = await loadCaseOrFail(args.case, 'nothing was reconciled');
-    const caseText = (await readBounded(args.case, 2_000_000)).toString('utf8');
-    const { meters, issues: meterIssues } = resolveMeters(caseText);
-    const network = streamNetwork(loaded.plant);
-    const { metered, issues: streamIssues } = meterStreams(meters, network);
-    const caseIssues: Issue[] = [...meterIssues, ...streamIssues];
-    if (meters.length === 0 && caseIssues.length === 0) throw new CliError(`${args.case}: the case has no meters; add a "meters:" list (tag, unit, measures, uncertainty) to reconcile`, EXIT_PROBLEMS);
-    if (caseIssues.length > 0) {
-      for (const issue of caseIssues.sort((a, b) => a.line - b.line)) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
-      throw new CliError(`${args.case}: ${caseIssues.length} error${caseIssues.length === 1 ? '' : 's'} in the meters; nothing was reconciled`, EXIT_PROBLEMS);
-    }
-
-    const readingsText = (await readBounded(args.readings, MAX_READINGS_BYTES)).toString('utf8');
-    const window = { from: args.from === undefined ? null : Date.parse(args.from), to: args.to === undefined ? null : Date.parse(args.to) };
-    const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window);
-    const readingProblems = parsed.ok ? [] : parsed.issues;
-    if (parsed.ok && !parsed.series && (window.from !== null || window.to !== null)) {
-      throw new CliError(`${args.readings}: --from and --to choose a window of a series, but the file has no time column`, EXIT_PROBLEMS);
-    }
-    const readings: Map<string, AveragedReading> = parsed.ok ? parsed.readings : new Map();
-    for (const { meter } of metered) {
-      const reading = readings.get(meter.tag);
-      if (reading && !(readingSigma(meter, reading.value) > 0)) {
-        readingProblems.push({ line: reading.line, message: `reading of ${meter.tag} is zero and its uncertainty is a share of the reading, so it has none; give the meter an uncertainty as a flow (such as "0.2 t/h")` });
-      }
-    }
-    if (readingProblems.length > 0) {
-      for (const problem of readingProblems.sort((a, b) => a.line - b.line)) process.stderr.write(`${args.readings}:${problem.line}: ${problem.message}\n`);
-      throw new CliError(`${args.readings}: ${readingProblems.length} error${readingProblems.length === 1 ? '' : 's'}; nothing was reconciled`, EXIT_PROBLEMS);
-    }
-    if (readings.size === 0) throw new CliError(`${args.readings}: no reading of any meter${window.from !== null || window.to !== null ? ' in the window --from/--to' : ''}; nothing was reconciled`, EXIT_PROBLEMS);
-
-    const outcome = reconcilePlant(loaded.plant, metered, readings, { level: args.level }, network);
+    const { outcome, caseText } = await reconcileFilesOrFail(args.case, args.readings, loaded.plant, { level: args.level, from: args.from, to: args.to });
     const system = loaded.plant.site.unitSystem;
     const written = args['write-case'] !== undefined ? reconciledCase(caseText, outcome, system, args.readings) : null;
     let summary = args.json ? `${JSON.stringify({ case: loaded.plant.name, readings: args.readings, ...outcome, written_case: written ? { updated: written.updated, kept: written.kept } : null }, null, 2)}\n` : reconcileText(outcome, system, loaded.plant.name);
@@ -103,31 +67,3 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
     await writeOutputs(planned.map((output) => ({ ...output, text: texts[output.option] })));
   },
 };
-
-/** A file's bytes with a bound; an unreadable or oversized file is one CliError line. */
-async function readBounded(path: string, limit: number): Promise<Buffer> {
-  let handle;
-  try {
-    handle = await open(path, 'r');
-  } catch (error) {
-    throw new CliError(`${path}: cannot read it (${(error as NodeJS.ErrnoException).code ?? String(error)})`, EXIT_PROBLEMS);
-  }
-  try {
-    const info = await handle.stat();
-    if (info.isDirectory()) throw new CliError(`${path}: it is a directory, not a file`, EXIT_PROBLEMS);
-    const buffer = Buffer.alloc(Math.min(limit + 1, info.isFile() ? info.size + 1 : limit + 1));
-    let filled = 0;
-    while (filled < buffer.length) {
-      const { bytesRead } = await handle.read(buffer, filled, buffer.length - filled, null);
-      if (bytesRead === 0) break;
-      filled += bytesRead;
-    }
-    if (filled > limit) throw new CliError(`${path}: larger than ${limit.toLocaleString('en')} bytes; split the readings or choose a window`, EXIT_PROBLEMS);
-    return buffer.subarray(0, filled);
-  } catch (error) {
-    if (error instanceof CliError) throw error;
-    throw new CliError(`${path}: cannot read it (${(error as NodeJS.ErrnoException).code ?? String(error)})`, EXIT_PROBLEMS);
-  } finally {
-    await handle.close().catch(() => undefined);
-  }
-}

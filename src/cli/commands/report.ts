@@ -2,6 +2,7 @@
 // report, plus the same tables as Markdown or CSV.
 import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
+import { readFile } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
 import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
@@ -9,9 +10,14 @@ import { packageVersion } from '../../version.js';
 import type { TitleBlock } from '../../report/diagram/index.js';
 import { balanceDiagram, comparisonTable, htmlReport, plantDisplayFormat, reportTables, tablesCsv, tablesMarkdown } from '../../report/index.js';
 import { findSavings, type SavingsResult } from '../../savings/index.js';
+import type { Objective, Plant } from '../../model/index.js';
+import { mergeParts, yearFingerprint, type PeriodRecord, type YearResult } from '../../year/index.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { checkWorkers } from '../optionChecks.js';
+import { reconcileFilesOrFail } from '../reconcileRun.js';
+import { runYearWithProgress, yearInputOrFail } from '../yearRun.js';
 import { solveForReport } from '../reportSolve.js';
-import { CliError, EXIT_PROBLEMS } from '../errors.js';
+import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 import { OBJECTIVE_WORDS } from './solve.js';
 
@@ -25,6 +31,10 @@ interface ReportArgs {
   objective?: string;
   solver: BackendName;
   savings: boolean;
+  year: boolean;
+  'year-parts'?: string[];
+  readings?: string;
+  workers?: number;
 }
 
 /** "cases/kestrel-bay-board-mill.yaml" -> "mill.report.html", or "mill.winter.report.html" for a scenario (in the current directory). */
@@ -54,10 +64,21 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
       .option('objective', { choices: Object.keys(OBJECTIVE_WORDS), describe: 'overrides the case objective' })
       .option('solver', { choices: ['highs', 'jslp'] as const, default: 'highs' as BackendName, describe: 'LP/MIP solver backend' })
       .option('savings', { type: 'boolean', default: false, describe: 'add a savings section: the ranked measures and the roadmap (as `steamwright savings`), with their charts' })
+      .option('year', { type: 'boolean', default: false, describe: 'add a year section: every period of the case\'s profile solved (as `steamwright year`), with its charts' })
+      .option('year-parts', { type: 'string', array: true, describe: 'add the year section from the part files of `year --shard K/N --part FILE` instead of solving it again (they must be of this case and profile)' })
+      .option('readings', { type: 'string', describe: 'add a meter reconciliation section from this readings CSV (as `steamwright reconcile`)' })
+      .option('workers', { type: 'number', describe: 'with --year: most worker threads (default: one per core)' })
+      .check((args) => {
+        checkWorkers(args.workers);
+        if (args.year && args['year-parts'] !== undefined) throw new CliError('--year solves the year and --year-parts reads one already solved: give one of them', EXIT_USAGE);
+        if (args['year-parts'] !== undefined && args['year-parts'].length === 0) throw new CliError('--year-parts expects the part files written by "year --shard K/N --part FILE", found none', EXIT_USAGE);
+        return true;
+      })
       .example('$0 report cases/kestrel-bay-board-mill.yaml', 'write kestrel-bay-board-mill.report.html here')
       .example('$0 report cases/kestrel-bay-board-mill.yaml --out mill.html --svg mill.svg', 'the report and the diagram alone')
       .example('$0 report cases/kestrel-bay-board-mill.yaml --scenario winter', 'one scenario: kestrel-bay-board-mill.winter.report.html')
-      .example('$0 report cases/kestrel-bay-board-mill.yaml --md', 'the tables as Markdown on standard output') as Argv<ReportArgs>,
+      .example('$0 report cases/kestrel-bay-board-mill.yaml --md', 'the tables as Markdown on standard output')
+      .example('$0 report cases/millbrook-creamery.yaml --readings cases/millbrook-creamery.readings.csv', 'with the meters reconciled') as Argv<ReportArgs>,
   handler: async (args) => {
     // Every output is named and checked before any work is done.
     const requests: OutputRequest[] = [];
@@ -66,9 +87,13 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     if (args.svg !== undefined) requests.push({ option: '--svg', path: args.svg });
     if (args.md !== undefined) requests.push({ option: '--md', path: toStdout(args.md) ? '-' : args.md });
     if (args.csv !== undefined) requests.push({ option: '--csv', path: toStdout(args.csv) ? '-' : args.csv });
-    const planned = await planOutputs([{ option: 'case file', path: args.case }], requests);
+    const yearParts = args['year-parts'] ?? [];
+    const planned = await planOutputs([{ option: 'case file', path: args.case }, ...(args.readings !== undefined ? [{ option: '--readings', path: args.readings }] : []), ...yearParts.map((path) => ({ option: '--year-parts', path }))], requests);
     const loaded = await loadCaseOrFail(args.case, 'no report was written');
     const objective = args.objective ? OBJECTIVE_WORDS[args.objective] : undefined;
+    // The inputs of the added sections are read and checked before the long work.
+    const reconciled = args.readings !== undefined ? (await reconcileFilesOrFail(args.case, args.readings, loaded.plant, { level: 0.05 })).outcome : undefined;
+    const year = args.year || yearParts.length > 0 ? await yearFor(args, loaded.plant, objective) : undefined;
     const solved = await solveForReport(args.case, loaded, { scenario: args.scenario, objective, solver: args.solver });
     const { plant, result, subtitle, sections, failed, projects } = solved;
     const format = plantDisplayFormat(plant);
@@ -84,7 +109,7 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const tables = reportTables(result, format);
     if (sections.length > 0) tables.push(comparisonTable(sections));
     const texts: Record<string, () => string> = {
-      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, projects, titleBlock: block, ...(savings ? { savings } : {}) }),
+      'the report': () => htmlReport(plant, result, { subtitle, scenarios: sections, failedScenarios: failed, projects, titleBlock: block, ...(savings ? { savings } : {}), ...(year ? { year } : {}), ...(reconciled ? { reconciled: { outcome: reconciled, readingsFile: args.readings! } } : {}) }),
       '--svg': () => `${balanceDiagram(result, format, block)}\n`,
       '--md': () => tablesMarkdown(result.plant, tables),
       '--csv': () => tablesCsv(tables),
@@ -102,6 +127,35 @@ export const reportCommand: CommandModule<object, ReportArgs> = {
     const problems: string[] = [];
     if (failed.length > 0) problems.push(`${failed.length} of ${failed.length + sections.length} scenarios could not be solved; the report marks them:`, ...failed.map((scenario) => `  ${scenario.id}: ${scenario.message}`));
     for (const project of projects) if (!project.ok) problems.push(`project ${project.id} could not be evaluated; the report marks it:`, ...project.failed.map((failure) => `  ${failure.scenario} (${failure.which}): ${failure.message}`));
+    if (year && year.result.failed.length > 0) problems.push(`${year.result.failed.length} of ${year.result.periods} periods of the year could not be solved; the report lists them`);
     if (problems.length > 0) throw new CliError(`${args.case}: ${problems.join('\n')}`, EXIT_PROBLEMS);
   },
 };
+
+/** The year for the report: solved now (--year), or merged from part files of this very case and profile (--year-parts). */
+async function yearFor(args: ReportArgs, plant: Plant, objective: Objective | undefined): Promise<{ result: YearResult; records: PeriodRecord[] }> {
+  const { input } = await yearInputOrFail(args.case, plant, { objective, backend: args.solver });
+  const parts = args['year-parts'] ?? [];
+  if (parts.length === 0) {
+    const run = await runYearWithProgress(input, { workers: args.workers, quiet: Boolean(process.env.CI), keepRecords: true });
+    return { result: run.result!, records: run.records ?? [] };
+  }
+  const texts: { name: string; text: string }[] = [];
+  for (const name of parts) {
+    try {
+      texts.push({ name, text: await readFile(name, 'utf8') });
+    } catch (error) {
+      const code = (error as NodeJS.ErrnoException).code;
+      throw new CliError(`--year-parts: ${name}: cannot read the part file: ${code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'it is a directory' : 'it cannot be read'}; no report was written`, EXIT_PROBLEMS);
+    }
+  }
+  const merged = mergeParts(texts);
+  if (!merged.ok) {
+    for (const line of merged.problems) process.stderr.write(`${line}\n`);
+    throw new CliError(`--year-parts: the parts do not make one year (${merged.problems.length} problem${merged.problems.length === 1 ? '' : 's'}); no report was written`, EXIT_PROBLEMS);
+  }
+  const expected = yearFingerprint(input);
+  const stale = texts.filter(({ text }) => (JSON.parse(text) as { fingerprint?: string }).fingerprint !== expected).map(({ name }) => name);
+  if (stale.length > 0) throw new CliError(`--year-parts: ${stale.join(', ')}: expected parts of ${args.case} and its profile as they are now${args.objective ? ` with --objective ${args.objective}` : ''}, found parts of other inputs (the case, the profile or the objective changed since they were solved); solve them again or use --year; no report was written`, EXIT_PROBLEMS);
+  return { result: merged.result, records: merged.records };
+}

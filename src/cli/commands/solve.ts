@@ -8,7 +8,7 @@ import { solveSummary } from '../../report/index.js';
 import { planOutputs, writeOutputs } from '../outputFiles.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { solveFailure } from '../solveFailure.js';
-import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
+import { CliError, EXIT_USAGE } from '../errors.js';
 
 interface SolveArgs {
   case: string;

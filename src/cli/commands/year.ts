@@ -7,10 +7,10 @@ import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
 import type { Plant } from '../../model/index.js';
 import { plantDisplayFormat, yearCsv, yearHtml, yearText } from '../../report/index.js';
-import { progressLine } from '../../scenarios/index.js';
-import { formatProfileIssue, loadProfile, mergeParts, partText, runYear, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
+import { mergeParts, partText, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
+import { runYearWithProgress, yearInputOrFail } from '../yearRun.js';
 import { checkWorkers } from '../optionChecks.js';
 import { planOutputs, writeOutputs, type OutputRequest } from '../outputFiles.js';
 import { OBJECTIVE_WORDS } from './solve.js';
@@ -128,27 +128,16 @@ export const yearCommand: CommandModule<object, YearArgs> = {
     if (shard) await planOutputs(inputs, [{ option: '--part', path: args.part! }]);
     else await planOutputs(inputs, [...(args.csv !== undefined && args.csv !== '' && args.csv !== '-' ? [{ option: '--csv', path: args.csv }] : []), ...(args.html !== undefined ? [{ option: '--html', path: args.html }] : []), { option: 'the summary', path: '-' }]);
     const loaded = await loadCaseOrFail(args.case);
-    const read = await loadProfile(loaded.plant, args.case);
-    if (!read.ok) {
-      for (const issue of read.issues) process.stderr.write(`${formatProfileIssue(issue)}\n`);
-      throw new CliError(`${read.issues[0]?.file ?? args.case}: ${read.issues.length} problem${read.issues.length === 1 ? '' : 's'} in the profile; nothing was solved`, EXIT_PROBLEMS);
-    }
-    const input = { plant: loaded.plant, profile: read.profile, profileFile: loaded.plant.profile!.file, objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, ...(args.block !== undefined ? { blockPeriods: args.block } : {}) };
-    const progress = progressLine('year', process.stderr, quietProgress(args));
-    let run: Awaited<ReturnType<typeof runYear>>;
-    try {
-      run = await runYear(input, { workers: args.workers, onProgress: progress.onProgress, keepRecords: args.csv !== undefined || args.html !== undefined, ...(shard ? { shard } : {}) });
-    } finally {
-      progress.finish();
-    }
+    const { input, profilePath } = await yearInputOrFail(args.case, loaded.plant, { objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, block: args.block });
+    const run = await runYearWithProgress(input, { workers: args.workers, quiet: quietProgress(args), keepRecords: args.csv !== undefined || args.html !== undefined, ...(shard ? { shard } : {}) });
     if (shard) {
-      const planned = await planOutputs([...inputs, { option: 'profile', path: read.file! }], [{ option: '--part', path: args.part! }]);
+      const planned = await planOutputs([...inputs, { option: 'profile', path: profilePath }], [{ option: '--part', path: args.part! }]);
       const text = partText(yearMeta(input), loaded.plant, yearFingerprint(input), shard, run.records ?? []);
       await writeOutputs(planned.map((output) => ({ ...output, text })));
       const failed = (run.records ?? []).filter((record) => !record.ok).length;
       process.stderr.write(`steamwright: shard ${shard.index}/${shard.count}: ${run.records?.length ?? 0} periods written to ${args.part}${failed > 0 ? `, ${failed} of them failed` : ''}\n`);
       return;
     }
-    await finish(args, [...inputs, { option: 'profile', path: read.file! }], run.result!, run.records, loaded.plant, args.case);
+    await finish(args, [...inputs, { option: 'profile', path: profilePath }], run.result!, run.records, loaded.plant, args.case);
   },
 };

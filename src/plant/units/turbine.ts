@@ -2,7 +2,7 @@
 // to headers, an optional condensing end, power to a generator or a machine.
 import { expr, term, type LinearExpression, type Variable } from '../../lp/index.js';
 import type { Turbine, TurbineStage } from '../../model/index.js';
-import { saturatedLiquid, statePH, statePT, type SteamState } from '../../properties/index.js';
+import { saturatedLiquid, statePH, statePT } from '../../properties/index.js';
 import type { BuildContext } from '../context.js';
 import type { PointChange, UnitContribution, UnitReport } from '../contribution.js';
 import type { PassSolution } from '../passSolution.js';
