@@ -16,8 +16,8 @@ export interface ReconcileRunSettings {
   to?: string;
 }
 
-/** The reconciled readings of a loaded case, or a CliError after the located problems went to standard error. */
-export async function reconcileFilesOrFail(casePath: string, readingsPath: string, plant: Plant, settings: ReconcileRunSettings): Promise<{ outcome: ReconcileOutcome; caseText: string }> {
+/** The reconciled readings of a loaded case, or a CliError after the located problems went to `say` (standard error by default). */
+export async function reconcileFilesOrFail(casePath: string, readingsPath: string, plant: Plant, settings: ReconcileRunSettings, say: (line: string) => void = toStderr): Promise<{ outcome: ReconcileOutcome; caseText: string }> {
   const caseText = (await readBounded(casePath, 2_000_000)).toString('utf8');
   const { meters, issues: meterIssues } = resolveMeters(caseText);
   const network = streamNetwork(plant);
@@ -25,7 +25,7 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
   const caseIssues: Issue[] = [...meterIssues, ...streamIssues];
   if (meters.length === 0 && caseIssues.length === 0) throw new CliError(`${casePath}: the case has no meters; add a "meters:" list (tag, unit, measures, uncertainty) to reconcile`, EXIT_PROBLEMS);
   if (caseIssues.length > 0) {
-    for (const issue of caseIssues.sort((a, b) => a.line - b.line)) process.stderr.write(`${formatIssue(issue, casePath)}\n`);
+    for (const issue of caseIssues.sort((a, b) => a.line - b.line)) say(formatIssue(issue, casePath));
     throw new CliError(`${casePath}: ${caseIssues.length} error${caseIssues.length === 1 ? '' : 's'} in the meters; nothing was reconciled`, EXIT_PROBLEMS);
   }
 
@@ -44,7 +44,7 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
     }
   }
   if (readingProblems.length > 0) {
-    for (const problem of readingProblems.sort((a, b) => a.line - b.line)) process.stderr.write(`${readingsPath}:${problem.line}: ${problem.message}\n`);
+    for (const problem of readingProblems.sort((a, b) => a.line - b.line)) say(`${readingsPath}:${problem.line}: ${problem.message}`);
     throw new CliError(`${readingsPath}: ${readingProblems.length} error${readingProblems.length === 1 ? '' : 's'}; nothing was reconciled`, EXIT_PROBLEMS);
   }
   if (readings.size === 0) throw new CliError(`${readingsPath}: no reading of any meter${window.from !== null || window.to !== null ? ' in the window --from/--to' : ''}; nothing was reconciled`, EXIT_PROBLEMS);
@@ -52,6 +52,10 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
   const outcome = reconcilePlant(plant, metered, readings, { level: settings.level }, network);
   return { outcome, caseText };
 }
+
+const toStderr = (line: string): void => {
+  process.stderr.write(`${line}\n`);
+};
 
 /** A file's bytes with a bound; an unreadable or oversized file is one CliError line. */
 async function readBounded(path: string, limit: number): Promise<Buffer> {

@@ -4,7 +4,7 @@
 import { getBackend, type BackendName } from '../lp/index.js';
 import { plantResult, solvePlant, type PlantResult } from '../plant/index.js';
 import type { Objective, Plant } from '../model/index.js';
-import { htmlReport, type FailedScenario, type ScenarioSection } from '../report/index.js';
+import { htmlReport, type FailedScenario, type ReportOptions, type ScenarioSection } from '../report/index.js';
 import { compareScenarios, evaluateProjects, type ProjectEvaluation, type ScenarioRun } from '../scenarios/index.js';
 import { CliError, EXIT_USAGE } from './errors.js';
 import type { LoadedCase } from './loadCaseOrFail.js';
@@ -71,6 +71,9 @@ export async function solveForReport(casePath: string, loaded: LoadedCase, reque
 }
 
 /** The self-contained HTML report of a solved report. */
-export function reportHtml(solved: SolvedReport): string {
-  return htmlReport(solved.plant, solved.result, { subtitle: solved.subtitle, scenarios: solved.sections, failedScenarios: solved.failed, projects: solved.projects });
+/** The report's optional sections: the year and the reconciled meters. */
+export type ReportSections = Pick<ReportOptions, 'year' | 'reconciled'>;
+
+export function reportHtml(solved: SolvedReport, sections: ReportSections = {}): string {
+  return htmlReport(solved.plant, solved.result, { subtitle: solved.subtitle, scenarios: solved.sections, failedScenarios: solved.failed, projects: solved.projects, ...sections });
 }

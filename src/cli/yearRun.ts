@@ -14,10 +14,10 @@ export interface YearInputSettings {
 }
 
 /** The year's inputs from a loaded case, and the profile's path; a CliError when the case has no profile or the profile has problems. */
-export async function yearInputOrFail(casePath: string, plant: Plant, settings: YearInputSettings): Promise<{ input: YearInput; profilePath: string }> {
+export async function yearInputOrFail(casePath: string, plant: Plant, settings: YearInputSettings, say: (line: string) => void = (line) => process.stderr.write(`${line}\n`)): Promise<{ input: YearInput; profilePath: string }> {
   const read = await loadProfile(plant, casePath);
   if (!read.ok) {
-    for (const issue of read.issues) process.stderr.write(`${formatProfileIssue(issue)}\n`);
+    for (const issue of read.issues) say(formatProfileIssue(issue));
     throw new CliError(`${read.issues[0]?.file ?? casePath}: ${read.issues.length} problem${read.issues.length === 1 ? '' : 's'} in the profile; nothing was solved`, EXIT_PROBLEMS);
   }
   const input: YearInput = { plant, profile: read.profile, profileFile: plant.profile!.file, objective: settings.objective, backend: settings.backend, ...(settings.block !== undefined ? { blockPeriods: settings.block } : {}) };

@@ -1,15 +1,18 @@
 // `steamwright watch`: the report of a case served on this machine only,
-// solved again whenever the case file changes, the page told to reload by
-// server-sent events. A bare Node HTTP server: two paths, nothing else.
+// solved again whenever the case file, its readings or (with the year) its
+// profile changes, the page told to reload by server-sent events. A bare
+// Node HTTP server: two paths, nothing else.
 import { createHash } from 'node:crypto';
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { watch, type FSWatcher } from 'chokidar';
 import { formatIssue, loadCase } from '../../model/index.js';
 import { escapeMarkup } from '../../report/escape.js';
 import { CliError } from '../errors.js';
-import { reportHtml, solveForReport, type ReportRequest } from '../reportSolve.js';
+import { reconcileFilesOrFail } from '../reconcileRun.js';
+import { reportHtml, solveForReport, type ReportRequest, type ReportSections } from '../reportSolve.js';
+import { runYearWithProgress, yearInputOrFail } from '../yearRun.js';
 
 /** Where the server listens: the loopback interface, never another. */
 export const WATCH_HOST = '127.0.0.1';
@@ -23,6 +26,10 @@ export interface WatchSettings {
   log?: (line: string) => void;
   /** quiet time after a change before solving, ms; editors write in bursts */
   settleMs?: number;
+  /** a readings CSV: the meters reconciled in their own section, redrawn when the file changes */
+  readingsPath?: string;
+  /** the year of the case's profile in its own section, solved again when the case or the profile changes */
+  year?: boolean;
 }
 
 interface Problem {
@@ -65,9 +72,13 @@ export class WatchServer {
   private timer: NodeJS.Timeout | null = null;
   private port = 0;
   private readonly casePath: string;
+  /** the files whose change redraws the page: the case, the readings, the profile the case names (with the year) */
+  private watched = new Set<string>();
 
   constructor(private readonly settings: WatchSettings) {
     this.casePath = resolve(settings.casePath);
+    this.watched.add(this.casePath);
+    if (settings.readingsPath !== undefined) this.watched.add(resolve(settings.readingsPath));
     this.server = createServer((request, response) => this.handle(request, response));
   }
 
@@ -80,7 +91,7 @@ export class WatchServer {
     });
     this.port = (this.server.address() as AddressInfo).port;
     // chokidar follows an editor's save-by-rename, which a plain fs.watch on the file loses.
-    this.watcher = watch(this.casePath, { ignoreInitial: true });
+    this.watcher = watch([...this.watched], { ignoreInitial: true });
     this.watcher.on('all', () => this.changed());
     return `http://${WATCH_HOST}:${this.port}/`;
   }
@@ -131,18 +142,37 @@ export class WatchServer {
       const errors = loaded.issues.filter((issue) => issue.severity === 'error');
       this.problem = { title: `${path}: ${errors.length} error${errors.length === 1 ? '' : 's'}; the last good balance is shown greyed`, lines: loaded.issues.map((issue) => formatIssue(issue, path)) };
     } else {
+      if (this.settings.year && loaded.plant.profile) this.follow(resolve(join(dirname(path), loaded.plant.profile.file)));
+      const located: string[] = [];
       try {
-        this.html = reportHtml(await solveForReport(path, loaded, this.settings.request));
+        const sections: ReportSections = {};
+        if (this.settings.readingsPath !== undefined) {
+          const { outcome } = await reconcileFilesOrFail(path, this.settings.readingsPath, loaded.plant, { level: 0.05 }, (line) => located.push(line));
+          sections.reconciled = { outcome, readingsFile: this.settings.readingsPath };
+        }
+        if (this.settings.year) {
+          const { input } = await yearInputOrFail(path, loaded.plant, { objective: this.settings.request.objective, backend: this.settings.request.solver }, (line) => located.push(line));
+          const run = await runYearWithProgress(input, { workers: this.settings.request.workers, quiet: true, keepRecords: true });
+          sections.year = { result: run.result!, records: run.records ?? [] };
+        }
+        this.html = reportHtml(await solveForReport(path, loaded, this.settings.request), sections);
         this.problem = null;
       } catch (error) {
         if (!(error instanceof CliError)) throw error;
-        this.problem = { title: `${path}: could not be solved; the last good balance is shown greyed`, lines: error.message.split('\n') };
+        this.problem = { title: `${path}: could not be solved; the last good balance is shown greyed`, lines: [...located, ...error.message.split('\n')] };
       }
     }
     this.version += 1;
     const seconds = ((Date.now() - started) / 1000).toFixed(1);
     this.settings.log?.(this.problem ? `${this.problem.title}\n${this.problem.lines.join('\n')}` : `solved ${path} in ${seconds} s; page version ${this.version}`);
     for (const client of this.clients) client.write(`data: ${this.version}\n\n`);
+  }
+
+  /** Watch one more file (a profile the case now names); the old ones stay watched, which costs nothing but a redraw. */
+  private follow(file: string): void {
+    if (this.watched.has(file)) return;
+    this.watched.add(file);
+    this.watcher?.add(file);
   }
 
   private handle(request: IncomingMessage, response: ServerResponse): void {
@@ -172,7 +202,7 @@ export class WatchServer {
   private page(): string {
     const status = this.problem
       ? `<div id="watch-status" class="failed"><strong>${escapeMarkup(this.problem.title)}</strong><pre>${escapeMarkup(this.problem.lines.join('\n'))}</pre></div>`
-      : `<div id="watch-status">Watching ${escapeMarkup(this.settings.casePath)}: the page redraws when the file is saved.</div>`;
+      : `<div id="watch-status">Watching ${escapeMarkup([this.settings.casePath, ...(this.settings.readingsPath !== undefined ? [this.settings.readingsPath] : [])].join(' and '))}${this.settings.year ? ' and the profile the case names' : ''}: the page redraws when a file is saved.</div>`;
     const head = [`<meta name="steamwright-version" content="${this.version}">`, `<style>${WATCH_STYLE}</style>`].join('\n');
     const script = `<script>${WATCH_SCRIPT}</script>`;
     return (this.html ? withWatchPolicy(this.html) : emptyReport())
