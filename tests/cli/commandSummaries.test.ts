@@ -6,6 +6,10 @@ import { commands } from '../../src/cli/commands/index.js';
 
 describe('the top-level command list', () => {
   it('names every command, in order, with its own usage and description', () => {
-    expect(COMMAND_SUMMARIES).toEqual(commands.map((command) => ({ command: command.command, describe: command.describe })));
+    expect(COMMAND_SUMMARIES.map(({ command, describe }) => ({ command, describe }))).toEqual(commands.map((command) => ({ command: command.command, describe: command.describe })));
+  });
+
+  it('loads each command from its own module when it is named', async () => {
+    for (const [at, summary] of COMMAND_SUMMARIES.entries()) expect(await summary.load()).toBe(commands[at]);
   });
 });

@@ -4,7 +4,7 @@ import type { Argv, CommandModule } from 'yargs';
 import { getBackend, toLpFormat, type BackendName } from '../../lp/index.js';
 import type { Objective } from '../../model/index.js';
 import { plantResult, solvePlant } from '../../plant/index.js';
-import { solveSummary } from '../../report/index.js';
+import { solveSummary } from '../../report/solveSummary.js';
 import { planOutputs, writeOutputs } from '../outputFiles.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { solveFailure } from '../solveFailure.js';
