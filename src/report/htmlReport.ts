@@ -13,6 +13,7 @@ import { escapeMarkup } from './escape.js';
 import { reportTables, type ReportTable } from './reportTables.js';
 import { reportAssumptions } from './assumptions.js';
 import { createHash } from 'node:crypto';
+import { basename } from 'node:path';
 import { REPORT_SCRIPT, REPORT_STYLE } from './htmlAssets.js';
 import { SAFETY_CAUTION } from './safety.js';
 import type { SavingsResult } from '../savings/index.js';
@@ -21,6 +22,7 @@ import type { PeriodRecord, YearResult } from '../year/index.js';
 import { yearSectionHtml } from './yearCharts.js';
 import type { ReconcileOutcome } from '../reconcile/index.js';
 import { reconcileSectionHtml } from './reconcileReport.js';
+import { reconciledDiagram } from './reconciledDiagram.js';
 
 /** CSP source for the inline script: sha256 of its exact text (CSP Level 2, hash-source). */
 const SCRIPT_HASH = `sha256-${createHash('sha256').update(REPORT_SCRIPT, 'utf8').digest('base64')}`;
@@ -102,7 +104,19 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
   }
   if (options.savings) body.push(savingsSectionHtml(options.savings, format, tableHtml, e));
   if (options.year) body.push(yearSectionHtml(options.year.result, options.year.records, format, tableHtml));
-  if (options.reconciled) body.push(reconcileSectionHtml(options.reconciled.outcome, format.system, options.reconciled.readingsFile, tableHtml, e));
+  if (options.reconciled) {
+    const { outcome } = options.reconciled;
+    const block = options.titleBlock ? { ...options.titleBlock, scenario: `reconciled meters (${basename(options.reconciled.readingsFile)})` } : null;
+    const { svg, drawing } = reconciledDiagram(result, outcome, format, block);
+    const caption = [
+      `The balance with the reconciled flows: every stream the meters make observable carries its estimate, and each header's flow is the sum of what enters it${outcome.suspects.length > 0 ? '; suspect meters are noted under their units' : ''}.`,
+      drawing.modelled.length > 0 ? `Not observable from the meters, so drawn at the model's solve of the case: ${drawing.modelled.join(', ')}.` : 'Every flowing stream is observable from the meters.',
+      ...(drawing.negative.length > 0 ? [`Estimated below zero, drawn as zero: ${drawing.negative.map((entry) => `${entry.id} (${format.flow(entry.value)})`).join(', ')}.`] : []),
+      'Powers, heat duties, temperatures and steam values are the model\'s.',
+    ];
+    const figure = `<div class="diagram-wrap fit">${svg}</div><p class="hint">${e(caption.join(' '))}</p>`;
+    body.push(reconcileSectionHtml(outcome, format.system, options.reconciled.readingsFile, tableHtml, e, figure));
+  }
   const audit = result.audit;
   body.push(
     '<section id="audit"><h2>Audit</h2>',

@@ -89,6 +89,17 @@ describe('report sections from the year and the meters', () => {
     const text = sectionText(html, 'reconciliation');
     expect(text).toContain('Global test: chi-square');
     expect(text).toContain(`${outcome.suspects[0].tag} `);
+    // The diagram of reconciled flows: the suspect meter is noted under the unit it sits on, and
+    // each observable stream into or out of that unit carries the estimate reconcile --json gives.
+    const streams = (JSON.parse(alone.stdout) as { streams: { id: string; from: string; to: string; value: number | null; observable: boolean }[] }).streams;
+    const suspectMeter = (JSON.parse(alone.stdout) as { meters: { tag: string; stream: string }[] }).meters.find((meter) => meter.tag === outcome.suspects[0].tag)!;
+    const section = html.slice(html.indexOf('<section id="reconciliation">'));
+    const diagram = section.slice(section.indexOf('<svg'), section.indexOf('</svg>'));
+    expect(diagram).toContain(`suspect meter ${outcome.suspects[0].tag}`);
+    const metered = streams.find((stream) => stream.id === suspectMeter.stream)!;
+    expect(metered.observable).toBe(true);
+    const klb = (kgPerS: number): string => `${((kgPerS * 3600) / 453.59237).toPrecision(3)} klb/h`;
+    expect(diagram).toContain(klb(metered.value!));
     // Each reading's reconciled value, from reconcile --json (kg/s), in the case's klb/h to the report's digits.
     const rows = [...html.matchAll(/<tr data-id="([^"]+)"><td>[^<]*<\/td><td class="num">([^<]*)<\/td><td class="num">([^<]*)<\/td>/g)];
     for (const meter of outcome.meters) {

@@ -33,6 +33,8 @@ export interface DiagramItem {
   lines: string[];
   /** drawn as a warning: a vent */
   alarm: boolean;
+  /** lines drawn in the warning style when the item itself is not one (a note added to it, such as a suspect meter) */
+  alarmLines?: number[];
   /** a unit that is off or carries no flow: drawn greyed */
   idle?: boolean;
   /** fed from the feedwater rail: its column is kept clear up to the top */
@@ -310,4 +312,28 @@ function groupBy<T>(values: T[], key: (value: T) => string): Map<string, T[]> {
     else groups.set(name, [value]);
   }
   return groups;
+}
+
+/**
+ * Notes added to the drawing in the warning style, each under the item or
+ * water-side node it names (a suspect meter under its unit). Returns the ids
+ * that name nothing drawn, so a caller can say so in words.
+ */
+export function markDiagram(model: DiagramModel, marks: ReadonlyMap<string, string[]>): string[] {
+  const missing: string[] = [];
+  for (const [id, notes] of marks) {
+    const item = model.items.find((candidate) => candidate.id === id);
+    const node = item ? undefined : model.bottom.find((candidate) => candidate.id === id);
+    const target = item ?? node;
+    if (!target) {
+      missing.push(id);
+      continue;
+    }
+    const first = target.lines.length;
+    target.lines.push(...notes);
+    const added = notes.map((_, offset) => first + offset);
+    if (item) item.alarmLines = [...(item.alarmLines ?? []), ...added];
+    else if (node) node.alarmLines = [...node.alarmLines, ...added];
+  }
+  return missing;
 }

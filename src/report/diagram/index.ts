@@ -1,4 +1,4 @@
-export { diagramModel, type DiagramModel, type DiagramItem, type DiagramHeader, type BottomNode, type Glyph, type Placement, type TitleBlock } from './diagramModel.js';
+export { diagramModel, markDiagram, type DiagramModel, type DiagramItem, type DiagramHeader, type BottomNode, type Glyph, type Placement, type TitleBlock } from './diagramModel.js';
 export { layoutDiagram, assignColumns, bandsOf, homeBand, strokeFor, type DiagramLayout, type PlacedLabel, type PlacedItem, type PlacedHeader, type PlacedNode } from './layout.js';
 export { renderDiagramSvg } from './svgDiagram.js';
 export { resolveCollisions, LABEL_GAP, type Movable, type Resolution } from './collisions.js';

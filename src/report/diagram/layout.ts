@@ -233,7 +233,7 @@ export function layoutDiagram(model: DiagramModel): DiagramLayout {
     // Feeders sit at the bottom of their band, just above the header they feed; the rest at its top.
     const top = item.placement.kind === 'feeds' ? bandTops[start] + bandHeights[start] - BOTTOM_PAD - feedZone[start] - TOP_PAD : bandTops[start];
     const glyphY = top + TOP_PAD + GLYPH / 2;
-    const label = labelAt(item.id, item.lines, columnX[column] + GLYPH + LABEL_OFFSET, top + TOP_PAD - 2 + fontSize * 0.95 - 4, fontSize, true, item.alarm ? item.lines.map((_, line) => line) : []);
+    const label = labelAt(item.id, item.lines, columnX[column] + GLYPH + LABEL_OFFSET, top + TOP_PAD - 2 + fontSize * 0.95 - 4, fontSize, true, item.alarm ? item.lines.map((_, line) => line) : (item.alarmLines ?? []));
     const width = strokeFor(item.flow_kg_s, model.maxFlow_kg_s);
     const segments: Segment[] = [];
     const joins: { y: number }[] = [];
