@@ -1,6 +1,6 @@
 // Meter reconciliation: readings fitted to the plant's balances, tested, and
 // the suspect meters found.
-export { reconcileLinear, type BalanceRow, type LinearProblem, type LinearResult, type Reading, type ReadingResult } from './linearReconciliation.js';
+export { reconcileLinear, InconsistentBalancesError, type BalanceRow, type LinearProblem, type LinearResult, type Reading, type ReadingResult } from './linearReconciliation.js';
 export { testReconciliation, type GlobalTest, type Suspect, type TestSettings, type TestedReconciliation } from './serialElimination.js';
 export { globalCritical, globalPValue, sidakCritical, normalCritical, coverageFactor } from './statistics.js';
 export { meterStreams, type MeteredStream } from './meterStreams.js';
