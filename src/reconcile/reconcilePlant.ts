@@ -3,13 +3,14 @@
 // elimination, as plain data for the report.
 import type { Meter, Plant } from '../model/index.js';
 import { streamNetwork, type StreamNetwork } from '../plant/index.js';
-import type { BalanceRow, LinearProblem, Reading } from './linearReconciliation.js';
+import { reconcileBounded } from './boundedReconciliation.js';
+import type { BalanceRow, LinearProblem, LinearResult, Reading } from './linearReconciliation.js';
 import type { MeteredStream } from './meterStreams.js';
 import type { AveragedReading } from './readings.js';
 import { testReconciliation, type GlobalTest } from './serialElimination.js';
 import { coverageFactor } from './statistics.js';
 
-export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 1961) by projection of the unmeasured flows (Crowe et al. 1983); global chi-square test; measurement test with Sidak-corrected critical value (Mah and Tamhane 1982); serial elimination (Serth and Heenan 1986); VDI 2048 Part 1 quality criteria';
+export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 1961) by projection of the unmeasured flows (Crowe et al. 1983); global chi-square test; measurement test with Sidak-corrected critical value (Mah and Tamhane 1982); serial elimination (Serth and Heenan 1986); VDI 2048 Part 1 quality criteria; reported flows bounded at zero (active-set quadratic programme), tests on the unbounded fit';
 
 export interface MeterResult {
   tag: string;
@@ -19,8 +20,14 @@ export interface MeterResult {
   measured: number;
   /** standard deviation of the reading, kg/s (stated uncertainty over its coverage factor) */
   sigma: number;
+  /** reconciled with every flow zero or more (the bounded fit of all readings), kg/s */
   reconciled: number;
+  /** the unbounded fit's value, on which the tests are made */
+  unbounded: number;
+  /** the bounded fit holds this meter's stream at zero */
+  atBound: boolean;
   reconciledSigma: number;
+  /** reconciled - measured */
   adjustment: number;
   adjustmentSigma: number;
   redundant: boolean;
@@ -45,8 +52,12 @@ export interface StreamResult {
   to: string;
   kind: string;
   meter: string | null;
-  /** reconciled with every suspect set aside, kg/s; null where not observable */
+  /** reconciled with every suspect set aside and every flow zero or more, kg/s; null where not observable */
   value: number | null;
+  /** the same without the bounds; the uncertainty and the tests are the unbounded fit's */
+  unbounded: number | null;
+  /** held at zero by the bound */
+  atBound: boolean;
   sigma: number | null;
   observable: boolean;
 }
@@ -119,10 +130,22 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
   if (network.openUnits.length > 0) notes.push(`not balanced (their streams do not conserve mass in the model): ${network.openUnits.join(', ')}`);
   if (tested.global.dof === 0) notes.push('no reading is redundant: the balances cannot check any meter, and the readings are taken as they are');
 
+  // Flows are zero or more. The tests stay on the unbounded fit, where their
+  // distributions hold; the values reported (and written to a case) are the
+  // bounded fit's, for all readings and for the readings left after serial
+  // elimination.
+  const setAside = new Set(tested.suspects.map((suspect) => suspect.reading));
+  const finalProblem: LinearProblem = { ...problem, readings: problem.readings.filter((_, index) => !setAside.has(index)) };
+  const allBounded = reconcileBounded(problem, zeroBounds(tested.result), tested.result);
+  const finalBounded = reconcileBounded(finalProblem, zeroBounds(tested.final), tested.final);
+  const heldAll = new Set(allBounded.atBound);
+  const heldFinal = new Set(finalBounded.atBound);
+
   const suspectRank = new Map<number, number>();
   tested.suspects.forEach((suspect, rank) => suspectRank.set(suspect.reading, rank + 1));
   const meters: MeterResult[] = read.map(({ meter, stream }, index) => {
     const result = tested.result.readings[index];
+    const reconciled = allBounded.result.estimate[stream] ?? result.reconciled;
     const reading = readings.get(meter.tag)!;
     const sigma = problemReadings[index].sigma;
     const stated = sigma * coverageFactor(meter.confidence);
@@ -134,9 +157,11 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
       stream: network.streams[stream].id,
       measured: reading.value,
       sigma,
-      reconciled: result.reconciled,
+      reconciled,
+      unbounded: result.reconciled,
+      atBound: heldAll.has(stream),
       reconciledSigma: result.sigma,
-      adjustment: result.adjustment,
+      adjustment: reconciled - reading.value,
       adjustmentSigma: result.adjustmentSigma,
       redundant: result.redundant,
       statistic: result.statistic,
@@ -151,10 +176,13 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
 
   const meterOf = new Map(read.map(({ meter, stream }) => [stream, meter.tag]));
   const streams: StreamResult[] = network.streams.map((stream, index) => {
-    const value = tested.final.estimate[index];
+    const unbounded = tested.final.estimate[index];
+    const value = unbounded === null ? null : (finalBounded.result.estimate[index] ?? unbounded);
     const sigma = tested.final.sigma[index];
-    if (value !== null && value < -3 * (sigma ?? 0) - 1e-6) notes.push(`${stream.id} is estimated negative (${(value * 3.6).toFixed(2)} t/h): a meter or the case's topology is likely wrong`);
-    return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: meterOf.get(index) ?? null, value, sigma, observable: tested.final.observable[index] };
+    const atBound = heldFinal.has(index);
+    if (unbounded !== null && unbounded < -3 * (sigma ?? 0) - 1e-6) notes.push(`${stream.id} is estimated negative (${(unbounded * 3.6).toFixed(2)} t/h) beyond three standard deviations${atBound ? ' (reported at zero)' : ''}: a meter or the case's topology is likely wrong`);
+    else if (atBound) notes.push(`${stream.id} is held at zero: the unbounded fit gives ${(unbounded! * 3.6).toFixed(3)} t/h, within its uncertainty of zero`);
+    return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: meterOf.get(index) ?? null, value, unbounded, atBound, sigma, observable: tested.final.observable[index] };
   });
 
   return {
@@ -170,4 +198,9 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     unread,
     notes,
   };
+}
+
+/** A lower bound of zero on every flow the fit determines; none on the others. */
+function zeroBounds(result: LinearResult): (number | null)[] {
+  return result.estimate.map((value) => (value === null ? null : 0));
 }

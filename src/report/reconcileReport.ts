@@ -36,13 +36,16 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
   const rows = outcome.meters.map((meter) => [
     meter.tag,
     flow(meter.measured, system),
-    flow(meter.reconciled, system),
+    `${flow(meter.reconciled, system)}${meter.atBound ? ' *' : ''}`,
     `±${flow(meter.reconciledSigma * 1.96, system)}`,
     flow(meter.adjustment, system),
     statistic(meter.statistic),
     meter.suspectRank !== null ? `suspect ${meter.suspectRank}` : meter.flagged ? 'flagged' : meter.redundant ? 'ok' : 'not redundant',
   ]);
   lines.push(table(['meter', 'measured', 'reconciled', '95 % interval', 'adjustment', 'statistic', 'finding'], rows));
+  if (outcome.meters.some((meter) => meter.atBound) || outcome.streams.some((stream) => stream.atBound)) {
+    lines.push('  * held at zero: flows are zero or more, so the fit is bounded there; the tests and intervals are the unbounded fit\'s.');
+  }
   lines.push('');
   if (outcome.suspects.length === 0) {
     lines.push(g.passed ? 'Suspect meters: none (the global test passes).' : 'Suspect meters: none could be named.');
@@ -70,7 +73,7 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
   lines.push(
     table(
       ['stream', 'meter', 'estimate', '95 % interval'],
-      outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? flow(stream.value, system) : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
+      outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? `${flow(stream.value, system)}${stream.atBound ? ' *' : ''}` : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
     ),
   );
   const notRedundant = outcome.meters.filter((meter) => !meter.redundant).map((meter) => meter.tag);
@@ -84,19 +87,19 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
 /** One row per reading, then one per stream, in SI (kg/s), for spreadsheets. */
 export function reconcileCsv(outcome: ReconcileOutcome): string {
   const lines: string[] = [];
-  lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent'].join(','));
+  lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound'].join(','));
   for (const meter of outcome.meters) {
     const suspect = outcome.suspects.find((entry) => entry.tag === meter.tag);
     lines.push(
-      ['reading', meter.tag, meter.stream, meter.measured, meter.sigma, meter.reconciled, meter.reconciledSigma, meter.adjustment, meter.adjustmentSigma, meter.redundant, meter.statistic ?? '', meter.flagged, meter.suspectRank ?? '', suspect?.bias ?? '', suspect?.biasSigma ?? '', suspect?.equivalent.join(' ') ?? '']
+      ['reading', meter.tag, meter.stream, meter.measured, meter.sigma, meter.reconciled, meter.reconciledSigma, meter.adjustment, meter.adjustmentSigma, meter.redundant, meter.statistic ?? '', meter.flagged, meter.suspectRank ?? '', suspect?.bias ?? '', suspect?.biasSigma ?? '', suspect?.equivalent.join(' ') ?? '', meter.unbounded, meter.atBound]
         .map((cell) => csvCell(String(cell)))
         .join(','),
     );
   }
   lines.push('');
-  lines.push(['table', 'stream', 'from', 'to', 'kind', 'meter', 'estimate_kg_s', 'sigma_kg_s', 'observable'].join(','));
+  lines.push(['table', 'stream', 'from', 'to', 'kind', 'meter', 'estimate_kg_s', 'sigma_kg_s', 'observable', 'unbounded_kg_s', 'at_bound'].join(','));
   for (const stream of outcome.streams) {
-    lines.push(['stream', stream.id, stream.from, stream.to, stream.kind, stream.meter ?? '', stream.value ?? '', stream.sigma ?? '', stream.observable].map((cell) => csvCell(String(cell))).join(','));
+    lines.push(['stream', stream.id, stream.from, stream.to, stream.kind, stream.meter ?? '', stream.value ?? '', stream.sigma ?? '', stream.observable, stream.unbounded ?? '', stream.atBound].map((cell) => csvCell(String(cell))).join(','));
   }
   lines.push('');
   return lines.join('\r\n');
