@@ -16,4 +16,4 @@ export { willansPower } from './physics/willans.js';
 export { PlantPhysicsError } from './units/user.js';
 export type { SiteEnergyBalance } from './siteBalance.js';
 export type { PassPoint } from './context.js';
-export { streamNetwork, ENVIRONMENT, type NetworkStream, type StreamNetwork } from './streamNetwork.js';
+export { streamNetwork, streamIds, ENVIRONMENT, type NetworkStream, type StreamNetwork } from './streamNetwork.js';

@@ -32,17 +32,29 @@ export interface StreamNetwork {
 
 const TERMINALS = new Set([ATMOSPHERE, DRAIN, MAKEUP, PROCESS]);
 
+/**
+ * Each stream's id, `from->to:kind`, with `#2`, `#3` for later streams that
+ * share it: the same for the network and for a solved result's streams, which
+ * are the same list in the same order.
+ */
+export function streamIds(streams: readonly { from: string; to: string; kind: string }[]): string[] {
+  const seen = new Map<string, number>();
+  return streams.map((stream) => {
+    const base = `${stream.from}->${stream.to}:${stream.kind}`;
+    const count = (seen.get(base) ?? 0) + 1;
+    seen.set(base, count);
+    return count === 1 ? base : `${base}#${count}`;
+  });
+}
+
 /** The streams of the plant's first pass (no solve needed: the topology does not depend on the point). */
 export function streamNetwork(plant: Plant): StreamNetwork {
   const pass = buildPass(plant, contributionsOf(plant), { headerEnthalpy: initialHeaderEnthalpy(plant), previous: null, trust: new Map() }, plant.objective);
   const context = pass.context;
   const balance = new Set(context.nodes.keys());
-  const seen = new Map<string, number>();
-  const streams: NetworkStream[] = context.streams.map((stream) => {
-    const base = `${stream.from}->${stream.to}:${stream.kind}`;
-    const count = (seen.get(base) ?? 0) + 1;
-    seen.set(base, count);
-    return { id: count === 1 ? base : `${base}#${count}`, from: TERMINALS.has(stream.from) ? ENVIRONMENT : stream.from, to: TERMINALS.has(stream.to) ? ENVIRONMENT : stream.to, kind: stream.kind, p: stream.p, h: stream.h };
+  const ids = streamIds(context.streams);
+  const streams: NetworkStream[] = context.streams.map((stream, index) => {
+    return { id: ids[index], from: TERMINALS.has(stream.from) ? ENVIRONMENT : stream.from, to: TERMINALS.has(stream.to) ? ENVIRONMENT : stream.to, kind: stream.kind, p: stream.p, h: stream.h };
   });
 
   // A unit conserves mass when its inflows less its outflows vanish term by term.
