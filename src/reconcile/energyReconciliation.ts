@@ -14,7 +14,7 @@
 // At the fixed point the linearisation is exact to first order, so the
 // global and measurement tests are those of the last pass.
 import { statePT } from '../properties/index.js';
-import { reconcileLinear, type BalanceRow, type LinearResult, type Reading } from './linearReconciliation.js';
+import { reconcileLinear, type BalanceRow, type LinearProblem, type LinearResult, type Reading } from './linearReconciliation.js';
 
 export interface EnergyStream {
   id: string;
@@ -67,6 +67,8 @@ export interface EnergyResult {
    * order; its global statistic and measurement tests are the reconciliation's.
    */
   last: LinearResult;
+  /** the last pass's linear problem (the linearisation at the estimate), for the tests and serial elimination */
+  problem: LinearProblem;
   iterations: number;
   /** each node's mass balance at the estimate (in less out), kg/s; null where a flow is not observable */
   massResidual: (number | null)[];
@@ -103,8 +105,8 @@ export function reconcileWithEnergy(problem: EnergyProblem, settings: EnergySett
   let last: LinearResult | null = null;
   let moved = '';
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
-    const rows = [...massRows, ...energyBalances(problem, flows, temperatures)];
-    last = reconcileLinear({ variableCount: streamCount + pointCount, balances: rows, readings });
+    const linear: LinearProblem = { variableCount: streamCount + pointCount, balances: [...massRows, ...energyBalances(problem, flows, temperatures)], readings };
+    last = reconcileLinear(linear);
     const nextFlows = flows.map((value, j) => last!.estimate[j] ?? value);
     const nextTemperatures = temperatures.map((value, k) => last!.estimate[streamCount + k] ?? value);
     let largest = 0;
@@ -119,7 +121,7 @@ export function reconcileWithEnergy(problem: EnergyProblem, settings: EnergySett
     });
     flows = nextFlows;
     temperatures = nextTemperatures;
-    if (largest <= tolerance) return resultOf(problem, last, iteration, flows, temperatures);
+    if (largest <= tolerance) return resultOf(problem, last, linear, iteration, flows, temperatures);
   }
   throw new EnergyIterationError(`the energy balances did not settle in ${maxIterations} passes; the ${moved} kept moving (check the temperature readings and the streams' pressures)`);
 }
@@ -166,7 +168,7 @@ function energyBalances(problem: EnergyProblem, flows: readonly number[], temper
     });
 }
 
-function resultOf(problem: EnergyProblem, last: LinearResult, iterations: number, flows: readonly number[], temperatures: readonly number[]): EnergyResult {
+function resultOf(problem: EnergyProblem, last: LinearResult, linear: LinearProblem, iterations: number, flows: readonly number[], temperatures: readonly number[]): EnergyResult {
   const streamCount = problem.streams.length;
   const flowEstimates = problem.streams.map((_, j) => (last.observable[j] ? flows[j] : null));
   const temperatureEstimates = problem.points.map((_, k) => (last.observable[streamCount + k] ? temperatures[k] : null));
@@ -197,6 +199,7 @@ function resultOf(problem: EnergyProblem, last: LinearResult, iterations: number
     temperatures: temperatureEstimates,
     temperatureSigma: problem.points.map((_, k) => last.sigma[streamCount + k]),
     last,
+    problem: linear,
     iterations,
     massResidual,
     energyResidual,

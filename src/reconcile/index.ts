@@ -6,6 +6,7 @@ export { globalCritical, globalPValue, sidakCritical, normalCritical, coverageFa
 export { meterStreams, type MeteredStream } from './meterStreams.js';
 export { parseReadings, type AveragedReading, type ReadingIssue, type ReadingsResult, type ReadingsWindow } from './readings.js';
 export { reconcilePlant, readingSigma, balanceRows, METHOD, type MeterResult, type ReconcileOutcome, type ReconcileSettings, type StreamResult, type SuspectResult } from './reconcilePlant.js';
+export { planThermometers, type Thermometer, type ThermometerPlan } from './thermometers.js';
 export { reconciledDiagram, type ReconciledDiagram, type ReconciledStream, type SuspectOnStream } from './diagramFlows.js';
 export { reconcileBounded, type BoundedResult } from './boundedReconciliation.js';
 export { reconcileWithEnergy, EnergyIterationError, type EnergyNode, type EnergyProblem, type EnergyResult, type EnergySettings, type EnergyStream, type TemperaturePoint } from './energyReconciliation.js';

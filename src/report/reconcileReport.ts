@@ -18,6 +18,16 @@ function flow(value: number | null, system: UnitSystem): string {
   return value === null ? '-' : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'massFlow', system, { digits: 4 });
 }
 
+/** A reading in the case's units: a flow, or a thermometer's temperature. */
+function reading(value: number, quantity: 'flow' | 'temperature', system: UnitSystem): string {
+  return quantity === 'flow' ? flow(value, system) : formatQuantity(value, 'temperature', system, { digits: 4 });
+}
+
+/** An adjustment or interval: a flow, or a temperature difference. */
+function difference(value: number, quantity: 'flow' | 'temperature', system: UnitSystem): string {
+  return quantity === 'flow' ? flow(value, system) : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'temperatureDifference', system, { digits: 3 });
+}
+
 function statistic(value: number | null): string {
   return value === null ? 'not checkable' : value.toFixed(2);
 }
@@ -35,10 +45,10 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
   lines.push('Readings (all meters in the fit):');
   const rows = outcome.meters.map((meter) => [
     meter.tag,
-    flow(meter.measured, system),
-    `${flow(meter.reconciled, system)}${meter.atBound ? ' *' : ''}`,
-    `±${flow(meter.reconciledSigma * 1.96, system)}`,
-    flow(meter.adjustment, system),
+    reading(meter.measured, meter.quantity, system),
+    `${reading(meter.reconciled, meter.quantity, system)}${meter.atBound ? ' *' : ''}`,
+    `±${difference(meter.reconciledSigma * 1.96, meter.quantity, system)}`,
+    difference(meter.adjustment, meter.quantity, system),
     statistic(meter.statistic),
     meter.suspectRank !== null ? `suspect ${meter.suspectRank}` : meter.flagged ? 'flagged' : meter.redundant ? 'ok' : 'not redundant',
   ]);
@@ -54,14 +64,17 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
     lines.push(
       table(
         ['#', 'meter', 'statistic', 'estimated bias', '95 % interval', 'global test after'],
-        outcome.suspects.map((suspect, index) => [
-          String(index + 1),
-          suspect.tag,
-          suspect.statistic.toFixed(2),
-          flow(suspect.bias, system),
-          `±${flow(suspect.biasSigma * 1.96, system)}`,
-          suspect.globalAfter.dof === 0 ? 'nothing left to test' : `${suspect.globalAfter.statistic.toFixed(2)} of ${suspect.globalAfter.critical.toFixed(2)}: ${suspect.globalAfter.passed ? 'passed' : 'rejected'}`,
-        ]),
+        outcome.suspects.map((suspect, index) => {
+          const quantity = outcome.meters.find((meter) => meter.tag === suspect.tag)?.quantity ?? 'flow';
+          return [
+            String(index + 1),
+            suspect.tag,
+            suspect.statistic.toFixed(2),
+            difference(suspect.bias, quantity, system),
+            `±${difference(suspect.biasSigma * 1.96, quantity, system)}`,
+            suspect.globalAfter.dof === 0 ? 'nothing left to test' : `${suspect.globalAfter.statistic.toFixed(2)} of ${suspect.globalAfter.critical.toFixed(2)}: ${suspect.globalAfter.passed ? 'passed' : 'rejected'}`,
+          ];
+        }),
       ),
     );
     for (const suspect of outcome.suspects) {
@@ -84,14 +97,14 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
   return lines.join('\n');
 }
 
-/** One row per reading, then one per stream, in SI (kg/s), for spreadsheets. */
+/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K), for spreadsheets. */
 export function reconcileCsv(outcome: ReconcileOutcome): string {
   const lines: string[] = [];
-  lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound'].join(','));
+  lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound', 'quantity'].join(','));
   for (const meter of outcome.meters) {
     const suspect = outcome.suspects.find((entry) => entry.tag === meter.tag);
     lines.push(
-      ['reading', meter.tag, meter.stream, meter.measured, meter.sigma, meter.reconciled, meter.reconciledSigma, meter.adjustment, meter.adjustmentSigma, meter.redundant, meter.statistic ?? '', meter.flagged, meter.suspectRank ?? '', suspect?.bias ?? '', suspect?.biasSigma ?? '', suspect?.equivalent.join(' ') ?? '', meter.unbounded, meter.atBound]
+      ['reading', meter.tag, meter.stream, meter.measured, meter.sigma, meter.reconciled, meter.reconciledSigma, meter.adjustment, meter.adjustmentSigma, meter.redundant, meter.statistic ?? '', meter.flagged, meter.suspectRank ?? '', suspect?.bias ?? '', suspect?.biasSigma ?? '', suspect?.equivalent.join(' ') ?? '', meter.unbounded, meter.atBound, meter.quantity]
         .map((cell) => csvCell(String(cell)))
         .join(','),
     );

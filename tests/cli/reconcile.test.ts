@@ -52,7 +52,7 @@ describe('steamwright reconcile', () => {
     expect(bounded.streams.filter((entry) => entry.atBound).map((entry) => entry.id)).toEqual(['boiler_b->drain:blowdown', 'hp->pump_turbine:steam']);
     const csv = await runCli(['reconcile', DEMO, '--readings', READINGS, '--csv']);
     expect(csv.code).toBe(0);
-    expect(csv.stdout.split('\r\n')[0]).toBe('table,tag,stream,measured_kg_s,sigma_kg_s,reconciled_kg_s,reconciled_sigma_kg_s,adjustment_kg_s,adjustment_sigma_kg_s,redundant,statistic,flagged,suspect_rank,bias_kg_s,bias_sigma_kg_s,equivalent,unbounded_kg_s,at_bound');
+    expect(csv.stdout.split('\r\n')[0]).toBe('table,tag,stream,measured_kg_s,sigma_kg_s,reconciled_kg_s,reconciled_sigma_kg_s,adjustment_kg_s,adjustment_sigma_kg_s,redundant,statistic,flagged,suspect_rank,bias_kg_s,bias_sigma_kg_s,equivalent,unbounded_kg_s,at_bound,quantity');
     expect(csv.stdout).toMatch(/\r\nreading,FT-111,hp->bptg:steam,/);
   });
 

@@ -4,7 +4,8 @@ import { open } from 'node:fs/promises';
 import type { Argv, CommandModule } from 'yargs';
 import { formatIssue, resolveMeters, type Issue } from '../../model/index.js';
 import { streamNetwork } from '../../plant/index.js';
-import { meterStreams, parseReadings, readingSigma, reconcilePlant, reconciledCase, type AveragedReading } from '../../reconcile/index.js';
+import { PropertyRangeError } from '../../properties/index.js';
+import { EnergyIterationError, InconsistentBalancesError, meterStreams, parseReadings, planThermometers, readingSigma, reconcilePlant, reconciledCase, type AveragedReading } from '../../reconcile/index.js';
 import { reconcileCsv, reconcileText } from '../../report/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
@@ -65,7 +66,8 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
     const { meters, issues: meterIssues } = resolveMeters(caseText);
     const network = streamNetwork(loaded.plant);
     const { metered, issues: streamIssues } = meterStreams(meters, network);
-    const caseIssues: Issue[] = [...meterIssues, ...streamIssues];
+    const plan = planThermometers(meters, network, loaded.plant);
+    const caseIssues: Issue[] = [...meterIssues, ...streamIssues, ...plan.issues];
     if (meters.length === 0 && caseIssues.length === 0) throw new CliError(`${args.case}: the case has no meters; add a "meters:" list (tag, unit, measures, uncertainty) to reconcile`, EXIT_PROBLEMS);
     if (caseIssues.length > 0) {
       for (const issue of caseIssues.sort((a, b) => a.line - b.line)) process.stderr.write(`${formatIssue(issue, args.case)}\n`);
@@ -74,7 +76,7 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
 
     const readingsText = (await readBounded(args.readings, MAX_READINGS_BYTES)).toString('utf8');
     const window = { from: args.from === undefined ? null : Date.parse(args.from), to: args.to === undefined ? null : Date.parse(args.to) };
-    const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window);
+    const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window, new Set(plan.thermometers.map((thermometer) => thermometer.meter.tag)));
     const readingProblems = parsed.ok ? [] : parsed.issues;
     if (parsed.ok && !parsed.series && (window.from !== null || window.to !== null)) {
       throw new CliError(`${args.readings}: --from and --to choose a window of a series, but the file has no time column`, EXIT_PROBLEMS);
@@ -92,7 +94,16 @@ export const reconcileCommand: CommandModule<object, ReconcileArgs> = {
     }
     if (readings.size === 0) throw new CliError(`${args.readings}: no reading of any meter${window.from !== null || window.to !== null ? ' in the window --from/--to' : ''}; nothing was reconciled`, EXIT_PROBLEMS);
 
-    const outcome = reconcilePlant(loaded.plant, metered, readings, { level: args.level }, network);
+    let outcome;
+    try {
+      outcome = reconcilePlant(loaded.plant, metered, readings, { level: args.level }, network, plan.thermometers);
+    } catch (error) {
+      // The energy balances can fail on the readings themselves: say which, never a stack trace.
+      if (error instanceof EnergyIterationError || error instanceof InconsistentBalancesError || error instanceof PropertyRangeError) {
+        throw new CliError(`${args.readings}: cannot be reconciled: ${error.message}; nothing was reconciled`, EXIT_PROBLEMS);
+      }
+      throw error;
+    }
     const system = loaded.plant.site.unitSystem;
     const written = args['write-case'] !== undefined ? reconciledCase(caseText, outcome, system, args.readings) : null;
     let summary = args.json ? `${JSON.stringify({ case: loaded.plant.name, readings: args.readings, ...outcome, written_case: written ? { updated: written.updated, kept: written.kept } : null }, null, 2)}\n` : reconcileText(outcome, system, loaded.plant.name);
