@@ -4,7 +4,8 @@
 import { open } from 'node:fs/promises';
 import { formatIssue, resolveMeters, type Issue, type Plant } from '../model/index.js';
 import { streamNetwork } from '../plant/index.js';
-import { meterStreams, parseReadings, readingSigma, reconcilePlant, type AveragedReading, type ReconcileOutcome } from '../reconcile/index.js';
+import { PropertyRangeError } from '../properties/index.js';
+import { EnergyIterationError, InconsistentBalancesError, meterStreams, parseReadings, planThermometers, readingSigma, reconcilePlant, type AveragedReading, type ReconcileOutcome } from '../reconcile/index.js';
 import { CliError, EXIT_PROBLEMS } from './errors.js';
 
 /** A readings file larger than this is refused (a year of minute readings of 50 meters is some 30 MB). */
@@ -22,7 +23,8 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
   const { meters, issues: meterIssues } = resolveMeters(caseText);
   const network = streamNetwork(plant);
   const { metered, issues: streamIssues } = meterStreams(meters, network);
-  const caseIssues: Issue[] = [...meterIssues, ...streamIssues];
+  const plan = planThermometers(meters, network, plant);
+  const caseIssues: Issue[] = [...meterIssues, ...streamIssues, ...plan.issues];
   if (meters.length === 0 && caseIssues.length === 0) throw new CliError(`${casePath}: the case has no meters; add a "meters:" list (tag, unit, measures, uncertainty) to reconcile`, EXIT_PROBLEMS);
   if (caseIssues.length > 0) {
     for (const issue of caseIssues.sort((a, b) => a.line - b.line)) say(formatIssue(issue, casePath));
@@ -31,7 +33,7 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
 
   const readingsText = (await readBounded(readingsPath, MAX_READINGS_BYTES)).toString('utf8');
   const window = { from: settings.from === undefined ? null : Date.parse(settings.from), to: settings.to === undefined ? null : Date.parse(settings.to) };
-  const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window);
+  const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window, new Set(plan.thermometers.map((thermometer) => thermometer.meter.tag)));
   const readingProblems = parsed.ok ? [] : parsed.issues;
   if (parsed.ok && !parsed.series && (window.from !== null || window.to !== null)) {
     throw new CliError(`${readingsPath}: --from and --to choose a window of a series, but the file has no time column`, EXIT_PROBLEMS);
@@ -49,8 +51,16 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
   }
   if (readings.size === 0) throw new CliError(`${readingsPath}: no reading of any meter${window.from !== null || window.to !== null ? ' in the window --from/--to' : ''}; nothing was reconciled`, EXIT_PROBLEMS);
 
-  const outcome = reconcilePlant(plant, metered, readings, { level: settings.level }, network);
-  return { outcome, caseText };
+  try {
+    const outcome = reconcilePlant(plant, metered, readings, { level: settings.level }, network, plan.thermometers);
+    return { outcome, caseText };
+  } catch (error) {
+    // The energy balances can fail on the readings themselves: say which, never a stack trace.
+    if (error instanceof EnergyIterationError || error instanceof InconsistentBalancesError || error instanceof PropertyRangeError) {
+      throw new CliError(`${readingsPath}: cannot be reconciled: ${error.message}; nothing was reconciled`, EXIT_PROBLEMS);
+    }
+    throw error;
+  }
 }
 
 const toStderr = (line: string): void => {

@@ -340,7 +340,7 @@ export interface MeterEntry {
   tag: string;
   name?: string;
   unit: string;
-  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
+  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid' | 'temperature';
   to?: string;
   uncertainty: QuantityText;
   confidence?: QuantityText;

@@ -6,17 +6,20 @@ import { ResolveContext } from './resolveContext.js';
 
 export type MeteredFlow = 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
 
+/** What a meter reads: a flow word, or `temperature` (a thermometer). */
+export type MeterMeasure = MeteredFlow | 'temperature';
+
 export interface Meter {
   tag: string;
   name: string;
   /** unit, header, flash tank or deaerator whose stream it measures */
   unit: string;
-  measures: MeteredFlow;
+  measures: MeterMeasure;
   /** the stream's other end, where the unit has several of that kind */
   to: string | null;
   /** expanded uncertainty as a fraction of the reading, or null */
   relativeUncertainty: number | null;
-  /** expanded uncertainty as a flow, kg/s, or null */
+  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K), or null */
   absoluteUncertainty: number | null;
   /** two-sided confidence of the stated uncertainty, e.g. 0.95 */
   confidence: number;
@@ -46,7 +49,7 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
       continue;
     }
     tags.set(tag, path);
-    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty']);
+    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature');
     let confidence = 0.95;
     if (item.confidence !== undefined) {
       const value = context.quantity([...path, 'confidence'], 'percent');
@@ -61,7 +64,7 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
       tag,
       name: typeof item.name === 'string' ? item.name : tag,
       unit,
-      measures: item.measures as MeteredFlow,
+      measures: item.measures as MeterMeasure,
       to: typeof item.to === 'string' ? item.to : null,
       ...uncertainty,
       confidence,
@@ -72,10 +75,24 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
   return { meters, issues: context.issues };
 }
 
-function uncertaintyOf(context: ResolveContext, path: CasePath): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
+function uncertaintyOf(context: ResolveContext, path: CasePath, thermometer: boolean): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
   const text = context.text(path);
   if (text === undefined) return null;
   const relative = /%\s*$/.test(text);
+  if (thermometer) {
+    // A share of a temperature depends on its scale (degC, K): only a difference means anything.
+    if (relative) {
+      context.error('uncertainty-kind', path, `expected a thermometer's uncertainty as a temperature difference such as "1 K" or "2 degF", found "${text}"`);
+      return null;
+    }
+    const value = context.quantity(path, 'temperatureDifference');
+    if (value === undefined) return null;
+    if (!(value > 0)) {
+      context.error('uncertainty-not-positive', path, `expected an uncertainty above zero (such as "1 K"), found "${text}"`);
+      return null;
+    }
+    return { relativeUncertainty: null, absoluteUncertainty: value };
+  }
   const value = context.quantity(path, relative ? 'percent' : 'massFlow');
   if (value === undefined) return null;
   if (!(value > 0)) {

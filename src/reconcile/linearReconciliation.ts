@@ -20,10 +20,12 @@
 // reconciled covariance D (I - Pi) D.
 import { EigenvalueDecomposition, Matrix, SingularValueDecomposition } from 'ml-matrix';
 
-/** A balance as sparse coefficients over variable indices. */
+/** A balance as sparse coefficients over variable indices: sum terms x + constant = 0. */
 export interface BalanceRow {
   name: string;
   terms: ReadonlyMap<number, number>;
+  /** known part of the balance (a heat loss, a linearisation's offset); 0 when absent */
+  constant?: number;
 }
 
 export interface Reading {
@@ -162,11 +164,27 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
   for (let q = 0; q < reduced.rows; q++) for (let x = 0; x < p; x++) gT.set(x, q, reduced.get(q, x) * sigma[x]);
   let basis: Matrix | null = null; // p x dof: orthonormal basis of G's row space
   let dof = 0;
+  let gSvd: SingularValueDecomposition | null = null;
   if (reduced.rows > 0 && p > 0) {
-    const svd = new SingularValueDecomposition(gT, { autoTranspose: false });
-    const largest = Math.max(...svd.diagonal, 0);
-    dof = svd.diagonal.filter((value) => value > RANK_TOLERANCE * Math.max(1, largest) * gRows).length;
-    if (dof > 0) basis = svd.leftSingularVectors.subMatrix(0, p - 1, 0, dof - 1);
+    gSvd = new SingularValueDecomposition(gT, { autoTranspose: false });
+    const largest = Math.max(...gSvd.diagonal, 0);
+    dof = gSvd.diagonal.filter((value) => value > RANK_TOLERANCE * Math.max(1, largest) * gRows).length;
+    if (dof > 0) basis = gSvd.leftSingularVectors.subMatrix(0, p - 1, 0, dof - 1);
+  }
+
+  // The reduced balances' known part P c. With constants the measured flows
+  // satisfy G z = -P c (z = x / sigma): z = w - G+ (G w + P c), so each
+  // coordinate of the adjustment in G's row space gains (V' P c)_c / s_c.
+  const constants = problem.balances.map((row) => row.constant ?? 0);
+  const hasConstants = constants.some((value) => value !== 0);
+  const reducedConstant = new Array<number>(projector.rows).fill(0);
+  if (hasConstants) {
+    for (let q = 0; q < projector.rows; q++) {
+      let sum = 0;
+      for (let i = 0; i < m; i++) sum += projector.get(q, i) * constants[i];
+      reducedConstant[q] = sum;
+    }
+    checkConsistent(reducedConstant, gSvd, dof, problem.balances);
   }
 
   // Pi w and diag(Pi).
@@ -177,6 +195,11 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
     for (let c = 0; c < dof; c++) {
       let sum = 0;
       for (let x = 0; x < p; x++) sum += basis.get(x, c) * scaled[x];
+      if (hasConstants && gSvd) {
+        let projected = 0;
+        for (let q = 0; q < reducedConstant.length; q++) projected += gSvd.rightSingularVectors.get(q, c) * reducedConstant[q];
+        sum += projected / gSvd.diagonal[c];
+      }
       coordinates[c] = sum;
     }
     for (let x = 0; x < p; x++) {
@@ -233,6 +256,15 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
     }
     const reconciledScaled = readings.map((result, x) => result.reconciled / sigma[x]);
     const vtRows = vtAx.to2DArray();
+    // S^-1 V_r' c: the constants' share of u = -A_u+ (A_x x + c).
+    const vtc = new Array<number>(rank).fill(0);
+    if (hasConstants) {
+      for (let c = 0; c < rank; c++) {
+        let sum = 0;
+        for (let i = 0; i < m; i++) sum += leftVectors.get(i, c) * constants[i];
+        vtc[c] = sum / values[c];
+      }
+    }
     const gainRow = new Float64Array(p); // (K D)_u, only for observable u
     for (let u = 0; u < k; u++) {
       let inRowSpace = 0;
@@ -248,6 +280,7 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
         for (let x = 0; x < p; x++) gainRow[x] += weight * row[x];
       }
       let value = 0;
+      for (let c = 0; c < rank; c++) value -= rowSpace.get(u, c) * vtc[c];
       let total = 0;
       for (let x = 0; x < p; x++) {
         value -= gainRow[x] * reconciledScaled[x];
@@ -268,4 +301,27 @@ export function reconcileLinear(problem: LinearProblem): LinearResult {
   }
 
   return { estimate, sigma: estimateSigma, observable, readings, globalStatistic, dof };
+}
+
+/** Thrown when balances with constants cannot all hold whatever the readings (the constants contradict each other). */
+export class InconsistentBalancesError extends Error {}
+
+/**
+ * P c must lie in G's column space: otherwise no choice of the measured flows
+ * closes the balances (for instance two heat losses on one closed loop).
+ */
+function checkConsistent(reducedConstant: readonly number[], svd: SingularValueDecomposition | null, dof: number, balances: readonly BalanceRow[]): void {
+  // The part of P c outside the span of G's first dof left vectors (V's columns), as a vector: no cancellation of squares.
+  const outside = [...reducedConstant];
+  if (svd) {
+    for (let c = 0; c < dof; c++) {
+      let projected = 0;
+      for (let q = 0; q < reducedConstant.length; q++) projected += svd.rightSingularVectors.get(q, c) * reducedConstant[q];
+      for (let q = 0; q < outside.length; q++) outside[q] -= svd.rightSingularVectors.get(q, c) * projected;
+    }
+  }
+  const scale = Math.max(1, ...balances.map((row) => Math.abs(row.constant ?? 0)));
+  if (Math.hypot(...outside) > 1e-8 * scale) {
+    throw new InconsistentBalancesError(`the balances' known terms contradict each other (${balances.filter((row) => (row.constant ?? 0) !== 0).map((row) => row.name).join(', ')}): no set of flows closes them`);
+  }
 }

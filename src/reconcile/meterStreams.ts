@@ -26,19 +26,20 @@ export interface MeteredStream {
   stream: number;
 }
 
-/** Every meter's stream, or a located issue for each meter that names none or several. */
+/** Every flow meter's stream, or a located issue for each meter that names none or several. Thermometers are left out. */
 export function meterStreams(meters: readonly Meter[], network: StreamNetwork): { metered: MeteredStream[]; issues: Issue[] } {
   const metered: MeteredStream[] = [];
   const issues: Issue[] = [];
   const ends = new Set(network.streams.flatMap((stream) => [stream.from, stream.to]));
   const byStream = new Map<number, Meter>();
   for (const meter of meters) {
+    if (meter.measures === 'temperature') continue; // thermometers: see thermometers.ts
     if (!ends.has(meter.unit)) {
       issues.push(meter.issueAt('unit', 'meter-no-stream', `meter ${meter.tag} names "${meter.unit}", which no stream of the plant starts or ends at; expected the id of a unit, header, flash tank or "deaerator"`));
       continue;
     }
     const touching = network.streams.map((stream, index) => ({ stream, index })).filter(({ stream }) => stream.from === meter.unit || stream.to === meter.unit);
-    let candidates = touching.filter(({ stream }) => KINDS[meter.measures].includes(stream.kind));
+    let candidates = touching.filter(({ stream }) => KINDS[meter.measures as MeteredFlow].includes(stream.kind));
     if (meter.to !== null) candidates = candidates.filter(({ stream }) => otherEnd(stream, meter.unit) === meter.to);
     // A unit's steam is its inlet where it has one (a letdown, a turbine, a user), else its outlet (a boiler).
     if (candidates.length > 1 && meter.measures === 'steam') {

@@ -33,7 +33,8 @@ export interface ReadingsWindow {
 
 export type ReadingsResult = { ok: true; readings: Map<string, AveragedReading>; series: boolean; rows: number } | { ok: false; issues: ReadingIssue[] };
 
-export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }): ReadingsResult {
+/** `temperatureTags`: the thermometers among the known tags, read as temperatures (K inside) rather than flows. */
+export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, temperatureTags: ReadonlySet<string> = new Set()): ReadingsResult {
   const issues: ReadingIssue[] = [];
   let records: { record: string[]; info: { lines: number } }[];
   const skipped = (error: { message?: string; lines?: number } | undefined): undefined => {
@@ -79,20 +80,25 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       }
       if ((window.from !== null && time < window.from) || (window.to !== null && time > window.to)) continue;
     }
+    const thermometer = temperatureTags.has(tag);
     if (unit === '') {
-      issues.push({ line, message: `reading of ${tag} has no unit; expected a mass flow unit such as t/h, kg/s or klb/h, found "${valueText}"` });
+      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
       continue;
     }
     if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(valueText)) {
       issues.push({ line, message: `value of ${tag}: expected a number, found "${valueText}"` });
       continue;
     }
-    const parsed = parseQuantity(`${valueText} ${unit}`, 'massFlow');
+    const parsed = parseQuantity(`${valueText} ${unit}`, thermometer ? 'temperature' : 'massFlow');
     if (!parsed.ok) {
       issues.push({ line, message: `unit of ${tag}: ${parsed.message}` });
       continue;
     }
-    if (parsed.value < 0) {
+    if (thermometer && !(parsed.value > 273.15 && parsed.value < 1073.15)) {
+      issues.push({ line, message: `reading of ${tag} is ${valueText} ${unit}; expected a water or steam temperature above 0 degC and below 800 degC (the IF97 range the balances use)` });
+      continue;
+    }
+    if (!thermometer && parsed.value < 0) {
       issues.push({ line, message: `reading of ${tag} is a negative flow, "${valueText} ${unit}"; a flow meter reads zero or more (check the sign or the meter's direction)` });
       continue;
     }

@@ -3,24 +3,37 @@
 // elimination, as plain data for the report.
 import type { Meter, Plant } from '../model/index.js';
 import { streamNetwork, type StreamNetwork } from '../plant/index.js';
-import type { BalanceRow, LinearProblem, Reading } from './linearReconciliation.js';
+import { saturationTemperature } from '../properties/index.js';
+import { reconcileBounded } from './boundedReconciliation.js';
+import { reconcileWithEnergy, type EnergyProblem } from './energyReconciliation.js';
+import { planThermometers, type Thermometer } from './thermometers.js';
+import type { BalanceRow, LinearProblem, LinearResult, Reading } from './linearReconciliation.js';
 import type { MeteredStream } from './meterStreams.js';
 import type { AveragedReading } from './readings.js';
 import { testReconciliation, type GlobalTest } from './serialElimination.js';
 import { coverageFactor } from './statistics.js';
 
-export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 1961) by projection of the unmeasured flows (Crowe et al. 1983); global chi-square test; measurement test with Sidak-corrected critical value (Mah and Tamhane 1982); serial elimination (Serth and Heenan 1986); VDI 2048 Part 1 quality criteria';
+export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 1961) by projection of the unmeasured flows (Crowe et al. 1983); global chi-square test; measurement test with Sidak-corrected critical value (Mah and Tamhane 1982); serial elimination (Serth and Heenan 1986); VDI 2048 Part 1 quality criteria; reported flows bounded at zero (active-set quadratic programme), tests on the unbounded fit';
 
 export interface MeterResult {
   tag: string;
   name: string;
+  /** a flow meter (values in kg/s) or a thermometer (values in K, uncertainties in K) */
+  quantity: 'flow' | 'temperature';
+  /** the stream it reads; a thermometer on a header, the header */
   stream: string;
-  /** averaged reading, kg/s */
+  /** averaged reading, kg/s (K for a thermometer) */
   measured: number;
   /** standard deviation of the reading, kg/s (stated uncertainty over its coverage factor) */
   sigma: number;
+  /** reconciled with every flow zero or more (the bounded fit of all readings), kg/s */
   reconciled: number;
+  /** the unbounded fit's value, on which the tests are made */
+  unbounded: number;
+  /** the bounded fit holds this meter's stream at zero */
+  atBound: boolean;
   reconciledSigma: number;
+  /** reconciled - measured */
   adjustment: number;
   adjustmentSigma: number;
   redundant: boolean;
@@ -45,8 +58,12 @@ export interface StreamResult {
   to: string;
   kind: string;
   meter: string | null;
-  /** reconciled with every suspect set aside, kg/s; null where not observable */
+  /** reconciled with every suspect set aside and every flow zero or more, kg/s; null where not observable */
   value: number | null;
+  /** the same without the bounds; the uncertainty and the tests are the unbounded fit's */
+  unbounded: number | null;
+  /** held at zero by the bound */
+  atBound: boolean;
   sigma: number | null;
   observable: boolean;
 }
@@ -100,17 +117,44 @@ export function balanceRows(network: StreamNetwork): BalanceRow[] {
   });
 }
 
-export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant)): ReconcileOutcome {
+export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), thermometers: readonly Thermometer[] = []): ReconcileOutcome {
   const level = settings.level ?? 0.05;
   const notes: string[] = [];
   const read = metered.filter(({ meter }) => readings.has(meter.tag));
-  const unread = metered.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag);
-  const problemReadings: Reading[] = read.map(({ meter, stream }) => {
+  const readThermometers = thermometers.filter((thermometer) => readings.has(thermometer.meter.tag) && fixesEnthalpy(thermometer, readings, []));
+  const unread = [...metered.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag), ...thermometers.filter((thermometer) => !readings.has(thermometer.meter.tag)).map((thermometer) => thermometer.meter.tag)];
+  const flowReadings: Reading[] = read.map(({ meter, stream }) => {
     const value = readings.get(meter.tag)!.value;
     return { variable: stream, value, sigma: readingSigma(meter, value) };
   });
-  const problem: LinearProblem = { variableCount: network.streams.length, balances: balanceRows(network), readings: problemReadings };
+  const streamCount = network.streams.length;
+
+  // Energy balances where the thermometers allow them (thermometers.ts), by
+  // successive linearisation; the tests are then made on the linearisation at
+  // the estimate. Without them, the mass balances alone.
+  for (const thermometer of thermometers) if (readings.has(thermometer.meter.tag)) fixesEnthalpy(thermometer, readings, notes);
+  const energyHeaders = energyHeadersOf(plant, network, readThermometers, notes);
+  let problem: LinearProblem;
+  if (energyHeaders.size > 0) {
+    const pointOf = new Map<number, number>();
+    readThermometers.forEach((thermometer, point) => thermometer.streams.forEach((index) => pointOf.set(index, point)));
+    const headerLoss = new Map(plant.headers.map((header) => [header.id, header.heatLoss]));
+    const energyProblem: EnergyProblem = {
+      streams: network.streams.map((stream, index) => ({ id: stream.id, from: stream.from, to: stream.to, p: stream.p, h: stream.h, point: pointOf.get(index) ?? null })),
+      nodes: network.nodes.map((node) => ({ id: node, energy: energyHeaders.has(node), heatLoss: energyHeaders.has(node) ? (headerLoss.get(node) ?? 0) : 0 })),
+      points: readThermometers.map((thermometer) => ({ id: thermometer.meter.tag, p: thermometer.p, guess: readings.get(thermometer.meter.tag)!.value })),
+      flows: flowReadings,
+      temperatures: readThermometers.map((thermometer, point) => ({ variable: point, value: readings.get(thermometer.meter.tag)!.value, sigma: readingSigma(thermometer.meter, 0) })),
+    };
+    problem = reconcileWithEnergy(energyProblem).problem;
+    notes.push(`energy balances written at ${[...energyHeaders].join(', ')} (IF97 enthalpies at the thermometers' temperatures, successive linearisation; the tests are made on the linearisation at the estimate)`);
+  } else {
+    problem = { variableCount: streamCount, balances: balanceRows(network), readings: flowReadings };
+  }
   const tested = testReconciliation(problem, { level });
+  // Reading i of the problem: the flow meters, then the thermometers used.
+  const used = energyHeaders.size > 0 ? readThermometers : [];
+  const tagOf = (index: number): string => (index < read.length ? read[index].meter.tag : used[index - read.length].meter.tag);
 
   for (const node of network.nodes) {
     const touching = network.streams.filter((stream) => stream.from === node || stream.to === node);
@@ -119,24 +163,43 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
   if (network.openUnits.length > 0) notes.push(`not balanced (their streams do not conserve mass in the model): ${network.openUnits.join(', ')}`);
   if (tested.global.dof === 0) notes.push('no reading is redundant: the balances cannot check any meter, and the readings are taken as they are');
 
+  // Flows are zero or more. The tests stay on the unbounded fit, where their
+  // distributions hold; the values reported (and written to a case) are the
+  // bounded fit's, for all readings and for the readings left after serial
+  // elimination. Temperatures are not bounded.
+  const setAside = new Set(tested.suspects.map((suspect) => suspect.reading));
+  const finalProblem: LinearProblem = { ...problem, readings: problem.readings.filter((_, index) => !setAside.has(index)) };
+  const allBounded = reconcileBounded(problem, zeroBounds(tested.result, streamCount), tested.result);
+  const finalBounded = reconcileBounded(finalProblem, zeroBounds(tested.final, streamCount), tested.final);
+  const heldAll = new Set(allBounded.atBound);
+  const heldFinal = new Set(finalBounded.atBound);
+
   const suspectRank = new Map<number, number>();
   tested.suspects.forEach((suspect, rank) => suspectRank.set(suspect.reading, rank + 1));
-  const meters: MeterResult[] = read.map(({ meter, stream }, index) => {
+  const meterRows: { meter: Meter; variable: number; where: string; quantity: 'flow' | 'temperature' }[] = [
+    ...read.map(({ meter, stream }) => ({ meter, variable: stream, where: network.streams[stream].id, quantity: 'flow' as const })),
+    ...used.map((thermometer, point) => ({ meter: thermometer.meter, variable: streamCount + point, where: thermometer.meter.unit === thermometer.header ? thermometer.header : network.streams[thermometer.streams[0]].id, quantity: 'temperature' as const })),
+  ];
+  const meters: MeterResult[] = meterRows.map(({ meter, variable, where, quantity }, index) => {
     const result = tested.result.readings[index];
+    const reconciled = allBounded.result.estimate[variable] ?? result.reconciled;
     const reading = readings.get(meter.tag)!;
-    const sigma = problemReadings[index].sigma;
+    const sigma = problem.readings[index].sigma;
     const stated = sigma * coverageFactor(meter.confidence);
     const unsteady = reading.drift !== null && Math.abs(reading.drift) > stated;
-    if (unsteady) notes.push(`${meter.tag} drifted ${(reading.drift! * 3.6).toFixed(2)} t/h across the window, more than its stated uncertainty: the window may not be steady`);
+    if (unsteady) notes.push(`${meter.tag} drifted ${quantity === 'flow' ? `${(reading.drift! * 3.6).toFixed(2)} t/h` : `${reading.drift!.toFixed(2)} K`} across the window, more than its stated uncertainty: the window may not be steady`);
     return {
       tag: meter.tag,
       name: meter.name,
-      stream: network.streams[stream].id,
+      quantity,
+      stream: where,
       measured: reading.value,
       sigma,
-      reconciled: result.reconciled,
+      reconciled,
+      unbounded: result.reconciled,
+      atBound: heldAll.has(variable),
       reconciledSigma: result.sigma,
-      adjustment: result.adjustment,
+      adjustment: reconciled - reading.value,
       adjustmentSigma: result.adjustmentSigma,
       redundant: result.redundant,
       statistic: result.statistic,
@@ -151,10 +214,13 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
 
   const meterOf = new Map(read.map(({ meter, stream }) => [stream, meter.tag]));
   const streams: StreamResult[] = network.streams.map((stream, index) => {
-    const value = tested.final.estimate[index];
+    const unbounded = tested.final.estimate[index];
+    const value = unbounded === null ? null : (finalBounded.result.estimate[index] ?? unbounded);
     const sigma = tested.final.sigma[index];
-    if (value !== null && value < -3 * (sigma ?? 0) - 1e-6) notes.push(`${stream.id} is estimated negative (${(value * 3.6).toFixed(2)} t/h): a meter or the case's topology is likely wrong`);
-    return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: meterOf.get(index) ?? null, value, sigma, observable: tested.final.observable[index] };
+    const atBound = heldFinal.has(index);
+    if (unbounded !== null && unbounded < -3 * (sigma ?? 0) - 1e-6) notes.push(`${stream.id} is estimated negative (${(unbounded * 3.6).toFixed(2)} t/h) beyond three standard deviations${atBound ? ' (reported at zero)' : ''}: a meter or the case's topology is likely wrong`);
+    else if (atBound) notes.push(`${stream.id} is held at zero: the unbounded fit gives ${(unbounded! * 3.6).toFixed(3)} t/h, within its uncertainty of zero`);
+    return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: meterOf.get(index) ?? null, value, unbounded, atBound, sigma, observable: tested.final.observable[index] };
   });
 
   return {
@@ -165,9 +231,39 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     meters,
     global: tested.global,
     measurementCritical: tested.measurementCritical,
-    vdi2048: { globalPassed: tested.vdi2048.globalPassed, critical: tested.vdi2048.critical, flagged: tested.vdi2048.flagged.map((index) => read[index].meter.tag) },
-    suspects: tested.suspects.map((suspect) => ({ tag: read[suspect.reading].meter.tag, statistic: suspect.statistic, bias: suspect.bias, biasSigma: suspect.biasSigma, globalAfter: suspect.globalAfter, equivalent: suspect.equivalent.map((index) => read[index].meter.tag) })),
+    vdi2048: { globalPassed: tested.vdi2048.globalPassed, critical: tested.vdi2048.critical, flagged: tested.vdi2048.flagged.map(tagOf) },
+    suspects: tested.suspects.map((suspect) => ({ tag: tagOf(suspect.reading), statistic: suspect.statistic, bias: suspect.bias, biasSigma: suspect.biasSigma, globalAfter: suspect.globalAfter, equivalent: suspect.equivalent.map(tagOf) })),
     unread,
     notes,
   };
+}
+
+/** A lower bound of zero on every flow the fit determines (the first `flows` variables); none on the others. */
+function zeroBounds(result: LinearResult, flows: number): (number | null)[] {
+  return result.estimate.map((value, index) => (value === null || index >= flows ? null : 0));
+}
+
+/**
+ * Saturated or wet steam has the same temperature at every quality, so a
+ * thermometer there does not fix the enthalpy. A reading within 2 K of the
+ * saturation temperature is left out of the energy balances, with a note
+ * (the 2 K margin is this program's choice, about twice a good thermometer's
+ * uncertainty; no published rule).
+ */
+function fixesEnthalpy(thermometer: Thermometer, readings: ReadonlyMap<string, AveragedReading>, notes: string[]): boolean {
+  const value = readings.get(thermometer.meter.tag)!.value;
+  const saturation = saturationTemperature(thermometer.p);
+  if (Math.abs(value - saturation) >= SATURATION_MARGIN) return true;
+  notes.push(`${thermometer.meter.tag} reads ${(value - 273.15).toFixed(1)} degC, within ${SATURATION_MARGIN} K of saturation at ${thermometer.header} (${(saturation - 273.15).toFixed(1)} degC): the temperature of saturated steam does not fix its enthalpy, so it is not used in an energy balance`);
+  return false;
+}
+
+const SATURATION_MARGIN = 2;
+
+/** The headers whose energy balance can be written with the thermometers that have readings. */
+function energyHeadersOf(plant: Plant, network: StreamNetwork, read: readonly Thermometer[], notes: string[]): Set<string> {
+  if (read.length === 0) return new Set();
+  const plan = planThermometers(read.map((thermometer) => thermometer.meter), network, plant);
+  notes.push(...plan.notes);
+  return new Set(plan.energyHeaders);
 }

@@ -111,7 +111,7 @@ export function htmlReport(plant: Plant, result: PlantResult, options: ReportOpt
     const caption = [
       `The balance with the reconciled flows: every stream the meters make observable carries its estimate, and each header's flow is the sum of what enters it${outcome.suspects.length > 0 ? '; suspect meters are noted under their units' : ''}.`,
       drawing.modelled.length > 0 ? `Not observable from the meters, so drawn at the model's solve of the case: ${drawing.modelled.join(', ')}.` : 'Every flowing stream is observable from the meters.',
-      ...(drawing.negative.length > 0 ? [`Estimated below zero, drawn as zero: ${drawing.negative.map((entry) => `${entry.id} (${format.flow(entry.value)})`).join(', ')}.`] : []),
+      ...(drawing.atZero.length > 0 ? [`Held at zero by the fit (flows are zero or more): ${drawing.atZero.join(', ')}.`] : []),
       'Powers, heat duties, temperatures and steam values are the model\'s.',
     ];
     const figure = `<div class="diagram-wrap fit">${svg}</div><p class="hint">${e(caption.join(' '))}</p>`;

@@ -19,6 +19,22 @@ function flow(value: number | null, system: UnitSystem): string {
   return value === null ? '-' : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'massFlow', system, { digits: 4 });
 }
 
+/** A reading in the case's units: a flow, or a thermometer's temperature. */
+function reading(value: number, quantity: 'flow' | 'temperature', system: UnitSystem): string {
+  return quantity === 'flow' ? flow(value, system) : formatQuantity(value, 'temperature', system, { digits: 4 });
+}
+
+/** An adjustment or interval: a flow, or a temperature difference. */
+function difference(value: number, quantity: 'flow' | 'temperature', system: UnitSystem): string {
+  return quantity === 'flow' ? flow(value, system) : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'temperatureDifference', system, { digits: 3 });
+}
+
+const AT_BOUND_NOTE = '* held at zero: flows are zero or more, so the fit is bounded there; the tests and intervals are the unbounded fit\'s.';
+
+function anyAtBound(outcome: ReconcileOutcome): boolean {
+  return outcome.meters.some((meter) => meter.atBound) || outcome.streams.some((stream) => stream.atBound);
+}
+
 function statistic(value: number | null): string {
   return value === null ? 'not checkable' : value.toFixed(2);
 }
@@ -43,10 +59,10 @@ export function reconcileTables(outcome: ReconcileOutcome, system: UnitSystem): 
     headings: ['meter', 'measured', 'reconciled', '95 % interval', 'adjustment', 'statistic', 'finding'],
     rows: outcome.meters.map((meter) => [
       meter.tag,
-      flow(meter.measured, system),
-      flow(meter.reconciled, system),
-      `±${flow(meter.reconciledSigma * 1.96, system)}`,
-      flow(meter.adjustment, system),
+      reading(meter.measured, meter.quantity, system),
+      `${reading(meter.reconciled, meter.quantity, system)}${meter.atBound ? ' *' : ''}`,
+      `±${difference(meter.reconciledSigma * 1.96, meter.quantity, system)}`,
+      difference(meter.adjustment, meter.quantity, system),
       statistic(meter.statistic),
       meter.suspectRank !== null ? `suspect ${meter.suspectRank}` : meter.flagged ? 'flagged' : meter.redundant ? 'ok' : 'not redundant',
     ]),
@@ -56,21 +72,24 @@ export function reconcileTables(outcome: ReconcileOutcome, system: UnitSystem): 
       id: 'suspects',
       title: 'Suspect meters, in the order serial elimination set them aside:',
       headings: ['#', 'meter', 'statistic', 'estimated bias', '95 % interval', 'global test after'],
-      rows: outcome.suspects.map((suspect, index) => [
-        String(index + 1),
-        suspect.tag,
-        suspect.statistic.toFixed(2),
-        flow(suspect.bias, system),
-        `±${flow(suspect.biasSigma * 1.96, system)}`,
-        suspect.globalAfter.dof === 0 ? 'nothing left to test' : `${suspect.globalAfter.statistic.toFixed(2)} of ${suspect.globalAfter.critical.toFixed(2)}: ${suspect.globalAfter.passed ? 'passed' : 'rejected'}`,
-      ]),
+      rows: outcome.suspects.map((suspect, index) => {
+        const quantity = outcome.meters.find((meter) => meter.tag === suspect.tag)?.quantity ?? 'flow';
+        return [
+          String(index + 1),
+          suspect.tag,
+          suspect.statistic.toFixed(2),
+          difference(suspect.bias, quantity, system),
+          `±${difference(suspect.biasSigma * 1.96, quantity, system)}`,
+          suspect.globalAfter.dof === 0 ? 'nothing left to test' : `${suspect.globalAfter.statistic.toFixed(2)} of ${suspect.globalAfter.critical.toFixed(2)}: ${suspect.globalAfter.passed ? 'passed' : 'rejected'}`,
+        ];
+      }),
     });
   }
   tables.push({
     id: 'streams',
     title: outcome.suspects.length === 0 ? 'Streams:' : 'Streams (suspect meters set aside):',
     headings: ['stream', 'meter', 'estimate', '95 % interval'],
-    rows: outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? flow(stream.value, system) : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
+    rows: outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? `${flow(stream.value, system)}${stream.atBound ? ' *' : ''}` : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
   });
   return tables;
 }
@@ -78,6 +97,7 @@ export function reconcileTables(outcome: ReconcileOutcome, system: UnitSystem): 
 /** What the tables leave to words: meters that cannot be told apart, those not checked, those unread, notes. */
 export function reconcileRemarks(outcome: ReconcileOutcome): string[] {
   const remarks: string[] = [];
+  if (anyAtBound(outcome)) remarks.push(AT_BOUND_NOTE);
   for (const suspect of outcome.suspects) {
     if (suspect.equivalent.length > 0) remarks.push(`${suspect.tag} cannot be told apart from ${suspect.equivalent.join(', ')} by the balances: the bias may be in any of them (add a meter that separates them).`);
   }
@@ -92,7 +112,9 @@ export function reconcileText(outcome: ReconcileOutcome, system: UnitSystem, tit
   const [method, ...tests] = reconcileHeadline(outcome);
   lines.push(`Reconciliation of ${title}`, method, '', ...tests, '');
   const [readings, ...rest] = reconcileTables(outcome, system);
-  lines.push(readings.title, table(readings.headings, readings.rows), '');
+  lines.push(readings.title, table(readings.headings, readings.rows));
+  if (anyAtBound(outcome)) lines.push(`  ${AT_BOUND_NOTE}`);
+  lines.push('');
   const suspects = rest.find((entry) => entry.id === 'suspects');
   if (!suspects) {
     lines.push(outcome.global.passed ? 'Suspect meters: none (the global test passes).' : 'Suspect meters: none could be named.');
@@ -127,22 +149,22 @@ export function reconcileSectionHtml(outcome: ReconcileOutcome, system: UnitSyst
   ].join('\n');
 }
 
-/** One row per reading, then one per stream, in SI (kg/s), for spreadsheets. */
+/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K), for spreadsheets. */
 export function reconcileCsv(outcome: ReconcileOutcome): string {
   const lines: string[] = [];
-  lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent'].join(','));
+  lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound', 'quantity'].join(','));
   for (const meter of outcome.meters) {
     const suspect = outcome.suspects.find((entry) => entry.tag === meter.tag);
     lines.push(
-      ['reading', meter.tag, meter.stream, meter.measured, meter.sigma, meter.reconciled, meter.reconciledSigma, meter.adjustment, meter.adjustmentSigma, meter.redundant, meter.statistic ?? '', meter.flagged, meter.suspectRank ?? '', suspect?.bias ?? '', suspect?.biasSigma ?? '', suspect?.equivalent.join(' ') ?? '']
+      ['reading', meter.tag, meter.stream, meter.measured, meter.sigma, meter.reconciled, meter.reconciledSigma, meter.adjustment, meter.adjustmentSigma, meter.redundant, meter.statistic ?? '', meter.flagged, meter.suspectRank ?? '', suspect?.bias ?? '', suspect?.biasSigma ?? '', suspect?.equivalent.join(' ') ?? '', meter.unbounded, meter.atBound, meter.quantity]
         .map((cell) => csvCell(String(cell)))
         .join(','),
     );
   }
   lines.push('');
-  lines.push(['table', 'stream', 'from', 'to', 'kind', 'meter', 'estimate_kg_s', 'sigma_kg_s', 'observable'].join(','));
+  lines.push(['table', 'stream', 'from', 'to', 'kind', 'meter', 'estimate_kg_s', 'sigma_kg_s', 'observable', 'unbounded_kg_s', 'at_bound'].join(','));
   for (const stream of outcome.streams) {
-    lines.push(['stream', stream.id, stream.from, stream.to, stream.kind, stream.meter ?? '', stream.value ?? '', stream.sigma ?? '', stream.observable].map((cell) => csvCell(String(cell))).join(','));
+    lines.push(['stream', stream.id, stream.from, stream.to, stream.kind, stream.meter ?? '', stream.value ?? '', stream.sigma ?? '', stream.observable, stream.unbounded ?? '', stream.atBound].map((cell) => csvCell(String(cell))).join(','));
   }
   lines.push('');
   return lines.join('\r\n');

@@ -65,6 +65,10 @@ function workspace(): string {
   writeFileSync(join(dir, 'm-bad.yaml'), metered.replace('{ tag: FT-101, unit: boiler_a,', '{ tag: FT-101, unit: boiler_z,'));
   writeFileSync(join(dir, 'r.csv'), 'tag,value,unit\nFT-101,28.0,\nFT-201,-3,klb/h\nFT-202,"7.0,klb/h\n');
   writeFileSync(join(dir, 'r-good.csv'), readFileSync(join(projectRoot, 'cases', 'millbrook-creamery.readings.csv'), 'utf8'));
+  // A thermometer on the creamery's header, read in a flow unit and given as a share.
+  writeFileSync(join(dir, 'm-tt.yaml'), `${metered}  - { tag: TT-1, unit: hp, measures: temperature, uncertainty: 1 K }\n`);
+  writeFileSync(join(dir, 'r-tt.csv'), 'tag,value,unit\nFT-101,28.0,klb/h\nTT-1,28,klb/h\n');
+  writeFileSync(join(dir, 'm-tt-pct.yaml'), `${metered}  - { tag: TT-1, unit: hp, measures: temperature, uncertainty: 1 % }\n`);
   return dir;
 }
 
@@ -155,6 +159,8 @@ const cases: HostileCase[] = [
   { title: 'reconcile: readings with no unit, a negative flow and a row that does not parse', args: ['reconcile', 'm.yaml', '--readings', 'r.csv'], code: 1, says: /r\.csv:2: reading of FT-101 has no unit[\s\S]*r\.csv:3: .*negative[\s\S]*r\.csv:4: the row does not parse as CSV/ },
   { title: 'reconcile: --write-case over the readings', args: ['reconcile', 'm.yaml', '--readings', 'r-good.csv', '--write-case', 'r-good.csv'], code: 2, says: /--write-case/, oneLine: true },
   { title: 'reconcile: a level of significance of 0', args: ['reconcile', 'm.yaml', '--readings', 'r-good.csv', '--level', '0'], code: 2, says: /--level: expected a level of significance above 0/, oneLine: true },
+  { title: 'reconcile: a thermometer read in a flow unit', args: ['reconcile', 'm-tt.yaml', '--readings', 'r-tt.csv'], code: 1, says: /r-tt\.csv:3: unit of TT-1: [\s\S]*nothing was reconciled/ },
+  { title: 'reconcile: a thermometer\'s uncertainty as a share', args: ['reconcile', 'm-tt-pct.yaml', '--readings', 'r-good.csv'], code: 1, says: /m-tt-pct\.yaml:\d+:\d+ +meters\[18\]\.uncertainty +expected a thermometer's uncertainty as a temperature difference/ },
   { title: 'reconcile: a case without meters', args: ['reconcile', 'c.yaml', '--readings', 'r-good.csv'], code: 1, says: /the case has no meters/, oneLine: true },
 ];
 

@@ -36,9 +36,23 @@ describe('steamwright reconcile', () => {
     expect(outcome.suspects[0].tag).toBe('FT-111');
     // The demo's turbine inlet reading is 15 % above the flow its readings file was drawn from (12.29 klb/h, invented).
     expect(outcome.suspects[0].bias * 3.6 / 0.45359237).toBeGreaterThan(1.0);
+    const bounded = JSON.parse(json.stdout) as { meters: { tag: string; reconciled: number; unbounded: number; atBound: boolean }[]; streams: { id: string; value: number | null; unbounded: number | null; atBound: boolean }[]; notes: string[] };
+    // The unbounded fit puts the idle pump turbine's and the letdown's meters
+    // below zero (by 0.17 and 0.20 klb/h); reported flows are zero or more,
+    // and the ones held at zero are named in the notes.
+    for (const tag of ['FT-112', 'FT-121']) {
+      const meter = bounded.meters.find((entry) => entry.tag === tag)!;
+      expect(meter.unbounded, tag).toBeLessThan(0);
+      expect(meter.atBound, tag).toBe(true);
+      expect(Math.abs(meter.reconciled), tag).toBeLessThan(1e-9);
+    }
+    for (const meter of bounded.meters) expect(meter.reconciled, meter.tag).toBeGreaterThanOrEqual(-1e-9);
+    for (const stream of bounded.streams) if (stream.value !== null) expect(stream.value, stream.id).toBeGreaterThanOrEqual(-1e-9);
+    for (const stream of bounded.streams.filter((entry) => entry.atBound)) expect(bounded.notes.join('\n')).toContain(`${stream.id} is held at zero`);
+    expect(bounded.streams.filter((entry) => entry.atBound).map((entry) => entry.id)).toEqual(['boiler_b->drain:blowdown', 'hp->pump_turbine:steam']);
     const csv = await runCli(['reconcile', DEMO, '--readings', READINGS, '--csv']);
     expect(csv.code).toBe(0);
-    expect(csv.stdout.split('\r\n')[0]).toBe('table,tag,stream,measured_kg_s,sigma_kg_s,reconciled_kg_s,reconciled_sigma_kg_s,adjustment_kg_s,adjustment_sigma_kg_s,redundant,statistic,flagged,suspect_rank,bias_kg_s,bias_sigma_kg_s,equivalent');
+    expect(csv.stdout.split('\r\n')[0]).toBe('table,tag,stream,measured_kg_s,sigma_kg_s,reconciled_kg_s,reconciled_sigma_kg_s,adjustment_kg_s,adjustment_sigma_kg_s,redundant,statistic,flagged,suspect_rank,bias_kg_s,bias_sigma_kg_s,equivalent,unbounded_kg_s,at_bound,quantity');
     expect(csv.stdout).toMatch(/\r\nreading,FT-111,hp->bptg:steam,/);
   });
 

@@ -111,3 +111,67 @@ describe('reconcileLinear', () => {
     expect(nonRedundant).toBeGreaterThan(50);
   });
 });
+
+describe('reconcileLinear with known terms in the balances', () => {
+  test('one node a - b + c = 0 with c known matches the closed form', () => {
+    // Hand derivation as above with the imbalance r = a - b + c: adjustments
+    // -sa^2 r / S and +sb^2 r / S, global statistic r^2 / S.
+    const [a, b, known] = [100, 95, -3];
+    const [sa, sb] = [2, 1.5];
+    const result = reconcileLinear({
+      variableCount: 2,
+      balances: [{ name: 'node', terms: new Map([[0, 1], [1, -1]]), constant: known }],
+      readings: [{ variable: 0, value: a, sigma: sa }, { variable: 1, value: b, sigma: sb }],
+    });
+    const r = a - b + known;
+    const S = sa ** 2 + sb ** 2;
+    expectClose(result.readings[0].adjustment, (-sa * sa * r) / S, 1e-12, 'a');
+    expectClose(result.readings[1].adjustment, (sb * sb * r) / S, 1e-12, 'b');
+    expectClose(result.globalStatistic, (r * r) / S, 1e-12, 'global');
+    expectClose(result.readings[0].reconciled - result.readings[1].reconciled + known, 0, 1e-12, 'closes');
+  });
+
+  test('an unmeasured flow takes the known term: u = a + c', () => {
+    const result = reconcileLinear({
+      variableCount: 2,
+      balances: [{ name: 'node', terms: new Map([[0, 1], [1, -1]]), constant: 2.5 }],
+      readings: [{ variable: 0, value: 40, sigma: 1 }],
+    });
+    expectClose(result.estimate[1]!, 42.5, 1e-12, 'u');
+  });
+
+  test('matches the dense Lagrange solution x = y - V A\'(A V A\')^-1 (A y + c) on generated networks', () => {
+    const random = seededRandom(31);
+    for (let trial = 0; trial < 20; trial++) {
+      const network = generateNetwork(random, 5, 4, 1);
+      const base = balances(network);
+      const problem: LinearProblem = { variableCount: network.edges.length, balances: base.map((row) => ({ ...row, constant: 10 * (random() - 0.5) })), readings: readingsOf(network, random) };
+      const A = new Matrix(problem.balances.map((row) => Array.from({ length: problem.variableCount }, (_, j) => row.terms.get(j) ?? 0)));
+      const c = Matrix.columnVector(problem.balances.map((row) => row.constant ?? 0));
+      const V = Matrix.diag(problem.readings.map((reading) => reading.sigma ** 2));
+      const y = Matrix.columnVector(problem.readings.map((reading) => reading.value));
+      const gain = V.mmul(A.transpose()).mmul(inverse(A.mmul(V).mmul(A.transpose())));
+      const xHat = y.clone().sub(gain.mmul(A.mmul(y).add(c)));
+      const result = reconcileLinear(problem);
+      result.readings.forEach((reading, i) => {
+        expect(Math.abs(reading.reconciled - xHat.get(i, 0)), `trial ${trial} flow ${i}`).toBeLessThan(1e-9 * Math.max(1, Math.abs(xHat.get(i, 0))));
+      });
+      const residual = A.mmul(Matrix.columnVector(result.readings.map((reading) => reading.reconciled))).add(c);
+      for (let i = 0; i < residual.rows; i++) expect(Math.abs(residual.get(i, 0)), `trial ${trial} row ${i}`).toBeLessThan(1e-9);
+    }
+  });
+
+  test('known terms that no flows can close are refused by name', () => {
+    // Two balances on the same unmeasured loop with different known terms.
+    expect(() =>
+      reconcileLinear({
+        variableCount: 1,
+        balances: [
+          { name: 'first', terms: new Map([[0, 1]]), constant: 1 },
+          { name: 'second', terms: new Map([[0, 1]]), constant: 2 },
+        ],
+        readings: [],
+      }),
+    ).toThrow(/first, second/);
+  });
+});

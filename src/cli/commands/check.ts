@@ -3,7 +3,7 @@ import type { Argv, CommandModule } from 'yargs';
 import { readFile } from 'node:fs/promises';
 import { formatIssue, loadCase, resolveMeters, summarisePlant } from '../../model/index.js';
 import { streamNetwork } from '../../plant/index.js';
-import { meterStreams } from '../../reconcile/index.js';
+import { meterStreams, planThermometers } from '../../reconcile/index.js';
 import { EXIT_PROBLEMS } from '../errors.js';
 
 interface CheckArgs {
@@ -38,7 +38,7 @@ export const checkCommand: CommandModule<object, CheckArgs> = {
     }
     // Meters are checked against the plant's streams, as reconcile would.
     const meters = resolveMeters(await readFile(fileName, 'utf8'));
-    const meterIssues = [...meters.issues, ...(meters.meters.length > 0 ? meterStreams(meters.meters, streamNetwork(result.plant)).issues : [])].sort((a, b) => a.line - b.line);
+    const meterIssues = [...meters.issues, ...(meters.meters.length > 0 ? meterIssuesOf(meters.meters, streamNetwork(result.plant), result.plant) : [])].sort((a, b) => a.line - b.line);
     if (meterIssues.length > 0) {
       for (const issue of meterIssues) process.stderr.write(`${formatIssue(issue, fileName)}\n`);
       process.stderr.write(`${fileName}: ${plural(meterIssues.length, 'error')} in the meters, ${plural(warnings, 'warning')}\n`);
@@ -58,3 +58,8 @@ export const checkCommand: CommandModule<object, CheckArgs> = {
     process.stdout.write(`${lines.join('\n')}\n`);
   },
 };
+
+/** Flow meters and thermometers checked against the plant's streams. */
+function meterIssuesOf(meters: Parameters<typeof meterStreams>[0], network: Parameters<typeof meterStreams>[1], plant: Parameters<typeof planThermometers>[2]) {
+  return [...meterStreams(meters, network).issues, ...planThermometers(meters, network, plant).issues];
+}
