@@ -5,6 +5,7 @@ export type MeasureKind =
   | 'ventChiller'
   | 'ventTurbine'
   | 'letdownTurbine'
+  | 'letdownReplacement'
   | 'condensateReturn'
   | 'blowdownFlash'
   | 'condensateFlash'
@@ -24,6 +25,12 @@ export interface Measure {
   ways: string[];
   /** ids of the units and headers the overlay touches, to say which measures interact */
   touches: string[];
+  /**
+   * Measures with the same value are alternatives (ways to end one vent, a
+   * turbine beside or in place of one letdown): the roadmap applies only the
+   * best ranked of them. null when the measure has no alternative.
+   */
+  alternativeOf: string | null;
   /** capital, site currency */
   capital: number;
   /** how the capital was estimated */

@@ -1,6 +1,6 @@
-// Turbines: a back-pressure turbine generator beside each letdown that
-// carries steam, sized for the largest flow it carries over the scenarios;
-// and a condensing turbine on a header that vents.
+// Turbines: a back-pressure turbine generator beside, or in place of, each
+// letdown that carries steam, sized for the largest flow it carries over the
+// scenarios; and a condensing turbine on a header that vents.
 import { tipSheet20TurbineCost, type Plant } from '../model/index.js';
 import { expandIsentropic } from '../plant/index.js';
 import { statePH } from '../properties/index.js';
@@ -26,6 +26,13 @@ export function turbineCapital(plant: Plant, kW: number, factor = 1): { capital:
   return { capital: tipSheet20TurbineCost(kW) * factor, basis: `${Math.round(kW)} kW on the DOE Steam Tip Sheet #20 cost curve${factor !== 1 ? ` x ${factor}` : ''}` };
 }
 
+/**
+ * Two measures per letdown that carries steam: a back-pressure turbine
+ * generator beside it (the valve stays for the rest and as a bypass), and one
+ * in place of it (the valve taken out, so the turbine passes every tonne).
+ * Both are sized from the letdown's largest flow over the scenarios; they are
+ * alternatives, so the roadmap applies at most one.
+ */
 export function letdownTurbines(plant: Plant, runs: SolvedRun[]): Measure[] {
   const costs = plant.costs!;
   const measures: Measure[] = [];
@@ -43,33 +50,43 @@ export function letdownTurbines(plant: Plant, runs: SolvedRun[]): Measure[] {
     });
     if (!(kW > 1)) continue;
     const { capital, basis } = turbineCapital(plant, kW);
-    const id = `bptg_${letdown.id}`;
-    measures.push({
+    const turbine = (id: string, name: string) => ({
       id,
-      kind: 'letdownTurbine',
-      title: `back-pressure turbine generator beside ${letdown.id} (${letdown.from} to ${letdown.to})`,
-      change: `a turbine generator of about ${Math.round(kW)} kW in parallel with ${letdown.id}, passing up to ${flowWords(flow)} (the letdown's largest flow over the scenarios); the valve stays for the rest and as a bypass`,
+      name,
+      inlet: letdown.from,
+      stages: [{ to: letdown.to, isentropic_efficiency: percent(NEW_TURBINE.isentropic), section_flow: { max: tonnesPerHour(flow) } }],
+      mechanical_efficiency: percent(NEW_TURBINE.mechanical),
+      generator_efficiency: percent(NEW_TURBINE.generator),
+      can_switch_off: true,
+    });
+    const common = {
       cause: null,
       ways: [],
       touches: [letdown.id, letdown.from, letdown.to],
+      alternativeOf: `letdown ${letdown.id}`,
       capital,
       capitalBasis: basis,
       lifeYears: costs.lifeYears,
       discountRate: costs.discountRate,
       fixedOmPerYear: 0,
-      changes: {
-        add: {
-          turbines: [{
-            id,
-            name: `Back-pressure turbine generator beside ${letdown.id}`,
-            inlet: letdown.from,
-            stages: [{ to: letdown.to, isentropic_efficiency: percent(NEW_TURBINE.isentropic), section_flow: { max: tonnesPerHour(flow) } }],
-            mechanical_efficiency: percent(NEW_TURBINE.mechanical),
-            generator_efficiency: percent(NEW_TURBINE.generator),
-            can_switch_off: true,
-          }],
-        },
-      },
+    };
+    const beside = `bptg_${letdown.id}`;
+    measures.push({
+      ...common,
+      id: beside,
+      kind: 'letdownTurbine',
+      title: `back-pressure turbine generator beside ${letdown.id} (${letdown.from} to ${letdown.to})`,
+      change: `a turbine generator of about ${Math.round(kW)} kW in parallel with ${letdown.id}, passing up to ${flowWords(flow)} (the letdown's largest flow over the scenarios); the valve stays for the rest and as a bypass`,
+      changes: { add: { turbines: [turbine(beside, `Back-pressure turbine generator beside ${letdown.id}`)] } },
+    });
+    const instead = `bptg_for_${letdown.id}`;
+    measures.push({
+      ...common,
+      id: instead,
+      kind: 'letdownReplacement',
+      title: `back-pressure turbine generator in place of ${letdown.id} (${letdown.from} to ${letdown.to})`,
+      change: `${letdown.id} taken out and a turbine generator of about ${Math.round(kW)} kW put in its place, passing up to ${flowWords(flow)} (the letdown's largest flow over the scenarios); every tonne let down now makes power, and the plant has no letdown path beside it`,
+      changes: { disable: [letdown.id], add: { turbines: [turbine(instead, `Back-pressure turbine generator in place of ${letdown.id}`)] } },
     });
   }
   return measures;
@@ -96,6 +113,7 @@ export function condensingTurbine(plant: Plant, runs: SolvedRun[], headerId: str
     cause,
     ways: [],
     touches: [headerId],
+    alternativeOf: `vent ${headerId}`,
     capital,
     capitalBasis: basis,
     lifeYears: plant.costs!.lifeYears,

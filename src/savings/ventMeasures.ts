@@ -108,6 +108,7 @@ function chillerMeasure(plant: Plant, runs: SolvedRun[], header: string, vent: n
     cause,
     ways: [],
     touches: [chiller.id, header, ...(moved ? [chiller.header] : [])],
+    alternativeOf: `vent ${header}`,
     capital: added * costs.absorptionPerKWCooling,
     capitalBasis: `${Math.round(added)} kW of cooling at ${Math.round(costs.absorptionPerKWCooling)} ${plant.site.currency}/kW (costs.absorption_chilling)`,
     lifeYears: costs.lifeYears,

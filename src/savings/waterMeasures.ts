@@ -15,8 +15,8 @@ const TANK_MARGIN = 0.02;
 /** Condensate at least this much above the lower header's saturation is worth flashing, K. */
 const FLASH_MARGIN = 5;
 
-function base(plant: Plant): Pick<Measure, 'lifeYears' | 'discountRate' | 'fixedOmPerYear' | 'cause' | 'ways'> {
-  return { lifeYears: plant.costs!.lifeYears, discountRate: plant.costs!.discountRate, fixedOmPerYear: 0, cause: null, ways: [] };
+function base(plant: Plant): Pick<Measure, 'lifeYears' | 'discountRate' | 'fixedOmPerYear' | 'cause' | 'ways' | 'alternativeOf'> {
+  return { lifeYears: plant.costs!.lifeYears, discountRate: plant.costs!.discountRate, fixedOmPerYear: 0, cause: null, ways: [], alternativeOf: null };
 }
 
 export function condensateMeasures(plant: Plant, runs: SolvedRun[]): Measure[] {

@@ -9,6 +9,7 @@ import { plantResult, solvePlant } from '../../src/plant/index.js';
 import { saturatedLiquid, saturatedVapour, saturationTemperature, statePT } from '../../src/properties/index.js';
 import { findSavings } from '../../src/savings/index.js';
 import { expectClose } from '../helpers/expectClose.js';
+import { solvedSaving } from './helpers/solvedSaving.js';
 
 const LB = 0.45359237;
 const LB_H = LB / 3600; // kg/s in one lb/h
@@ -235,6 +236,32 @@ deaerator: { pressure: 5 psig, heating_steam: mp, vent: 0.1 %, feedwater_pumps: 
     const perKlb = (turbine.result.physical.generated_more_MW * 1000) / 10;
     expect(perKlb).toBeGreaterThan(10);
     expect(perKlb).toBeLessThan(35);
+  });
+
+  test('the turbine in place of the letdown (the sheet\'s "replace") makes the same power, and saves what two solves say, to the cent', async () => {
+    const text = `${US_SITE()}power: { site_demand: 500 kW, import: { price: 0.15 USD/kWh, max: 2000 kW } }
+headers:
+  - { id: hp, pressure: 600 psig, state: floating, venting: forbidden }
+  - { id: mp, pressure: 150 psig, state: floating, venting: forbidden }
+steam_imports:
+  - { id: utility, header: hp, price: 5 USD/klb, max: 30 klb/h, temperature: 825 degF }
+letdowns:
+  - { id: prv, from: hp, to: mp, capacity: 20 klb/h }
+users:
+  - { id: process, header: mp, steam: 10 klb/h }
+deaerator: { pressure: 5 psig, heating_steam: mp, vent: 0.1 %, feedwater_pumps: none }
+`;
+    const loaded = load(text);
+    const savings = await findSavings(text, loaded.plant, loaded.variants, { workers: 1 });
+    const replacement = savings.measures.find((entry) => entry.kind === 'letdownReplacement')!;
+    expect(replacement.changes).toMatchObject({ disable: ['prv'] });
+    if (!replacement.result.ok) throw new Error(replacement.result.reason);
+    // MIL-HDBK-1003/7 Table 8 as above; the letdown passed all 10,000 lb/h, so the turbine in its place does too.
+    expectClose(replacement.result.physical.generated_more_MW * 1000, (10_000 / 22.15) * 0.65 * 0.98 * 0.97, 0.005, 'kW generated');
+    expect(replacement.result.annual_saving).toBeCloseTo(await solvedSaving(text, replacement.changes), 2);
+    // Beside or in place of: alternatives, and the roadmap applies one of them.
+    expect(replacement.alternativeOf).toBe(savings.measures.find((entry) => entry.kind === 'letdownTurbine')!.alternativeOf);
+    expect(savings.roadmap.filter((step) => step.measure.startsWith('bptg_')).length).toBe(1);
   });
 });
 
