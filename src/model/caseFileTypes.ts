@@ -305,6 +305,13 @@ export interface FlashTankEntry {
   vapour_to: string;
   /** "deaerator", "drain" or another flash tank's id */
   liquid_to: string;
+  /** a heat exchanger warming makeup with the liquid on its way to drain */
+  makeup_preheater?: MakeupPreheaterEntry;
+}
+
+export interface MakeupPreheaterEntry {
+  /** the liquid's temperature leaving the exchanger, to drain */
+  leaving_temperature: QuantityText;
 }
 
 export interface FeedwaterPumpEntry {
@@ -383,6 +390,9 @@ export interface CostsEntry {
   flash_tank?: string;
   life?: number | string;
   discount_rate?: QuantityText;
+  makeup_preheater?: string;
+  turbine_drive?: string;
+  motor_drive?: string;
 }
 
 /** Bare pipe on one header from an insulation survey. */

@@ -253,7 +253,11 @@ const defs: Record<string, Schema> = {
     pressure: quantity('pressure', '3.5 barg', 'tank pressure'),
     vapour_to: reference('header the flash steam goes to, or atmosphere'),
     liquid_to: reference('deaerator, drain, or another flash tank'),
+    makeup_preheater: ref('makeupPreheater'),
   }, ['id', 'pressure', 'vapour_to', 'liquid_to']),
+  makeupPreheater: object('a heat exchanger that warms the makeup water with the tank\'s liquid on its way to drain (blowdown heat recovery); only with liquid_to: drain', {
+    leaving_temperature: quantity('temperature', '30 degC', 'temperature the liquid leaves the exchanger at, to drain: above the makeup water\'s, below the tank\'s saturation'),
+  }, ['leaving_temperature']),
   feedwaterPump: object('a boiler feedwater pump', {
     id, name,
     efficiency: percent('hydraulic efficiency', '70 %'),
@@ -314,6 +318,9 @@ const defs: Record<string, Schema> = {
     condensate_return: { type: 'string', description: 'installed cost of condensate return per t/h (or klb/h) returned', examples: ['20000 USD/(t/h)'] },
     insulation: { type: 'string', description: 'cost of insulation repaired per m (or ft)', examples: ['120 USD/m'] },
     flash_tank: { type: 'string', description: 'installed cost of one flash tank with its piping and trap', examples: ['30000 USD'] },
+    makeup_preheater: { type: 'string', description: 'installed cost of one heat exchanger warming makeup water with blowdown', examples: ['25000 USD'] },
+    turbine_drive: { type: 'string', description: 'installed cost of a steam turbine drive for a machine, per kW (or hp) of shaft power', examples: ['400 USD/kW'] },
+    motor_drive: { type: 'string', description: 'installed cost of an electric motor drive for a machine, per kW (or hp) of shaft power', examples: ['150 USD/kW'] },
     life: { type: ['number', 'string'], description: 'economic life of measures, years; default 15', examples: [15, '15 years'] },
     discount_rate: percent('discount rate per year; default 10 %', '10 %'),
   }, []),

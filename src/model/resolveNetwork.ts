@@ -1,7 +1,7 @@
 // Letdowns, process users, flash tanks, the deaerator and driven machines.
 import { saturatedLiquid, saturationTemperature, statePT } from '../properties/index.js';
 import type { CasePath } from './issue.js';
-import type { Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, SteamUser } from './plantTypes.js';
+import type { Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, Site, SteamUser } from './plantTypes.js';
 import type { ResolveContext } from './resolveContext.js';
 import { steamPressure } from './resolveHeaders.js';
 import { liquidDestination } from './resolveSupply.js';
@@ -105,7 +105,7 @@ export function resolveUsers(context: ResolveContext, headers: Map<string, Heade
   });
 }
 
-export function resolveFlashTanks(context: ResolveContext, headers: Map<string, Header>): FlashTank[] {
+export function resolveFlashTanks(context: ResolveContext, headers: Map<string, Header>, site?: Site | null): FlashTank[] {
   const pressures = new Map<string, number>();
   const entries = context.entries(['flash_tanks']);
   for (const { item, path } of entries) {
@@ -137,8 +137,10 @@ export function resolveFlashTanks(context: ResolveContext, headers: Map<string, 
         ok = false;
       }
     }
+    const preheater = pressure !== undefined && context.raw([...path, 'makeup_preheater']) !== undefined ? makeupPreheater(context, [...path, 'makeup_preheater'], pressure, liquidTo, site) : null;
+    if (preheater === undefined) ok = false;
     if (pressure === undefined || !vapourTo || !ok || typeof item.id !== 'string') return [];
-    return [{ id: item.id, kind: 'flashTank' as const, pressure, saturationTemperature: saturationTemperature(pressure), receives: [], vapourTo, liquidTo: liquidTo! }];
+    return [{ id: item.id, kind: 'flashTank' as const, pressure, saturationTemperature: saturationTemperature(pressure), receives: [], vapourTo, liquidTo: liquidTo!, ...(preheater ? { makeupPreheater: preheater } : {}) }];
   });
 }
 
@@ -183,4 +185,30 @@ export function resolveMachines(context: ResolveContext): DrivenMachine[] {
     if (shaftPower === undefined || motor === undefined || (type !== 'pump' && type !== 'fan' && type !== 'compressor') || typeof item.id !== 'string') return [];
     return [{ id: item.id, kind: 'machine' as const, machine: type, shaftPower, motor, turbine: null }];
   });
+}
+
+/**
+ * A flash tank's makeup preheater: only on liquid that goes to drain, leaving
+ * above the makeup water's temperature (heat flows from the liquid to the
+ * makeup) and below the tank's saturation (it cools the liquid).
+ */
+function makeupPreheater(context: ResolveContext, path: CasePath, pressure: number, liquidTo: LiquidDestination | undefined, site: Site | null | undefined): FlashTank['makeupPreheater'] | undefined {
+  const temperaturePath = [...path, 'leaving_temperature'];
+  const leaving = context.quantity(temperaturePath, 'temperature');
+  if (leaving === undefined) return undefined;
+  if (liquidTo && liquidTo.kind !== 'drain') {
+    context.error('preheater-not-on-drain', path, `a makeup preheater cools liquid on its way to drain, but this tank sends its liquid to ${liquidTo.kind === 'flashTank' ? liquidTo.id : liquidTo.kind}; set liquid_to: drain or leave the preheater out`);
+    return undefined;
+  }
+  const saturation = saturationTemperature(pressure);
+  if (!(leaving < saturation)) {
+    context.error('preheater-too-hot', temperaturePath, `leaving temperature ${context.text(temperaturePath)} is not below the tank's saturation (${context.show(saturation, 'temperature')} at ${context.show(pressure, 'pressure')}); the exchanger cools the liquid, so give a lower temperature`);
+    return undefined;
+  }
+  if (site && !(leaving > site.makeupWater.temperature)) {
+    context.error('preheater-too-cold', temperaturePath, `leaving temperature ${context.text(temperaturePath)} is not above the makeup water's ${context.show(site.makeupWater.temperature, 'temperature')}; heat flows from the liquid to the makeup, so give a higher temperature`);
+    return undefined;
+  }
+  if (!site) return undefined;
+  return { leavingTemperature: leaving, leavingH: statePT(site.atmosphericPressure, leaving).h };
 }

@@ -58,7 +58,7 @@ export function resolvePlant(context: ResolveContext): Plant | null {
     turbines: resolveTurbines(context, byId),
     letdowns: resolveLetdowns(context, byId),
     users: resolveUsers(context, byId),
-    flashTanks: resolveFlashTanks(context, byId),
+    flashTanks: resolveFlashTanks(context, byId, site),
     machines: resolveMachines(context),
     absorptionChillers: resolveAbsorptionChillers(context, byId),
     steamTraps: resolveSteamTraps(context, byId),

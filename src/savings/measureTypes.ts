@@ -8,6 +8,7 @@ export type MeasureKind =
   | 'letdownReplacement'
   | 'condensateReturn'
   | 'blowdownFlash'
+  | 'blowdownPreheater'
   | 'condensateFlash'
   | 'trapRepair'
   | 'insulation';

@@ -61,6 +61,7 @@ export function flashMeasures(plant: Plant): Measure[] {
       ...base(plant),
       id,
       kind: 'blowdownFlash',
+      alternativeOf: 'blowdown to drain',
       title: `blowdown flash tank to ${target.id}`,
       change: `the blowdown of ${drained.map((boiler) => boiler.id).join(', ')} flashes in a tank at ${kilopascals(target.pressure + TANK_MARGIN)} (abs); its steam goes to ${target.id}, the rest still to drain`,
       touches: [...drained.map((boiler) => boiler.id), target.id],
