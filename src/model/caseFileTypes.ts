@@ -328,12 +328,23 @@ export interface DeaeratorEntry {
   feedwater_pumps?: FeedwaterPumpEntry[] | 'none';
 }
 
+export interface AlternativeDriveEntry {
+  /** a motor in place of its turbine */
+  motor_efficiency?: QuantityText;
+  /** a back-pressure turbine in place of its motor: inlet header, exhaust header, isentropic efficiency */
+  turbine_from?: string;
+  turbine_to?: string;
+  isentropic_efficiency?: QuantityText;
+}
+
 export interface MachineEntry {
   id: string;
   name?: string;
   type: 'pump' | 'fan' | 'compressor';
   shaft_power: QuantityText;
   motor_efficiency?: QuantityText;
+  /** the drive it could have in place of its own */
+  alternative_drive?: AlternativeDriveEntry;
 }
 
 export interface SolverEntry {

@@ -283,7 +283,14 @@ const defs: Record<string, Schema> = {
     type: choice(['pump', 'fan', 'compressor'], 'kind of machine'),
     shaft_power: quantity('power', '400 kW', 'shaft power it needs while running'),
     motor_efficiency: percent('efficiency of its electric motor; leave out if only a turbine drives it', '95 %'),
+    alternative_drive: ref('alternativeDrive'),
   }, ['id', 'type', 'shaft_power']),
+  alternativeDrive: object('the other drive the machine could have in place of its own (so it has both: the installed one and this), for the savings drive measure', {
+    motor_efficiency: percent('an electric motor in place of its turbine: the motor\'s efficiency', '95 %'),
+    turbine_from: reference('a back-pressure steam turbine in place of its motor: the header it takes steam from'),
+    turbine_to: reference('that turbine\'s exhaust header, at a lower pressure'),
+    isentropic_efficiency: percent('that turbine\'s isentropic efficiency', '45 %'),
+  }, [], exactlyOne(['motor_efficiency', 'turbine_from'], 'an alternative drive is a motor (motor_efficiency) or a turbine (turbine_from, turbine_to, isentropic_efficiency), one of the two')),
   absorptionChiller: object('a chilled-water plant: absorption chillers on steam up to their capacity, electric chillers for the rest of the cooling demand', {
     id, name,
     header: reference('header the absorption generator takes steam from'),

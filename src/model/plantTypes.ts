@@ -332,6 +332,13 @@ export interface DrivenMachine {
   motor: { efficiency: number } | null;
   /** id of the turbine that can drive it, or null */
   turbine: string | null;
+  /**
+   * The drive it could have in place of its own, for the savings drive
+   * measure: a motor in place of its turbine, or a back-pressure turbine
+   * (headers, isentropic efficiency) in place of its motor. Absent when the
+   * case gives none.
+   */
+  alternativeDrive?: { kind: 'motor'; efficiency: number } | { kind: 'turbine'; from: string; to: string; isentropicEfficiency: number };
 }
 
 /**

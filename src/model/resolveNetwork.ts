@@ -177,14 +177,41 @@ export function resolveDeaerator(context: ResolveContext, headers: Map<string, H
   return { id: 'deaerator', kind: 'deaerator', pressure, saturationTemperature: liquid.T, feedwaterH: liquid.h, heatingSteam: heating.id, ventFraction: vent, feedwaterPumps: pumps, pumpWork };
 }
 
-export function resolveMachines(context: ResolveContext): DrivenMachine[] {
+export function resolveMachines(context: ResolveContext, headers: Map<string, Header> = new Map()): DrivenMachine[] {
   return context.entries(['machines']).flatMap(({ item, path }) => {
     const shaftPower = context.amount([...path, 'shaft_power'], 'power');
     const motor = motorOf(context, [...path, 'motor_efficiency']);
     const type = item.type;
-    if (shaftPower === undefined || motor === undefined || (type !== 'pump' && type !== 'fan' && type !== 'compressor') || typeof item.id !== 'string') return [];
-    return [{ id: item.id, kind: 'machine' as const, machine: type, shaftPower, motor, turbine: null }];
+    const alternative = context.raw([...path, 'alternative_drive']) === undefined ? null : alternativeDrive(context, [...path, 'alternative_drive'], headers);
+    if (shaftPower === undefined || motor === undefined || alternative === undefined || (type !== 'pump' && type !== 'fan' && type !== 'compressor') || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'machine' as const, machine: type, shaftPower, motor, turbine: null, ...(alternative ? { alternativeDrive: alternative } : {}) }];
   });
+}
+
+/** A machine's alternative drive: a motor, or a back-pressure turbine between two headers, down in pressure. */
+function alternativeDrive(context: ResolveContext, path: CasePath, headers: Map<string, Header>): DrivenMachine['alternativeDrive'] | undefined {
+  // Both or neither of motor_efficiency and turbine_from: the schema says so.
+  if ((context.raw([...path, 'motor_efficiency']) === undefined) === (context.raw([...path, 'turbine_from']) === undefined)) return undefined;
+  if (context.raw([...path, 'motor_efficiency']) !== undefined) {
+    const efficiency = context.fraction([...path, 'motor_efficiency'], { zeroAllowed: false });
+    return efficiency === undefined ? undefined : { kind: 'motor', efficiency };
+  }
+  let ok = true;
+  for (const key of ['turbine_to', 'isentropic_efficiency']) {
+    if (context.raw([...path, key]) === undefined) {
+      context.error('alternative-drive-incomplete', path, `a turbine alternative needs ${key} as well as turbine_from; add it`);
+      ok = false;
+    }
+  }
+  const from = headerAt(context, [...path, 'turbine_from'], headers);
+  const to = context.raw([...path, 'turbine_to']) === undefined ? undefined : headerAt(context, [...path, 'turbine_to'], headers);
+  const efficiency = context.raw([...path, 'isentropic_efficiency']) === undefined ? undefined : context.fraction([...path, 'isentropic_efficiency'], { zeroAllowed: false });
+  if (from && to && to.pressure >= from.pressure) {
+    context.error('pressure-rises', [...path, 'turbine_to'], `a turbine from ${from.id} at ${context.show(from.pressure, 'pressure')} cannot exhaust to ${to.id} at ${context.show(to.pressure, 'pressure')}; choose a header at a lower pressure`);
+    ok = false;
+  }
+  if (!ok || !from || !to || efficiency === undefined) return undefined;
+  return { kind: 'turbine', from: from.id, to: to.id, isentropicEfficiency: efficiency };
 }
 
 /**

@@ -59,7 +59,7 @@ export function resolvePlant(context: ResolveContext): Plant | null {
     letdowns: resolveLetdowns(context, byId),
     users: resolveUsers(context, byId),
     flashTanks: resolveFlashTanks(context, byId, site),
-    machines: resolveMachines(context),
+    machines: resolveMachines(context, byId),
     absorptionChillers: resolveAbsorptionChillers(context, byId),
     steamTraps: resolveSteamTraps(context, byId),
     insulation: resolveInsulation(context, byId),

@@ -11,6 +11,8 @@ export type MeasureKind =
   | 'blowdownPreheater'
   | 'condensateFlash'
   | 'trapRepair'
+  | 'turbineDrive'
+  | 'motorDrive'
   | 'insulation';
 
 export interface Measure {

@@ -112,3 +112,29 @@ describe('makeup preheater on a flash tank', () => {
     expect(issuesOf(tank('drain', '140 degC'))).toMatch(/^case\.yaml:\d+:\d+ {2}flash_tanks\[0\]\.makeup_preheater\.leaving_temperature {2}leaving temperature 140 degC is not below the tank's saturation \(133\.7 degC at 2\.000 barg\); the exchanger cools the liquid, so give a lower temperature$/m);
   });
 });
+
+describe('a machine\'s alternative drive', () => {
+  const machine = (alternative: string, motor = 'motor_efficiency: 95 %, '): string => withSection(`machines:\n  - { id: p1, type: pump, shaft_power: 100 kW, ${motor}alternative_drive: ${alternative} }`);
+  test('a turbine between two headers, down in pressure, in place of the motor, loads', () => {
+    const result = loadCaseText(machine('{ turbine_from: hp, turbine_to: lp, isentropic_efficiency: 40 % }'), 'case.yaml');
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.plant.machines[0].alternativeDrive).toEqual({ kind: 'turbine', from: 'hp', to: 'lp', isentropicEfficiency: 0.4 });
+  });
+  test('a motor alternative on a machine that has a motor is refused', () => {
+    expect(issuesOf(machine('{ motor_efficiency: 96 % }'))).toMatch(/^case\.yaml:\d+:\d+ {2}machines\[0\]\.alternative_drive\.motor_efficiency {2}p1 already has a motor \(motor_efficiency\); a motor alternative replaces a turbine drive, so leave it out or give a turbine alternative$/m);
+  });
+  test('a turbine alternative without its exhaust and efficiency names both, at once', () => {
+    const issues = issuesOf(machine('{ turbine_from: hp }'));
+    expect(issues).toMatch(/machines\[0\]\.alternative_drive {2}a turbine alternative needs turbine_to as well as turbine_from; add it/);
+    expect(issues).toMatch(/machines\[0\]\.alternative_drive {2}a turbine alternative needs isentropic_efficiency as well as turbine_from; add it/);
+  });
+  test('a turbine alternative up in pressure, or to a header that does not exist, is refused', () => {
+    expect(issuesOf(machine('{ turbine_from: lp, turbine_to: hp, isentropic_efficiency: 40 % }'))).toMatch(/machines\[0\]\.alternative_drive\.turbine_to {2}a turbine from lp at 3\.000 barg cannot exhaust to hp at 10\.00 barg; choose a header at a lower pressure/);
+    expect(issuesOf(machine('{ turbine_from: hp, turbine_to: nowhere, isentropic_efficiency: 40 % }'))).toMatch(/machines\[0\]\.alternative_drive\.turbine_to {2}no header with id "nowhere"/);
+  });
+  test('both kinds at once is refused by the schema, once', () => {
+    const issues = issuesOf(machine('{ turbine_from: hp, turbine_to: lp, isentropic_efficiency: 40 %, motor_efficiency: 90 % }'));
+    expect(issues).toMatch(/machines\[0\]\.alternative_drive {2}an alternative drive is a motor \(motor_efficiency\) or a turbine \(turbine_from, turbine_to, isentropic_efficiency\), one of the two/);
+    expect(issues.split('\n').filter((line) => line.includes('alternative_drive'))).toHaveLength(1);
+  });
+});
