@@ -4,6 +4,8 @@
 export type MeasureKind =
   | 'ventChiller'
   | 'ventTurbine'
+  | 'ventSetPoint'
+  | 'ventBackPressure'
   | 'letdownTurbine'
   | 'letdownReplacement'
   | 'condensateReturn'
