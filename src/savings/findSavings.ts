@@ -120,8 +120,12 @@ async function savingsWith(caseText: string, plant: Plant, variants: CaseVariant
       changes: mergeChanges(applied.map((entry) => entry.changes)),
     };
   });
-  const stepPlants = resolveMeasurePlants(caseText, stepProjects.map((step) => measureAsProject({ ...step, id: step.id } as unknown as Measure, currency)));
-  const stepOutcomes = await evaluateChanges(base, stepProjects.map((step) => ({ definition: definitionOf(step), plants: stepPlants.get(step.id) ?? { ok: false, reason: 'not resolved' } })), options);
+  // Step 1 is the first measure alone, the same overlay, capital and terms: its
+  // solves are the measure's own, so they are not repeated.
+  const later = stepProjects.slice(1);
+  const stepPlants = resolveMeasurePlants(caseText, later.map((step) => measureAsProject({ ...step, id: step.id } as unknown as Measure, currency)));
+  const laterOutcomes = await evaluateChanges(base, later.map((step) => ({ definition: definitionOf(step), plants: stepPlants.get(step.id) ?? { ok: false, reason: 'not resolved' } })), options);
+  const stepOutcomes: ChangeOutcome[] = steps.length > 0 ? [steps[0].result, ...laterOutcomes] : [];
   const roadmap: RoadmapStep[] = steps.map((entry, index) => {
     const result = stepOutcomes[index];
     const previous = index === 0 ? { ok: true as const, annual_saving: 0 } : stepOutcomes[index - 1];
