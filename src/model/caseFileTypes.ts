@@ -305,6 +305,13 @@ export interface FlashTankEntry {
   vapour_to: string;
   /** "deaerator", "drain" or another flash tank's id */
   liquid_to: string;
+  /** a heat exchanger warming makeup with the liquid on its way to drain */
+  makeup_preheater?: MakeupPreheaterEntry;
+}
+
+export interface MakeupPreheaterEntry {
+  /** the liquid's temperature leaving the exchanger, to drain */
+  leaving_temperature: QuantityText;
 }
 
 export interface FeedwaterPumpEntry {
@@ -321,12 +328,23 @@ export interface DeaeratorEntry {
   feedwater_pumps?: FeedwaterPumpEntry[] | 'none';
 }
 
+export interface AlternativeDriveEntry {
+  /** a motor in place of its turbine */
+  motor_efficiency?: QuantityText;
+  /** a back-pressure turbine in place of its motor: inlet header, exhaust header, isentropic efficiency */
+  turbine_from?: string;
+  turbine_to?: string;
+  isentropic_efficiency?: QuantityText;
+}
+
 export interface MachineEntry {
   id: string;
   name?: string;
   type: 'pump' | 'fan' | 'compressor';
   shaft_power: QuantityText;
   motor_efficiency?: QuantityText;
+  /** the drive it could have in place of its own */
+  alternative_drive?: AlternativeDriveEntry;
 }
 
 export interface SolverEntry {
@@ -383,6 +401,9 @@ export interface CostsEntry {
   flash_tank?: string;
   life?: number | string;
   discount_rate?: QuantityText;
+  makeup_preheater?: string;
+  turbine_drive?: string;
+  motor_drive?: string;
 }
 
 /** Bare pipe on one header from an insulation survey. */

@@ -253,7 +253,11 @@ const defs: Record<string, Schema> = {
     pressure: quantity('pressure', '3.5 barg', 'tank pressure'),
     vapour_to: reference('header the flash steam goes to, or atmosphere'),
     liquid_to: reference('deaerator, drain, or another flash tank'),
+    makeup_preheater: ref('makeupPreheater'),
   }, ['id', 'pressure', 'vapour_to', 'liquid_to']),
+  makeupPreheater: object('a heat exchanger that warms the makeup water with the tank\'s liquid on its way to drain (blowdown heat recovery); only with liquid_to: drain', {
+    leaving_temperature: quantity('temperature', '30 degC', 'temperature the liquid leaves the exchanger at, to drain: above the makeup water\'s, below the tank\'s saturation'),
+  }, ['leaving_temperature']),
   feedwaterPump: object('a boiler feedwater pump', {
     id, name,
     efficiency: percent('hydraulic efficiency', '70 %'),
@@ -279,7 +283,14 @@ const defs: Record<string, Schema> = {
     type: choice(['pump', 'fan', 'compressor'], 'kind of machine'),
     shaft_power: quantity('power', '400 kW', 'shaft power it needs while running'),
     motor_efficiency: percent('efficiency of its electric motor; leave out if only a turbine drives it', '95 %'),
+    alternative_drive: ref('alternativeDrive'),
   }, ['id', 'type', 'shaft_power']),
+  alternativeDrive: object('the other drive the machine could have in place of its own (so it has both: the installed one and this), for the savings drive measure', {
+    motor_efficiency: percent('an electric motor in place of its turbine: the motor\'s efficiency', '95 %'),
+    turbine_from: reference('a back-pressure steam turbine in place of its motor: the header it takes steam from'),
+    turbine_to: reference('that turbine\'s exhaust header, at a lower pressure'),
+    isentropic_efficiency: percent('that turbine\'s isentropic efficiency', '45 %'),
+  }, [], exactlyOne(['motor_efficiency', 'turbine_from'], 'an alternative drive is a motor (motor_efficiency) or a turbine (turbine_from, turbine_to, isentropic_efficiency), one of the two')),
   absorptionChiller: object('a chilled-water plant: absorption chillers on steam up to their capacity, electric chillers for the rest of the cooling demand', {
     id, name,
     header: reference('header the absorption generator takes steam from'),
@@ -314,6 +325,9 @@ const defs: Record<string, Schema> = {
     condensate_return: { type: 'string', description: 'installed cost of condensate return per t/h (or klb/h) returned', examples: ['20000 USD/(t/h)'] },
     insulation: { type: 'string', description: 'cost of insulation repaired per m (or ft)', examples: ['120 USD/m'] },
     flash_tank: { type: 'string', description: 'installed cost of one flash tank with its piping and trap', examples: ['30000 USD'] },
+    makeup_preheater: { type: 'string', description: 'installed cost of one heat exchanger warming makeup water with blowdown', examples: ['25000 USD'] },
+    turbine_drive: { type: 'string', description: 'installed cost of a steam turbine drive for a machine, per kW (or hp) of shaft power', examples: ['400 USD/kW'] },
+    motor_drive: { type: 'string', description: 'installed cost of an electric motor drive for a machine, per kW (or hp) of shaft power', examples: ['150 USD/kW'] },
     life: { type: ['number', 'string'], description: 'economic life of measures, years; default 15', examples: [15, '15 years'] },
     discount_rate: percent('discount rate per year; default 10 %', '10 %'),
   }, []),

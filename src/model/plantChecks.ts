@@ -26,6 +26,18 @@ export function linkDrives(context: ResolveContext, plant: PlantParts): void {
       context.error('no-drive', path, `${machine.id} has no drive: give motor_efficiency for an electric motor, or name it in a turbine's drives`);
     }
   }
+  // An alternative drive replaces the installed one, so the installed one must be the other kind.
+  for (const machine of plant.machines) {
+    const alternative = machine.alternativeDrive;
+    if (!alternative) continue;
+    const path = [...(context.ids.get(machine.id)?.path ?? []), 'alternative_drive'];
+    if (alternative.kind === 'motor' && machine.motor !== null) {
+      context.error('alternative-drive-installed', [...path, 'motor_efficiency'], `${machine.id} already has a motor (motor_efficiency); a motor alternative replaces a turbine drive, so leave it out or give a turbine alternative`);
+    }
+    if (alternative.kind === 'turbine' && machine.turbine !== null) {
+      context.error('alternative-drive-installed', [...path, 'turbine_from'], `${machine.id} is already driven by turbine ${machine.turbine}; a turbine alternative replaces a motor, so leave it out or give a motor alternative`);
+    }
+  }
 }
 
 export function linkFlashTanks(context: ResolveContext, plant: PlantParts): void {

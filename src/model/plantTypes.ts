@@ -284,6 +284,13 @@ export interface FlashTank {
   receives: string[];
   vapourTo: { kind: 'header'; id: string } | { kind: 'atmosphere' };
   liquidTo: LiquidDestination;
+  /**
+   * A heat exchanger on the liquid to drain that warms the makeup water
+   * (blowdown heat recovery): the liquid leaves it at `leavingTemperature`,
+   * K, with enthalpy `leavingH`, kJ/kg (at atmospheric pressure). Absent
+   * when the case has none.
+   */
+  makeupPreheater?: { leavingTemperature: number; leavingH: number };
 }
 
 export interface FeedwaterPump {
@@ -325,6 +332,13 @@ export interface DrivenMachine {
   motor: { efficiency: number } | null;
   /** id of the turbine that can drive it, or null */
   turbine: string | null;
+  /**
+   * The drive it could have in place of its own, for the savings drive
+   * measure: a motor in place of its turbine, or a back-pressure turbine
+   * (headers, isentropic efficiency) in place of its motor. Absent when the
+   * case gives none.
+   */
+  alternativeDrive?: { kind: 'motor'; efficiency: number } | { kind: 'turbine'; from: string; to: string; isentropicEfficiency: number };
 }
 
 /**
@@ -389,6 +403,12 @@ export interface UnitCosts {
   insulationPerMetre: number;
   /** a flash tank with its piping and trap, installed, currency */
   flashTank: number;
+  /** a heat exchanger warming makeup with blowdown, installed, currency */
+  makeupPreheater: number;
+  /** a steam turbine drive for a machine, installed, currency per kW of shaft power */
+  turbineDrivePerKW: number;
+  /** an electric motor drive for a machine (with its starter and supply), installed, currency per kW of shaft power */
+  motorDrivePerKW: number;
   /** economic life of measures, years */
   lifeYears: number;
   /** discount rate, fraction per year */

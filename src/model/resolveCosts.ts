@@ -50,6 +50,18 @@ const RULES: Record<Exclude<keyof UnitCosts, 'lifeYears' | 'discountRate' | 'acc
     key: 'flash_tank', per: { '': 1 }, example: '30000 USD', fallback: 30_000,
     reason: '30,000 for a packaged flash tank with piping, trap and level control, installed (common practice, no source; from memory)',
   },
+  makeupPreheater: {
+    key: 'makeup_preheater', per: { '': 1 }, example: '25000 USD', fallback: 25_000,
+    reason: '25,000 for a blowdown heat exchanger warming makeup water, with its piping, installed (common practice, no source; from memory)',
+  },
+  turbineDrivePerKW: {
+    key: 'turbine_drive', per: { kW: 1, MW: 1e-3, hp: 1 / 0.745699872 }, example: '400 USD/kW', fallback: 400,
+    reason: '400 per kW of shaft power for a single-stage steam turbine drive with its piping, installed (common practice, no source; from memory)',
+  },
+  motorDrivePerKW: {
+    key: 'motor_drive', per: { kW: 1, MW: 1e-3, hp: 1 / 0.745699872 }, example: '150 USD/kW', fallback: 150,
+    reason: '150 per kW of shaft power for an electric motor with its starter and supply, installed (common practice, no source; from memory)',
+  },
 };
 
 /** The installed cost of a back-pressure turbine generator of `kW` from the DOE Tip Sheet #20 curve, in USD. */

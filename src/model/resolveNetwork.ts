@@ -1,7 +1,7 @@
 // Letdowns, process users, flash tanks, the deaerator and driven machines.
 import { saturatedLiquid, saturationTemperature, statePT } from '../properties/index.js';
 import type { CasePath } from './issue.js';
-import type { Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, SteamUser } from './plantTypes.js';
+import type { Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, Site, SteamUser } from './plantTypes.js';
 import type { ResolveContext } from './resolveContext.js';
 import { steamPressure } from './resolveHeaders.js';
 import { liquidDestination } from './resolveSupply.js';
@@ -105,7 +105,7 @@ export function resolveUsers(context: ResolveContext, headers: Map<string, Heade
   });
 }
 
-export function resolveFlashTanks(context: ResolveContext, headers: Map<string, Header>): FlashTank[] {
+export function resolveFlashTanks(context: ResolveContext, headers: Map<string, Header>, site?: Site | null): FlashTank[] {
   const pressures = new Map<string, number>();
   const entries = context.entries(['flash_tanks']);
   for (const { item, path } of entries) {
@@ -137,8 +137,10 @@ export function resolveFlashTanks(context: ResolveContext, headers: Map<string, 
         ok = false;
       }
     }
+    const preheater = pressure !== undefined && context.raw([...path, 'makeup_preheater']) !== undefined ? makeupPreheater(context, [...path, 'makeup_preheater'], pressure, liquidTo, site) : null;
+    if (preheater === undefined) ok = false;
     if (pressure === undefined || !vapourTo || !ok || typeof item.id !== 'string') return [];
-    return [{ id: item.id, kind: 'flashTank' as const, pressure, saturationTemperature: saturationTemperature(pressure), receives: [], vapourTo, liquidTo: liquidTo! }];
+    return [{ id: item.id, kind: 'flashTank' as const, pressure, saturationTemperature: saturationTemperature(pressure), receives: [], vapourTo, liquidTo: liquidTo!, ...(preheater ? { makeupPreheater: preheater } : {}) }];
   });
 }
 
@@ -175,12 +177,65 @@ export function resolveDeaerator(context: ResolveContext, headers: Map<string, H
   return { id: 'deaerator', kind: 'deaerator', pressure, saturationTemperature: liquid.T, feedwaterH: liquid.h, heatingSteam: heating.id, ventFraction: vent, feedwaterPumps: pumps, pumpWork };
 }
 
-export function resolveMachines(context: ResolveContext): DrivenMachine[] {
+export function resolveMachines(context: ResolveContext, headers: Map<string, Header> = new Map()): DrivenMachine[] {
   return context.entries(['machines']).flatMap(({ item, path }) => {
     const shaftPower = context.amount([...path, 'shaft_power'], 'power');
     const motor = motorOf(context, [...path, 'motor_efficiency']);
     const type = item.type;
-    if (shaftPower === undefined || motor === undefined || (type !== 'pump' && type !== 'fan' && type !== 'compressor') || typeof item.id !== 'string') return [];
-    return [{ id: item.id, kind: 'machine' as const, machine: type, shaftPower, motor, turbine: null }];
+    const alternative = context.raw([...path, 'alternative_drive']) === undefined ? null : alternativeDrive(context, [...path, 'alternative_drive'], headers);
+    if (shaftPower === undefined || motor === undefined || alternative === undefined || (type !== 'pump' && type !== 'fan' && type !== 'compressor') || typeof item.id !== 'string') return [];
+    return [{ id: item.id, kind: 'machine' as const, machine: type, shaftPower, motor, turbine: null, ...(alternative ? { alternativeDrive: alternative } : {}) }];
   });
+}
+
+/** A machine's alternative drive: a motor, or a back-pressure turbine between two headers, down in pressure. */
+function alternativeDrive(context: ResolveContext, path: CasePath, headers: Map<string, Header>): DrivenMachine['alternativeDrive'] | undefined {
+  // Both or neither of motor_efficiency and turbine_from: the schema says so.
+  if ((context.raw([...path, 'motor_efficiency']) === undefined) === (context.raw([...path, 'turbine_from']) === undefined)) return undefined;
+  if (context.raw([...path, 'motor_efficiency']) !== undefined) {
+    const efficiency = context.fraction([...path, 'motor_efficiency'], { zeroAllowed: false });
+    return efficiency === undefined ? undefined : { kind: 'motor', efficiency };
+  }
+  let ok = true;
+  for (const key of ['turbine_to', 'isentropic_efficiency']) {
+    if (context.raw([...path, key]) === undefined) {
+      context.error('alternative-drive-incomplete', path, `a turbine alternative needs ${key} as well as turbine_from; add it`);
+      ok = false;
+    }
+  }
+  const from = headerAt(context, [...path, 'turbine_from'], headers);
+  const to = context.raw([...path, 'turbine_to']) === undefined ? undefined : headerAt(context, [...path, 'turbine_to'], headers);
+  const efficiency = context.raw([...path, 'isentropic_efficiency']) === undefined ? undefined : context.fraction([...path, 'isentropic_efficiency'], { zeroAllowed: false });
+  if (from && to && to.pressure >= from.pressure) {
+    context.error('pressure-rises', [...path, 'turbine_to'], `a turbine from ${from.id} at ${context.show(from.pressure, 'pressure')} cannot exhaust to ${to.id} at ${context.show(to.pressure, 'pressure')}; choose a header at a lower pressure`);
+    ok = false;
+  }
+  if (!ok || !from || !to || efficiency === undefined) return undefined;
+  return { kind: 'turbine', from: from.id, to: to.id, isentropicEfficiency: efficiency };
+}
+
+/**
+ * A flash tank's makeup preheater: only on liquid that goes to drain, leaving
+ * above the makeup water's temperature (heat flows from the liquid to the
+ * makeup) and below the tank's saturation (it cools the liquid).
+ */
+function makeupPreheater(context: ResolveContext, path: CasePath, pressure: number, liquidTo: LiquidDestination | undefined, site: Site | null | undefined): FlashTank['makeupPreheater'] | undefined {
+  const temperaturePath = [...path, 'leaving_temperature'];
+  const leaving = context.quantity(temperaturePath, 'temperature');
+  if (leaving === undefined) return undefined;
+  if (liquidTo && liquidTo.kind !== 'drain') {
+    context.error('preheater-not-on-drain', path, `a makeup preheater cools liquid on its way to drain, but this tank sends its liquid to ${liquidTo.kind === 'flashTank' ? liquidTo.id : liquidTo.kind}; set liquid_to: drain or leave the preheater out`);
+    return undefined;
+  }
+  const saturation = saturationTemperature(pressure);
+  if (!(leaving < saturation)) {
+    context.error('preheater-too-hot', temperaturePath, `leaving temperature ${context.text(temperaturePath)} is not below the tank's saturation (${context.show(saturation, 'temperature')} at ${context.show(pressure, 'pressure')}); the exchanger cools the liquid, so give a lower temperature`);
+    return undefined;
+  }
+  if (site && !(leaving > site.makeupWater.temperature)) {
+    context.error('preheater-too-cold', temperaturePath, `leaving temperature ${context.text(temperaturePath)} is not above the makeup water's ${context.show(site.makeupWater.temperature, 'temperature')}; heat flows from the liquid to the makeup, so give a higher temperature`);
+    return undefined;
+  }
+  if (!site) return undefined;
+  return { leavingTemperature: leaving, leavingH: statePT(site.atmosphericPressure, leaving).h };
 }

@@ -1,6 +1,6 @@
 // The audit: every balance recomputed from the final flows and the states the
 // pass used, independent of the solver's own row activities.
-import { ATMOSPHERE, DRAIN, MAKEUP, PROCESS, headerLoss, solvedEnthalpy } from './network.js';
+import { ATMOSPHERE, DRAIN, MAKEUP, PROCESS, headerLoss, solvedEnergy } from './network.js';
 import type { Pass } from './buildPass.js';
 import type { PassSolution } from './passSolution.js';
 import type { UnitReport } from './contribution.js';
@@ -55,12 +55,12 @@ export function auditPass(pass: Pass, solution: PassSolution, reports: readonly 
     for (const stream of into) {
       const flow = solution.evaluate(stream.flow);
       massIn += flow;
-      energyIn += flow * solvedEnthalpy(stream, solution);
+      energyIn += solvedEnergy(stream, solution);
     }
     for (const stream of outOf) {
       const flow = solution.evaluate(stream.flow);
       massOut += flow;
-      energyOut += flow * solvedEnthalpy(stream, solution);
+      energyOut += solvedEnergy(stream, solution);
     }
     const adiabatic = node !== undefined || [...into, ...outOf].every((stream) => ADIABATIC_STREAMS.has(stream.kind));
     const mass = massIn - massOut;

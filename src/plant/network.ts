@@ -25,7 +25,9 @@ export type StreamKind =
   | 'feedwater'
   | 'makeup'
   | 'heatingSteam'
-  | 'trapLoss';
+  | 'trapLoss'
+  /** heat alone (no mass): a makeup preheater's duty, into the deaerator */
+  | 'makeupHeat';
 
 export interface Stream {
   /** unit, header or terminal id the stream leaves */
@@ -73,6 +75,12 @@ export function solvedEnthalpy(stream: Stream, solution: PassSolution): number {
     if (Math.abs(flow) > 1e-9) return solution.evaluate(stream.energy) / flow;
   }
   return stream.h + (stream.dh ? solution.evaluate(stream.dh) : 0);
+}
+
+/** The energy a stream carries in a solution, kW: its own expression where it has one (a heat-only stream has no flow), else flow x enthalpy. */
+export function solvedEnergy(stream: Stream, solution: PassSolution): number {
+  if (stream.energy) return solution.evaluate(stream.energy);
+  return solution.evaluate(stream.flow) * solvedEnthalpy(stream, solution);
 }
 
 /**

@@ -44,16 +44,8 @@ const MOST_PIECES_PER_SPAN = 64;
  * the straight pieces stay within FUEL_CURVE_ACCURACY of the curve.
  */
 export function fuelCurve(table: readonly EfficiencyPoint[], minSteam: number, maxSteam: number, heatPerKg: number): FuelCurve {
-  const loads = new Set<number>([minSteam / maxSteam, 1]);
-  for (const point of table) if (point.load > minSteam / maxSteam && point.load < 1) loads.add(point.load);
-  const spans = [...loads].sort((a, b) => a - b);
   const fuelAt = (load: number): number => (load === 0 ? 0 : (load * maxSteam * heatPerKg) / efficiencyAt(table, load));
-  const sorted: number[] = [spans[0]];
-  for (let index = 1; index < spans.length; index += 1) {
-    const from = spans[index - 1];
-    const to = spans[index];
-    sorted.push(...breakpointsFor(from, to, fuelAt));
-  }
+  const sorted = breakpointLoads(table, minSteam / maxSteam);
   const steam = sorted.map((load) => load * maxSteam);
   const fuel = sorted.map(fuelAt);
   let convex = true;
@@ -63,6 +55,30 @@ export function fuelCurve(table: readonly EfficiencyPoint[], minSteam: number, m
     if (after < before - 1e-9 * Math.abs(before)) convex = false;
   }
   return { steam, fuel, convex };
+}
+
+/**
+ * The breakpoint loads of a table from `minLoad` to full load. The chord's
+ * relative error does not depend on the steam's heat or the boiler's size
+ * (both scale fuel alone), so the loads are found once per table and lowest
+ * load, on fuel per unit of both, and kept: every pass of every solve of a
+ * plant builds the same curve.
+ */
+const loadsByTable = new WeakMap<readonly EfficiencyPoint[], Map<number, number[]>>();
+
+function breakpointLoads(table: readonly EfficiencyPoint[], minLoad: number): number[] {
+  let byMin = loadsByTable.get(table);
+  if (!byMin) loadsByTable.set(table, (byMin = new Map()));
+  const known = byMin.get(minLoad);
+  if (known) return known;
+  const loads = new Set<number>([minLoad, 1]);
+  for (const point of table) if (point.load > minLoad && point.load < 1) loads.add(point.load);
+  const spans = [...loads].sort((a, b) => a - b);
+  const relativeFuel = (load: number): number => (load === 0 ? 0 : load / efficiencyAt(table, load));
+  const sorted: number[] = [spans[0]];
+  for (let index = 1; index < spans.length; index += 1) sorted.push(...breakpointsFor(spans[index - 1], spans[index], relativeFuel));
+  byMin.set(minLoad, sorted);
+  return sorted;
 }
 
 /**

@@ -3,7 +3,7 @@
 // checks the bookkeeping as a whole.
 import type { Pass } from './buildPass.js';
 import type { UnitReport } from './contribution.js';
-import { ATMOSPHERE, DRAIN, MAKEUP, headerLoss, solvedEnthalpy } from './network.js';
+import { ATMOSPHERE, DRAIN, MAKEUP, headerLoss, solvedEnergy } from './network.js';
 import type { PassSolution } from './passSolution.js';
 
 export interface SiteEnergyBalance {
@@ -32,7 +32,7 @@ export function siteBalance(pass: Pass, solution: PassSolution, reports: readonl
   const sum = (kind: string, key: string): number =>
     reports.filter((unit) => unit.kind === kind).reduce((total, unit) => total + (typeof unit.values[key] === 'number' ? (unit.values[key] as number) : 0), 0);
   const flowEnergy = (predicate: (from: string, to: string) => boolean): number =>
-    context.streams.filter((stream) => predicate(stream.from, stream.to)).reduce((total, stream) => total + solution.evaluate(stream.flow) * solvedEnthalpy(stream, solution), 0);
+    context.streams.filter((stream) => predicate(stream.from, stream.to)).reduce((total, stream) => total + solvedEnergy(stream, solution), 0);
   const importIds = new Set(context.plant.steamImports.map((supply) => supply.id));
 
   let fuel = 0;

@@ -44,16 +44,17 @@ function locate(p: number, value: number, quantity: Quantity): PressureAndLocati
   // The edges of the range (273.15 K, 1073.15 K, region 3) are compared with a
   // round-off allowance, so a state computed exactly at an edge is not refused.
   const edge = (limit: number): number => 1e-12 * (Math.abs(limit) + quantity.scale);
-  const second = `${formatValue(value)} ${quantity.unit}`;
+  // Written only for a refusal: most calls never need it.
+  const second = (): string => `${formatValue(value)} ${quantity.unit}`;
   const liquidExists = p >= MIN_SATURATION_PRESSURE;
   const lowest = liquidExists ? quantity.region1(p, MIN_TEMPERATURE) : quantity.region2(p, MIN_TEMPERATURE);
   if (value < lowest - edge(lowest)) {
     throw new PropertyRangeError(
-      `${quantity.name} ${second} at ${formatValue(p)} MPa is below the IF97 limit of ${formatValue(lowest)} ${quantity.unit} (${MIN_TEMPERATURE} K at this pressure)`,
+      `${quantity.name} ${second()} at ${formatValue(p)} MPa is below the IF97 limit of ${formatValue(lowest)} ${quantity.unit} (${MIN_TEMPERATURE} K at this pressure)`,
     );
   }
   const highest = quantity.region2(p, MAX_TEMPERATURE);
-  if (value > highest + edge(highest)) throw aboveMaxTemperatureRefusal(p, second);
+  if (value > highest + edge(highest)) throw aboveMaxTemperatureRefusal(p, second());
   if (!liquidExists) return { region: 2 };
   if (p <= REGION3_SATURATION_PRESSURE) {
     const T = saturationTemperatureRegion4(p);
@@ -70,7 +71,7 @@ function locate(p: number, value: number, quantity: Quantity): PressureAndLocati
   if (value <= region1Edge + edge(region1Edge)) return { region: 1 };
   const region2Edge = quantity.region2(p, temperatureB23(p));
   if (value >= region2Edge - edge(region2Edge)) return { region: 2 };
-  throw region3Refusal(p, second);
+  throw region3Refusal(p, second());
 }
 
 /** The IF97 region of (p MPa, h kJ/kg); refuses regions 3 and 5 and states outside IF97. */

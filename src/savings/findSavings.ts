@@ -97,8 +97,17 @@ async function savingsWith(caseText: string, plant: Plant, variants: CaseVariant
   solved.forEach((entry, index) => (entry.rank = index + 1));
   const ranked = [...solved, ...results.filter((entry) => !entry.result.ok)];
 
-  // The roadmap: measures that save money, in rank order, applied cumulatively.
-  const steps = solved.filter((entry) => (entry.result as SolvedChange).net_annual_saving > 0);
+  // The roadmap: measures that save money, in rank order, applied cumulatively;
+  // of alternatives (ways to end one vent, a turbine beside or in place of one
+  // letdown) only the best ranked.
+  const chosen = new Set<string>();
+  const steps = solved.filter((entry) => {
+    if (!((entry.result as SolvedChange).net_annual_saving > 0)) return false;
+    if (entry.alternativeOf === null) return true;
+    if (chosen.has(entry.alternativeOf)) return false;
+    chosen.add(entry.alternativeOf);
+    return true;
+  });
   const stepProjects = steps.map((_, index) => {
     const applied = steps.slice(0, index + 1);
     return {
@@ -111,8 +120,12 @@ async function savingsWith(caseText: string, plant: Plant, variants: CaseVariant
       changes: mergeChanges(applied.map((entry) => entry.changes)),
     };
   });
-  const stepPlants = resolveMeasurePlants(caseText, stepProjects.map((step) => measureAsProject({ ...step, id: step.id } as Measure, currency)));
-  const stepOutcomes = await evaluateChanges(base, stepProjects.map((step) => ({ definition: definitionOf(step), plants: stepPlants.get(step.id) ?? { ok: false, reason: 'not resolved' } })), options);
+  // Step 1 is the first measure alone, the same overlay, capital and terms: its
+  // solves are the measure's own, so they are not repeated.
+  const later = stepProjects.slice(1);
+  const stepPlants = resolveMeasurePlants(caseText, later.map((step) => measureAsProject({ ...step, id: step.id } as unknown as Measure, currency)));
+  const laterOutcomes = await evaluateChanges(base, later.map((step) => ({ definition: definitionOf(step), plants: stepPlants.get(step.id) ?? { ok: false, reason: 'not resolved' } })), options);
+  const stepOutcomes: ChangeOutcome[] = steps.length > 0 ? [steps[0].result, ...laterOutcomes] : [];
   const roadmap: RoadmapStep[] = steps.map((entry, index) => {
     const result = stepOutcomes[index];
     const previous = index === 0 ? { ok: true as const, annual_saving: 0 } : stepOutcomes[index - 1];
@@ -137,7 +150,9 @@ function interactionsOf(measures: MeasureResult[], roadmap: RoadmapStep[], curre
   for (let i = 0; i < measures.length; i++) {
     for (let j = i + 1; j < measures.length; j++) {
       const both = measures[i].touches.filter((id) => !shared.has(id) && measures[j].touches.includes(id));
-      if (both.length > 0) interactions.push({ measures: [measures[i].id, measures[j].id], how: `both change ${both.join(', ')}: applied together, the later one's keys win where they overlap` });
+      const alternatives = measures[i].alternativeOf !== null && measures[i].alternativeOf === measures[j].alternativeOf;
+      if (alternatives) interactions.push({ measures: [measures[i].id, measures[j].id], how: `alternatives for the ${measures[i].alternativeOf}: the roadmap takes only the better ranked` });
+      else if (both.length > 0) interactions.push({ measures: [measures[i].id, measures[j].id], how: `both change ${both.join(', ')}: applied together, the later one's keys win where they overlap` });
     }
   }
   for (const step of roadmap) {

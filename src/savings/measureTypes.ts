@@ -4,11 +4,17 @@
 export type MeasureKind =
   | 'ventChiller'
   | 'ventTurbine'
+  | 'ventSetPoint'
+  | 'ventBackPressure'
   | 'letdownTurbine'
+  | 'letdownReplacement'
   | 'condensateReturn'
   | 'blowdownFlash'
+  | 'blowdownPreheater'
   | 'condensateFlash'
   | 'trapRepair'
+  | 'turbineDrive'
+  | 'motorDrive'
   | 'insulation';
 
 export interface Measure {
@@ -24,6 +30,12 @@ export interface Measure {
   ways: string[];
   /** ids of the units and headers the overlay touches, to say which measures interact */
   touches: string[];
+  /**
+   * Measures with the same value are alternatives (ways to end one vent, a
+   * turbine beside or in place of one letdown): the roadmap applies only the
+   * best ranked of them. null when the measure has no alternative.
+   */
+  alternativeOf: string | null;
   /** capital, site currency */
   capital: number;
   /** how the capital was estimated */

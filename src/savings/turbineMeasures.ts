@@ -1,6 +1,6 @@
-// Turbines: a back-pressure turbine generator beside each letdown that
-// carries steam, sized for the largest flow it carries over the scenarios;
-// and a condensing turbine on a header that vents.
+// Turbines: a back-pressure turbine generator beside, or in place of, each
+// letdown that carries steam, sized for the largest flow it carries over the
+// scenarios; and a condensing turbine on a header that vents.
 import { tipSheet20TurbineCost, type Plant } from '../model/index.js';
 import { expandIsentropic } from '../plant/index.js';
 import { statePH } from '../properties/index.js';
@@ -17,6 +17,8 @@ import { headerState, largest, unitValue, type SolvedRun } from './sizing.js';
 export const NEW_TURBINE = { isentropic: 0.65, mechanical: 0.98, generator: 0.97 } as const;
 /** A condensing set's section to the condenser: 70 % isentropic, common practice, no source. */
 export const CONDENSING = { isentropic: 0.7, condenserPressure: 0.01 } as const;
+/** A turbine in place of a letdown may pass this much more than the letdown's largest outlet flow (common practice, no source). */
+const IN_PLACE_MARGIN = 0.15;
 /** Flows below this are not worth a turbine: 0.5 t/h. */
 const LEAST_FLOW = 0.5 / 3.6;
 
@@ -26,6 +28,13 @@ export function turbineCapital(plant: Plant, kW: number, factor = 1): { capital:
   return { capital: tipSheet20TurbineCost(kW) * factor, basis: `${Math.round(kW)} kW on the DOE Steam Tip Sheet #20 cost curve${factor !== 1 ? ` x ${factor}` : ''}` };
 }
 
+/**
+ * Two measures per letdown that carries steam: a back-pressure turbine
+ * generator beside it (the valve stays for the rest and as a bypass), and one
+ * in place of it (the valve taken out, so the turbine passes every tonne).
+ * Both are sized from the letdown's largest flow over the scenarios; they are
+ * alternatives, so the roadmap applies at most one.
+ */
 export function letdownTurbines(plant: Plant, runs: SolvedRun[]): Measure[] {
   const costs = plant.costs!;
   const measures: Measure[] = [];
@@ -43,33 +52,47 @@ export function letdownTurbines(plant: Plant, runs: SolvedRun[]): Measure[] {
     });
     if (!(kW > 1)) continue;
     const { capital, basis } = turbineCapital(plant, kW);
-    const id = `bptg_${letdown.id}`;
-    measures.push({
+    const turbine = (id: string, name: string, max: number) => ({
       id,
-      kind: 'letdownTurbine',
-      title: `back-pressure turbine generator beside ${letdown.id} (${letdown.from} to ${letdown.to})`,
-      change: `a turbine generator of about ${Math.round(kW)} kW in parallel with ${letdown.id}, passing up to ${flowWords(flow)} (the letdown's largest flow over the scenarios); the valve stays for the rest and as a bypass`,
+      name,
+      inlet: letdown.from,
+      stages: [{ to: letdown.to, isentropic_efficiency: percent(NEW_TURBINE.isentropic), section_flow: { max: tonnesPerHour(max) } }],
+      mechanical_efficiency: percent(NEW_TURBINE.mechanical),
+      generator_efficiency: percent(NEW_TURBINE.generator),
+      can_switch_off: true,
+    });
+    const common = {
       cause: null,
       ways: [],
       touches: [letdown.id, letdown.from, letdown.to],
+      alternativeOf: `letdown ${letdown.id}`,
       capital,
       capitalBasis: basis,
       lifeYears: costs.lifeYears,
       discountRate: costs.discountRate,
       fixedOmPerYear: 0,
-      changes: {
-        add: {
-          turbines: [{
-            id,
-            name: `Back-pressure turbine generator beside ${letdown.id}`,
-            inlet: letdown.from,
-            stages: [{ to: letdown.to, isentropic_efficiency: percent(NEW_TURBINE.isentropic), section_flow: { max: tonnesPerHour(flow) } }],
-            mechanical_efficiency: percent(NEW_TURBINE.mechanical),
-            generator_efficiency: percent(NEW_TURBINE.generator),
-            can_switch_off: true,
-          }],
-        },
-      },
+    };
+    const beside = `bptg_${letdown.id}`;
+    measures.push({
+      ...common,
+      id: beside,
+      kind: 'letdownTurbine',
+      title: `back-pressure turbine generator beside ${letdown.id} (${letdown.from} to ${letdown.to})`,
+      change: `a turbine generator of about ${Math.round(kW)} kW in parallel with ${letdown.id}, passing up to ${flowWords(flow)} (the letdown's largest flow over the scenarios); the valve stays for the rest and as a bypass`,
+      changes: { add: { turbines: [turbine(beside, `Back-pressure turbine generator beside ${letdown.id}`, flow)] } },
+    });
+    // In its place the turbine must pass everything the letdown delivered, spray included,
+    // and its exhaust carries less heat per tonne than throttled steam: a margin over the
+    // letdown's largest outlet flow.
+    const insteadMax = largest(runs, (run) => unitValue(run, letdown.id, 'outlet_kg_s')) * (1 + IN_PLACE_MARGIN);
+    const instead = `bptg_for_${letdown.id}`;
+    measures.push({
+      ...common,
+      id: instead,
+      kind: 'letdownReplacement',
+      title: `back-pressure turbine generator in place of ${letdown.id} (${letdown.from} to ${letdown.to})`,
+      change: `${letdown.id} taken out and a turbine generator of about ${Math.round(kW)} kW put in its place, passing up to ${flowWords(insteadMax)} (the letdown's largest outlet flow over the scenarios and ${IN_PLACE_MARGIN * 100} %); every tonne let down now makes power, and the plant has no letdown path beside it`,
+      changes: { disable: [letdown.id], add: { turbines: [turbine(instead, `Back-pressure turbine generator in place of ${letdown.id}`, insteadMax)] } },
     });
   }
   return measures;
@@ -96,6 +119,7 @@ export function condensingTurbine(plant: Plant, runs: SolvedRun[], headerId: str
     cause,
     ways: [],
     touches: [headerId],
+    alternativeOf: `vent ${headerId}`,
     capital,
     capitalBasis: basis,
     lifeYears: plant.costs!.lifeYears,

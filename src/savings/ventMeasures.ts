@@ -1,7 +1,9 @@
 // Vents: every vent over the scenarios with its cause (from the solved
 // balance's vent explanation) and the ways to end it; the ways that are an
 // overlay on the case become measures: absorption chilling fed from the
-// vented header, and a condensing turbine taking the vented steam.
+// vented header, a condensing turbine taking the vented steam, a lower
+// back-pressure for a turbine that must pass steam into it, and higher set
+// points where spray feeds it (ventWays.ts).
 import type { Plant } from '../model/index.js';
 import { saturatedLiquid } from '../properties/index.js';
 import type { Measure } from './measureTypes.js';
@@ -9,6 +11,7 @@ import { kilowatts, tonnesPerHour } from './quantities.js';
 import { flowWords } from './quantities.js';
 import { headerState, largest, type SolvedRun } from './sizing.js';
 import { condensingTurbine } from './turbineMeasures.js';
+import { lowerBackPressureMeasures, setPointMeasures } from './ventWays.js';
 
 export interface VentFinding {
   /** header id, "deaerator" or a flash tank id */
@@ -68,12 +71,19 @@ export function ventMeasures(plant: Plant, runs: SolvedRun[], finding: VentFindi
   }
   const turbine = condensingTurbine(plant, runs, header, vent, finding.cause);
   if (turbine) measures.push(turbine);
+  const backPressure = lowerBackPressureMeasures(plant, runs, header, finding.cause);
+  const setPoints = setPointMeasures(plant, runs, header, finding.cause);
+  measures.push(...backPressure, ...setPoints);
   finding.ways.push(...measures.map((measure) => measure.title));
-  const exhausting = plant.turbines.filter((turbine) => turbine.stages.some((stage) => stage.exhaust.kind === 'header' && stage.exhaust.id === header)).map((turbine) => turbine.id);
-  if (exhausting.length > 0) finding.ways.push(`less steam through ${exhausting.join(', ')} into ${header}: a lower back-pressure (a stage to a lower header) or a lower minimum flow`);
-  const sprayed = plant.letdowns.filter((letdown) => letdown.to === header && letdown.desuperheater).map((letdown) => letdown.id);
-  const controlled = plant.headers.find((entry) => entry.id === header)?.state.kind === 'controlled';
-  if (sprayed.length > 0 || controlled) finding.ways.push(`a changed set point: ${controlled ? `a lower set temperature on ${header} needs less steam to hold it` : `a higher outlet temperature on ${sprayed.join(', ')} needs less spray water`}`);
+  // What is not an overlay here stays in words.
+  const rebuilt = new Set(backPressure.flatMap((measure) => measure.touches));
+  const exhausting = plant.turbines.filter((entry) => entry.stages.some((stage) => stage.exhaust.kind === 'header' && stage.exhaust.id === header)).map((entry) => entry.id);
+  const others = exhausting.filter((id) => !rebuilt.has(id));
+  if (others.length > 0) finding.ways.push(`less steam through ${others.join(', ')} into ${header}: a lower back-pressure (a stage to a lower header) or a lower minimum flow`);
+  if (exhausting.length > others.length) finding.ways.push(`a lower minimum flow through ${exhausting.filter((id) => rebuilt.has(id)).join(', ')}`);
+  const sprayed = plant.letdowns.filter((letdown) => letdown.to === header && letdown.desuperheater && !setPoints.some((measure) => measure.touches.includes(letdown.id))).map((letdown) => letdown.id);
+  const controlled = plant.headers.find((entry) => entry.id === header)?.state.kind === 'controlled' && !setPoints.some((measure) => measure.id === `set_point_${header}`);
+  if (sprayed.length > 0 || controlled) finding.ways.push(`a changed set point: ${controlled ? `a higher set temperature on ${header} needs less spray to hold it` : `a higher outlet temperature on ${sprayed.join(', ')} needs less spray water`}`);
   const minimums = plant.steamImports.filter((supply) => supply.flow.min > 0).map((supply) => supply.id);
   if (minimums.length > 0) finding.ways.push(`a lower contract minimum on ${minimums.join(', ')}, where the purchase's minimum forces steam the plant cannot use`);
   finding.measures.push(...measures.map((measure) => measure.id));
@@ -108,6 +118,7 @@ function chillerMeasure(plant: Plant, runs: SolvedRun[], header: string, vent: n
     cause,
     ways: [],
     touches: [chiller.id, header, ...(moved ? [chiller.header] : [])],
+    alternativeOf: `vent ${header}`,
     capital: added * costs.absorptionPerKWCooling,
     capitalBasis: `${Math.round(added)} kW of cooling at ${Math.round(costs.absorptionPerKWCooling)} ${plant.site.currency}/kW (costs.absorption_chilling)`,
     lifeYears: costs.lifeYears,

@@ -15,8 +15,8 @@ const TANK_MARGIN = 0.02;
 /** Condensate at least this much above the lower header's saturation is worth flashing, K. */
 const FLASH_MARGIN = 5;
 
-function base(plant: Plant): Pick<Measure, 'lifeYears' | 'discountRate' | 'fixedOmPerYear' | 'cause' | 'ways'> {
-  return { lifeYears: plant.costs!.lifeYears, discountRate: plant.costs!.discountRate, fixedOmPerYear: 0, cause: null, ways: [] };
+function base(plant: Plant): Pick<Measure, 'lifeYears' | 'discountRate' | 'fixedOmPerYear' | 'cause' | 'ways' | 'alternativeOf'> {
+  return { lifeYears: plant.costs!.lifeYears, discountRate: plant.costs!.discountRate, fixedOmPerYear: 0, cause: null, ways: [], alternativeOf: null };
 }
 
 export function condensateMeasures(plant: Plant, runs: SolvedRun[]): Measure[] {
@@ -61,6 +61,7 @@ export function flashMeasures(plant: Plant): Measure[] {
       ...base(plant),
       id,
       kind: 'blowdownFlash',
+      alternativeOf: 'blowdown to drain',
       title: `blowdown flash tank to ${target.id}`,
       change: `the blowdown of ${drained.map((boiler) => boiler.id).join(', ')} flashes in a tank at ${kilopascals(target.pressure + TANK_MARGIN)} (abs); its steam goes to ${target.id}, the rest still to drain`,
       touches: [...drained.map((boiler) => boiler.id), target.id],

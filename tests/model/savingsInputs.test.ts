@@ -30,7 +30,7 @@ describe('costs', () => {
     expect(costs.flashTank).toBe(25000);
     expect(costs.lifeYears).toBe(20);
     expect(costs.discountRate).toBeCloseTo(0.08, 12);
-    expect(costs.defaults.map((entry) => entry.path)).toEqual(['costs.trap_repair', 'costs.insulation']);
+    expect(costs.defaults.map((entry) => entry.path)).toEqual(['costs.trap_repair', 'costs.insulation', 'costs.makeup_preheater', 'costs.turbine_drive', 'costs.motor_drive']);
   });
   test('each default names its source, or says it is common practice with no source', () => {
     const result = loadCaseText(starter, 'case.yaml');
@@ -94,5 +94,47 @@ describe('insulation survey', () => {
     if (!result.ok) return;
     expect(result.plant.insulation).toEqual([{ header: 'hp', bareLength: 30.48, lossAfter: 4 }]);
     expect(result.plant.defaults.map((entry) => entry.path)).toContain('insulation_survey[0].heat_loss_after');
+  });
+});
+
+describe('makeup preheater on a flash tank', () => {
+  const tank = (liquidTo: string, leaving: string): string => withSection(`flash_tanks:\n  - { id: bd, pressure: 2 barg, vapour_to: atmosphere, liquid_to: ${liquidTo}, makeup_preheater: { leaving_temperature: ${leaving} } }`);
+  test('on liquid that goes to drain, between the makeup and the tank\'s saturation, it loads', () => {
+    const result = loadCaseText(tank('drain', '30 degC'), 'case.yaml');
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.plant.flashTanks[0].makeupPreheater?.leavingTemperature).toBeCloseTo(303.15, 9);
+  });
+  test('on liquid that goes anywhere but drain, it is refused', () => {
+    expect(issuesOf(tank('deaerator', '30 degC'))).toMatch(/^case\.yaml:\d+:\d+ {2}flash_tanks\[0\]\.makeup_preheater {2}a makeup preheater cools liquid on its way to drain, but this tank sends its liquid to deaerator; set liquid_to: drain or leave the preheater out$/m);
+  });
+  test('leaving at or below the makeup, or at or above the tank\'s saturation, it is refused with both figures', () => {
+    expect(issuesOf(tank('drain', '10 degC'))).toMatch(/^case\.yaml:\d+:\d+ {2}flash_tanks\[0\]\.makeup_preheater\.leaving_temperature {2}leaving temperature 10 degC is not above the makeup water's 15\.00 degC; heat flows from the liquid to the makeup, so give a higher temperature$/m);
+    expect(issuesOf(tank('drain', '140 degC'))).toMatch(/^case\.yaml:\d+:\d+ {2}flash_tanks\[0\]\.makeup_preheater\.leaving_temperature {2}leaving temperature 140 degC is not below the tank's saturation \(133\.7 degC at 2\.000 barg\); the exchanger cools the liquid, so give a lower temperature$/m);
+  });
+});
+
+describe('a machine\'s alternative drive', () => {
+  const machine = (alternative: string, motor = 'motor_efficiency: 95 %, '): string => withSection(`machines:\n  - { id: p1, type: pump, shaft_power: 100 kW, ${motor}alternative_drive: ${alternative} }`);
+  test('a turbine between two headers, down in pressure, in place of the motor, loads', () => {
+    const result = loadCaseText(machine('{ turbine_from: hp, turbine_to: lp, isentropic_efficiency: 40 % }'), 'case.yaml');
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.plant.machines[0].alternativeDrive).toEqual({ kind: 'turbine', from: 'hp', to: 'lp', isentropicEfficiency: 0.4 });
+  });
+  test('a motor alternative on a machine that has a motor is refused', () => {
+    expect(issuesOf(machine('{ motor_efficiency: 96 % }'))).toMatch(/^case\.yaml:\d+:\d+ {2}machines\[0\]\.alternative_drive\.motor_efficiency {2}p1 already has a motor \(motor_efficiency\); a motor alternative replaces a turbine drive, so leave it out or give a turbine alternative$/m);
+  });
+  test('a turbine alternative without its exhaust and efficiency names both, at once', () => {
+    const issues = issuesOf(machine('{ turbine_from: hp }'));
+    expect(issues).toMatch(/machines\[0\]\.alternative_drive {2}a turbine alternative needs turbine_to as well as turbine_from; add it/);
+    expect(issues).toMatch(/machines\[0\]\.alternative_drive {2}a turbine alternative needs isentropic_efficiency as well as turbine_from; add it/);
+  });
+  test('a turbine alternative up in pressure, or to a header that does not exist, is refused', () => {
+    expect(issuesOf(machine('{ turbine_from: lp, turbine_to: hp, isentropic_efficiency: 40 % }'))).toMatch(/machines\[0\]\.alternative_drive\.turbine_to {2}a turbine from lp at 3\.000 barg cannot exhaust to hp at 10\.00 barg; choose a header at a lower pressure/);
+    expect(issuesOf(machine('{ turbine_from: hp, turbine_to: nowhere, isentropic_efficiency: 40 % }'))).toMatch(/machines\[0\]\.alternative_drive\.turbine_to {2}no header with id "nowhere"/);
+  });
+  test('both kinds at once is refused by the schema, once', () => {
+    const issues = issuesOf(machine('{ turbine_from: hp, turbine_to: lp, isentropic_efficiency: 40 %, motor_efficiency: 90 % }'));
+    expect(issues).toMatch(/machines\[0\]\.alternative_drive {2}an alternative drive is a motor \(motor_efficiency\) or a turbine \(turbine_from, turbine_to, isentropic_efficiency\), one of the two/);
+    expect(issues.split('\n').filter((line) => line.includes('alternative_drive'))).toHaveLength(1);
   });
 });

@@ -3,33 +3,8 @@
 // found first, and a measure that cannot be solved is listed with its reason.
 import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
-import { loadCaseText, type LoadResult } from '../../src/model/index.js';
-import { plantResult, solvePlant } from '../../src/plant/index.js';
 import { caseWithProjects, evaluateChanges, findSavings, measureAsProject, mergeChanges, resolveMeasurePlants, solveBase, type SavingsResult } from '../../src/savings/index.js';
-
-type Loaded = Extract<LoadResult, { ok: true }>;
-
-function load(text: string): Loaded {
-  const loaded = loadCaseText(text, 'case.yaml');
-  if (!loaded.ok) throw new Error(loaded.issues.map((issue) => `${issue.path}: ${issue.message}`).join('\n'));
-  return loaded;
-}
-
-/** Hours x (base cost - changed cost) over the scenarios, each plant solved on its own here. */
-async function solvedSaving(text: string, changes: Record<string, unknown>): Promise<number> {
-  const base = load(text);
-  const changed = load(caseWithProjects(text, [{ id: 'check', capital_cost: '1 USD', life: 10, discount_rate: '8 %', changes }]));
-  let saving = 0;
-  for (const scenario of base.variants.scenarios) {
-    const before = await solvePlant(scenario.plant);
-    if (!before.ok) throw new Error(before.message);
-    const plant = changed.variants.projects[0].plants.find((entry) => entry.scenario === scenario.id)!.plant;
-    const after = await solvePlant(plant, { commitment: new Map(Object.entries(plantResult(before).commitment)), start: before.start });
-    if (!after.ok) throw new Error(after.message);
-    saving += scenario.hours * (plantResult(before).totals.cost_per_h - plantResult(after).totals.cost_per_h);
-  }
-  return saving;
-}
+import { load, solvedSaving } from './helpers/solvedSaving.js';
 
 const creameryText = readFileSync(new URL('../../cases/millbrook-creamery.yaml', import.meta.url), 'utf8');
 const creamery = load(creameryText);

@@ -69,7 +69,7 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
   auditUsers(plant, solved, states, ledger, attempt);
   auditAbsorptionChillers(plant, solved, states, ledger, attempt);
   auditTrapGroups(plant, solved, states, ledger, attempt);
-  auditFlashTanks(plant, solved, ledger, attempt);
+  auditFlashTanks(plant, solved, states, ledger, attempt);
   auditDeaerator(plant, solved, states, ledger, attempt);
   auditDeaeratorVent(plant, solved, ledger);
   const pumpShaft = auditFeedPumps(plant, solved, states, ledger);

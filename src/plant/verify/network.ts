@@ -83,7 +83,7 @@ export function auditUsers(plant: Plant, solved: SolvedPlant, states: AuditState
  * pressure; liquid that arrives below saturation leaves as it came, mixed.
  * Tanks are taken from high to low pressure, so a tank's inflows are known.
  */
-export function auditFlashTanks(plant: Plant, solved: SolvedPlant, ledger: Ledger, attempt: Attempt): void {
+export function auditFlashTanks(plant: Plant, solved: SolvedPlant, states: AuditStates, ledger: Ledger, attempt: Attempt): void {
   const tanks = [...plant.flashTanks].sort((a, b) => b.pressure - a.pressure);
   for (const tank of tanks) {
     ledger.volume(tank.id, 'flashTank');
@@ -96,7 +96,28 @@ export function auditFlashTanks(plant: Plant, solved: SolvedPlant, ledger: Ledge
       const vapour = point(saturatedVapour(tank.pressure));
       const leaving = mixed > liquid.h ? liquid : mass > 0 ? pointPH(tank.pressure, mixed) : liquid;
       ledger.stream({ from: tank.id, to: tank.vapourTo.kind === 'header' ? tank.vapourTo.id : ATMOSPHERE, label: 'flash vapour', m: result.vapour, ...vapour });
-      ledger.stream({ from: tank.id, to: liquidTarget(tank.liquidTo), label: 'flash liquid', m: result.liquid, ...leaving });
+      const preheater = tank.makeupPreheater;
+      if (!preheater || tank.liquidTo.kind !== 'drain') {
+        ledger.stream({ from: tank.id, to: liquidTarget(tank.liquidTo), label: 'flash liquid', m: result.liquid, ...leaving });
+        return;
+      }
+      // The makeup preheater: the liquid leaves cooler by the heat it gives the makeup.
+      const heat = result.makeupHeat;
+      const cooled = result.liquid > 1e-12 ? pointPH(tank.pressure, leaving.h - heat / result.liquid) : leaving;
+      ledger.stream({ from: tank.id, to: DRAIN, label: 'flash liquid, cooled', m: result.liquid, ...cooled });
+      ledger.check(tank.id, 'preheater heat at most what cools the liquid to its leaving temperature', Math.min(heat, result.liquid * Math.max(0, leaving.h - preheater.leavingH)), heat, 'kW', BALANCE_TOLERANCE, 1);
+      const makeupH = states.makeup.h;
+      ledger.check(tank.id, 'preheater heat at most what warms the makeup to the liquid\'s temperature', Math.min(heat, solved.deaerator.makeup * Math.max(0, leaving.h - makeupH)), heat, 'kW', BALANCE_TOLERANCE, 1);
+      if (heat > 0) {
+        // Heat leaves the liquid at its mean temperature (dh / ds) and enters the
+        // makeup at the makeup's mean temperature while warming: the exchanger's
+        // entropy generation is the difference, >= 0 when heat flows downhill.
+        const hotMean = Math.abs(leaving.s - cooled.s) > 1e-12 ? (leaving.h - cooled.h) / (leaving.s - cooled.s) : leaving.T;
+        const warmed = pointPH(states.makeup.p, makeupH + heat / Math.max(solved.deaerator.makeup, 1e-12));
+        const coldMean = Math.abs(warmed.s - states.makeup.s) > 1e-12 ? (warmed.h - makeupH) / (warmed.s - states.makeup.s) : states.makeup.T;
+        ledger.cross({ volume: tank.id, kind: 'heat', direction: 'out', kW: heat, temperature: hotMean });
+        ledger.cross({ volume: 'deaerator', kind: 'heat', direction: 'in', kW: heat, temperature: coldMean });
+      }
     });
   }
 }

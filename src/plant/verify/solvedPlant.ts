@@ -14,7 +14,7 @@ export interface SolvedPlant {
   turbines: { id: string; running: boolean; sectionFlows: number[]; power: number }[];
   letdowns: { id: string; steam: number; spray: number; outlet: number }[];
   users: { id: string; steam: number }[];
-  flashTanks: { id: string; vapour: number; liquid: number }[];
+  flashTanks: { id: string; vapour: number; liquid: number; makeupHeat: number }[];
   deaerator: {
     heatingSteam: number;
     makeup: number;
@@ -89,7 +89,7 @@ export function solvedPlantFromReports(headers: readonly ReportedHeader[], units
     }),
     letdowns: byKind('letdown').map((unit) => ({ id: unit.id, steam: num(unit, 'steam_kg_s'), spray: num(unit, 'spray_kg_s'), outlet: num(unit, 'outlet_kg_s') })),
     users: byKind('user').map((unit) => ({ id: unit.id, steam: num(unit, 'steam_kg_s') })),
-    flashTanks: byKind('flashTank').map((unit) => ({ id: unit.id, vapour: num(unit, 'vapour_kg_s'), liquid: num(unit, 'liquid_kg_s') })),
+    flashTanks: byKind('flashTank').map((unit) => ({ id: unit.id, vapour: num(unit, 'vapour_kg_s'), liquid: num(unit, 'liquid_kg_s'), makeupHeat: num(unit, 'makeup_heat_kW', 0) })),
     deaerator: {
       heatingSteam: num(deaerator, 'heating_steam_kg_s'),
       makeup: num(deaerator, 'makeup_kg_s'),
