@@ -48,6 +48,11 @@ export function resolveSwitching(context: ResolveContext, path: CasePath, canSwi
       ok = false;
       return 0;
     }
+    if (parsed < 0) {
+      context.error('negative', [...path, key], `expected zero or more hours, found ${JSON.stringify(value)}`);
+      ok = false;
+      return 0;
+    }
     if (parsed > MOST_HOURS) {
       context.error('out-of-range', [...path, key], `expected at most ${MOST_HOURS} hours (a leap year), found ${JSON.stringify(value)}`);
       ok = false;
