@@ -8,7 +8,7 @@ import type { BackendName } from '../../lp/index.js';
 import type { Plant } from '../../model/index.js';
 import { plantDisplayFormat, yearCsv, yearHtml, yearText } from '../../report/index.js';
 import { progressLine } from '../../scenarios/index.js';
-import { formatProfileIssue, loadProfile, mergeParts, partText, runYear, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
+import { formatProfileIssue, loadProfile, mergeParts, ruledUnits, switchingIssues, partText, runYear, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { checkWorkers } from '../optionChecks.js';
@@ -133,6 +133,12 @@ export const yearCommand: CommandModule<object, YearArgs> = {
       for (const issue of read.issues) process.stderr.write(`${formatProfileIssue(issue)}\n`);
       throw new CliError(`${read.issues[0]?.file ?? args.case}: ${read.issues.length} problem${read.issues.length === 1 ? '' : 's'} in the profile; nothing was solved`, EXIT_PROBLEMS);
     }
+    const ruleIssues = switchingIssues(loaded.plant, read.profile, args.case);
+    if (ruleIssues.length > 0) {
+      for (const issue of ruleIssues) process.stderr.write(`${formatProfileIssue(issue)}\n`);
+      throw new CliError(`${args.case}: ${ruleIssues.length} switching rule${ruleIssues.length === 1 ? '' : 's'} longer than the profile; nothing was solved`, EXIT_PROBLEMS);
+    }
+    if (shard && ruledUnits(loaded.plant).length > 0) throw new CliError(`--shard: this year is solved as rolling windows (${ruledUnits(loaded.plant).map((unit) => unit.id).join(', ')} declare switching rules), each window starting from the one before, so it cannot be split into shards; run it without --shard`, EXIT_USAGE);
     const input = { plant: loaded.plant, profile: read.profile, profileFile: loaded.plant.profile!.file, objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, ...(args.block !== undefined ? { blockPeriods: args.block } : {}) };
     const progress = progressLine('year', process.stderr, quietProgress(args));
     let run: Awaited<ReturnType<typeof runYear>>;
