@@ -13,6 +13,6 @@ export { YearAccumulator, type YearTotals, type EnergyTotals, type MonthTotals, 
 export { runYear, yearMeta, yearFingerprint, shardBlocks, totalsOf, YearModeError, type YearInput, type YearMeta, type YearResult, type Shard } from './runYear.js';
 export { mergeParts, partText, PART_FORMAT, type PartFile, type MergeOutcome } from './parts.js';
 export { ruledUnits, heldPlant, type RuledUnit } from './switchingUnits.js';
-export { windowModel, type UnitHistory, type WindowPeriod, type WindowModel } from './windowModel.js';
+export { windowModel, type UnitHistory, type WayToRun, type WindowPeriod, type WindowModel } from './windowModel.js';
 export { solveRolling, WINDOW_KEPT, WINDOW_OVERLAP, type WindowSize, type WindowNote } from './solveRolling.js';
 export { switchingIssues } from './switchingIssues.js';

@@ -10,7 +10,7 @@ import type { Profile } from './readProfile.js';
 import { BLOCK_PERIODS, blockTasks } from './solveBlock.js';
 import { solveBlocks, type YearRunOptions } from './solveYear.js';
 import { YearAccumulator, type YearTotals } from './yearTotals.js';
-import { solveRolling, WINDOW_KEPT, WINDOW_OVERLAP, type WindowSize } from './solveRolling.js';
+import { ALL_WAYS_UP_TO, solveRolling, WINDOW_KEPT, WINDOW_OVERLAP, type WindowSize } from './solveRolling.js';
 import { ruledUnits } from './switchingUnits.js';
 
 export interface YearMeta {
@@ -76,7 +76,7 @@ export function yearMeta(input: YearInput): YearMeta {
   return {
     ...common,
     mode: 'rolling windows',
-    mode_note: `${names} declare${ruled.length === 1 ? 's' : ''} start costs or minimum running or stopped hours, so on/off links the periods: the year is solved as rolling windows of ${window.kept + window.overlap} periods, each one mixed-integer program over its periods (every period linearised about its own converged point), of which the first ${window.kept} are kept and the last ${window.overlap} overlap the next window; the kept on/off carries into the next window, and a kept period whose on/off differs from its own optimum is converged again with it held; ${costNote}; a period out of service or not solved breaks the minimum times`,
+    mode_note: `${names} declare${ruled.length === 1 ? 's' : ''} start costs or minimum running or stopped hours, so on/off links the periods: the year is solved as rolling windows of ${window.kept + window.overlap} periods, the first ${window.kept} kept and the last ${window.overlap} overlapping the next window. Each period is converged for each on/off of ${ruled.length === 1 ? 'that unit' : 'those units'} (${ruled.length <= ALL_WAYS_UP_TO ? 'every combination' : 'its own optimum and each single flip'}, every other choice free), and each window is one mixed-integer program that picks one of them per period, linked by start, stop and minimum-time rows; the kept on/off carries into the next window; ${costNote}; a period out of service or not solved breaks the minimum times`,
     window,
     switching_units: ruled.map((unit) => unit.id),
   };
@@ -126,7 +126,7 @@ export async function runYear(input: YearInput, options: YearRunOptions & { keep
         accumulator.add(record);
         records?.push(record);
       }
-    }, () => options.onProgress?.(++done, total));
+    }, () => options.onProgress?.(++done, total), options.onWindow);
     return { result: { ...yearMeta(input), ...accumulator.totals() }, records };
   }
   const tasks = blockTasks(input.profile, input.blockPeriods ?? BLOCK_PERIODS);
