@@ -120,10 +120,13 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
  * The neighbour's on/off decisions converged from its point (load segments
  * decided afresh), then each swap of a running boiler for a stopped one from
  * there (a swap can pay on a curved efficiency even where the linear model at
- * the point does not show it); kept when the MIP at the converged point (every
- * integer free) is no cheaper beyond its gap and chooses the same on/off. Null
- * when they cannot be met, do not settle, or the MIP would choose otherwise:
- * the full search then runs.
+ * the point does not show it). Checked by the MIP at the converged point
+ * (every integer free): kept when it chooses the same on/off and is no cheaper
+ * beyond its gap; where it chooses other on/off, that choice is converged from
+ * the same point and the neighbour's kept when no worse converged (the linear
+ * model away from its point misleads more often than not). Null when they
+ * cannot be met, do not settle, or the MIP's other choice wins and is not
+ * confirmed at its own point: the full search then runs.
  */
 async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<{ best: Converged; tried: CommitmentTried[] } | null> {
   const { plant, objective, backend } = settings;
