@@ -115,7 +115,8 @@ export async function runYear(input: YearInput, options: YearRunOptions & { keep
   const settings = { plant: input.plant, columns: input.profile.columns, objective: input.objective, backend: input.backend };
   if (ruledUnits(input.plant).length > 0) {
     // The windows chain (each starts from the last one's kept state): one thread, no shards.
-    if (options.shard) throw new YearModeError(`this year is solved as rolling windows (${ruledUnits(input.plant).map((unit) => unit.id).join(', ')} declare switching rules), and each window starts from the one before, so it cannot be split into shards; run it whole`);
+    const ruled = ruledUnits(input.plant);
+    if (options.shard) throw new YearModeError(`this year is solved as rolling windows (${ruled.map((unit) => unit.id).join(', ')} declare${ruled.length === 1 ? 's' : ''} switching rules), and each window starts from the one before, so it cannot be split into shards; run it whole`);
     const accumulator = new YearAccumulator(input.plant, input.profile.labels.length);
     const records: PeriodRecord[] | null = options.keepRecords ? [] : null;
     const total = input.profile.labels.length;

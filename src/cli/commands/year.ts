@@ -138,7 +138,8 @@ export const yearCommand: CommandModule<object, YearArgs> = {
       for (const issue of ruleIssues) process.stderr.write(`${formatProfileIssue(issue)}\n`);
       throw new CliError(`${args.case}: ${ruleIssues.length} switching rule${ruleIssues.length === 1 ? '' : 's'} longer than the profile; nothing was solved`, EXIT_PROBLEMS);
     }
-    if (shard && ruledUnits(loaded.plant).length > 0) throw new CliError(`--shard: this year is solved as rolling windows (${ruledUnits(loaded.plant).map((unit) => unit.id).join(', ')} declare switching rules), each window starting from the one before, so it cannot be split into shards; run it without --shard`, EXIT_USAGE);
+    const ruled = ruledUnits(loaded.plant);
+    if (shard && ruled.length > 0) throw new CliError(`--shard: this year is solved as rolling windows (${ruled.map((unit) => unit.id).join(', ')} declare${ruled.length === 1 ? 's' : ''} switching rules), each window starting from the one before, so it cannot be split into shards; run it without --shard`, EXIT_USAGE);
     const input = { plant: loaded.plant, profile: read.profile, profileFile: loaded.plant.profile!.file, objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, ...(args.block !== undefined ? { blockPeriods: args.block } : {}) };
     const progress = progressLine('year', process.stderr, quietProgress(args));
     let run: Awaited<ReturnType<typeof runYear>>;
