@@ -29,6 +29,7 @@ export function resolveSwitching(context: ResolveContext, path: CasePath, canSwi
     ok = false;
   }
   let startCost = 0;
+  if (typeof item.start_cost !== 'string' && item.start_cost !== undefined) ok = false; // the schema reports it
   if (item.start_cost !== undefined && typeof item.start_cost === 'string') {
     const parsed = parseMoney(item.start_cost, context.currency, false);
     if (!parsed.ok) {
@@ -42,6 +43,10 @@ export function resolveSwitching(context: ResolveContext, path: CasePath, canSwi
   const hours = (key: 'min_hours_on' | 'min_hours_off'): number => {
     const value = item[key];
     if (value === undefined) return 0;
+    if (context.flagged([...path, key])) {
+      ok = false;
+      return 0;
+    }
     const parsed = hoursOf(value);
     if (parsed === null) {
       context.error('bad-hours', [...path, key], `expected hours such as 6 or "6 h", found ${JSON.stringify(value)}`);

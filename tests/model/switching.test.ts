@@ -47,6 +47,11 @@ describe('switching', () => {
     `);
   });
 
+  test('values of the wrong type are refused once each, by the schema', () => {
+    const text = withBoilerSwitching('      start_cost: 1800\n      min_hours_on: [6]\n');
+    expect(issuesOf(text, 'mill.yaml')).toMatchInlineSnapshot();
+  });
+
   test('a key that is not a rule is refused by the schema', () => {
     const text = withBoilerSwitching('      warm_start_cost: 100 EUR\n');
     expect(issuesOf(text, 'mill.yaml')).toContain('switching');
