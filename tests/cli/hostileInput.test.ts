@@ -56,7 +56,7 @@ function workspace(): string {
   // year: the peaker plant, whose switching rules make the year rolling windows; and with bad rules.
   const peaker = readFileSync(join(projectRoot, 'tests', 'year', 'fixtures', 'peaker-plant.yaml'), 'utf8');
   writeFileSync(join(dir, 'pk.yaml'), `${peaker}\nprofile: { file: pk.csv }\n`);
-  writeFileSync(join(dir, 'pk.csv'), 'timestamp,process.steam [t/h]\n2026-03-01T00:00,18\n2026-03-01T01:00,9\n');
+  writeFileSync(join(dir, 'pk.csv'), `timestamp,process.steam [t/h]\n${[18, 9, 9, 18, 18, 9].map((flow, hour) => `2026-03-01T0${hour}:00,${flow}`).join('\n')}\n`);
   writeFileSync(join(dir, 'pk-bad.yaml'), peaker.replace('start_cost: 100 EUR', 'start_cost: lots').replace('min_hours_on: 4', 'min_hours_on: -4'));
   writeFileSync(join(dir, 'existing.html'), 'old report');
   writeFileSync(join(dir, 'plain.txt'), 'not a folder');

@@ -49,7 +49,10 @@ describe('switching', () => {
 
   test('values of the wrong type are refused once each, by the schema', () => {
     const text = withBoilerSwitching('      start_cost: 1800\n      min_hours_on: [6]\n');
-    expect(issuesOf(text, 'mill.yaml')).toMatchInlineSnapshot();
+    expect(issuesOf(text, 'mill.yaml')).toMatchInlineSnapshot(`
+      "mill.yaml:104:19  boilers[0].switching.start_cost  expected a text value, found 1800
+      mill.yaml:105:21  boilers[0].switching.min_hours_on  expected hours such as 6 or "6 h"; found a list"
+    `);
   });
 
   test('a key that is not a rule is refused by the schema', () => {

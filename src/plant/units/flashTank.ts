@@ -37,13 +37,8 @@ export class FlashTankContribution implements UnitContribution {
     this.inflow = expr();
     for (const stream of this.inflows) this.inflow.addExpression(stream.flow);
     if (this.inletH === null) {
-      // First pass: warm from another solve's point, its inlet flows weigh the
-      // inlets (a neighbouring hour then starts settled); else no flows yet, so
-      // every inlet weighs the same.
-      const flows = this.inflows.map((stream) => Math.max(0, context.pointValue(stream.flow)));
-      const mass = flows.reduce((total, flow) => total + flow, 0);
-      if (mass > 1e-9) this.inletH = this.inflows.reduce((total, stream, at) => total + flows[at] * stream.h, 0) / mass;
-      else this.inletH = this.inflows.length > 0 ? this.inflows.reduce((total, stream) => total + stream.h, 0) / this.inflows.length : saturatedLiquid(tank.pressure).h;
+      // First pass: no flows yet, so weigh every inlet equally.
+      this.inletH = this.inflows.length > 0 ? this.inflows.reduce((total, stream) => total + stream.h, 0) / this.inflows.length : saturatedLiquid(tank.pressure).h;
     }
     const liquidH = saturatedLiquid(tank.pressure).h;
     const vapourH = saturatedVapour(tank.pressure).h;
