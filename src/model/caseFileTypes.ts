@@ -200,6 +200,16 @@ export interface BoilerEntry {
   /** a flash tank id or "drain" */
   blowdown_to?: string;
   can_switch_off?: boolean;
+  switching?: SwitchingEntry;
+}
+
+/** Start cost and minimum running and stopped hours of a unit that may switch off. */
+export interface SwitchingEntry {
+  /** money in the site currency, "1800 EUR" */
+  start_cost?: string;
+  /** hours: 6 or "6 h" */
+  min_hours_on?: number | string;
+  min_hours_off?: number | string;
 }
 
 export interface SupplementaryFiringEntry {
@@ -262,6 +272,7 @@ export interface TurbineEntry {
   generator_efficiency?: QuantityText;
   power?: OpenRangeEntry;
   can_switch_off?: boolean;
+  switching?: SwitchingEntry;
   /** "generator" or a machine / feedwater pump id */
   drives?: string;
 }

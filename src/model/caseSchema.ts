@@ -157,7 +157,13 @@ const defs: Record<string, Schema> = {
     blowdown,
     blowdown_to: reference('a flash tank id, or drain (default)'),
     can_switch_off: { type: 'boolean', description: 'whether it may be switched off; default true' },
+    switching: ref('switching'),
   }, ['id', 'header', 'fuels', 'steam', 'outlet_temperature', 'efficiency', 'blowdown']),
+  switching: object('what stopping and starting costs and how long a unit must stay running or stopped, for a year solved hour by hour (needs can_switch_off: true); a year with such units is solved as rolling windows, each one mixed-integer program', {
+    start_cost: { type: 'string', description: 'cost of one start in the site currency; default none', examples: ['1800 EUR'] },
+    min_hours_on: { oneOf: [{ type: 'number' }, { type: 'string' }], 'x-message': 'expected hours such as 6 or "6 h"', description: 'hours it must run once started: a number or "6 h"; default 0', examples: [6, '6 h'] },
+    min_hours_off: { oneOf: [{ type: 'number' }, { type: 'string' }], 'x-message': 'expected hours such as 4 or "4 h"', description: 'hours it must stay stopped once stopped: a number or "4 h"; default 0', examples: [4, '4 h'] },
+  }, []),
   supplementaryFiring: object('duct burner of a heat-recovery boiler', {
     fuel: reference('fuel id'),
     max_steam: flow('extra steam it can raise', '10 t/h'),
@@ -217,6 +223,7 @@ const defs: Record<string, Schema> = {
     generator_efficiency: percent('generator efficiency; default 97 %', '97 %'),
     power: ref('openRange'),
     can_switch_off: { type: 'boolean', description: 'whether it may be stopped; default true' },
+    switching: ref('switching'),
     drives: reference('generator (default), or the id of a machine or feedwater pump'),
   }, ['id', 'inlet', 'stages']),
   desuperheater: object('desuperheater after a letdown valve', {

@@ -144,6 +144,29 @@ export interface FiredBoiler {
   blowdownTo: LiquidDestination;
   /** whether the optimiser may switch it off (otherwise it runs at least at steam.min) */
   canSwitchOff: boolean;
+  /** start cost and minimum running and stopped hours, for a year solved hour by hour */
+  switching?: SwitchingRules;
+}
+
+/**
+ * A unit's start cost and minimum running and stopped hours. They matter only
+ * across the periods of a year (src/year solves such a year as rolling
+ * windows); one solve has no history and ignores them.
+ */
+export interface SwitchingRules {
+  /** cost of one start, in the site currency */
+  startCost: number;
+  /** hours it must run once started */
+  minHoursOn: number;
+  /** hours it must stay stopped once stopped */
+  minHoursOff: number;
+  /** where the case writes each, for messages that need the profile (min hours longer than the year) */
+  at: { switching: Place; min_hours_on: Place; min_hours_off: Place };
+}
+
+export interface Place {
+  line: number;
+  column: number;
 }
 
 export interface HeatRecoveryBoiler {
@@ -226,6 +249,8 @@ export interface Turbine {
   power: Range;
   /** whether it may be stopped */
   canSwitchOff: boolean;
+  /** start cost and minimum running and stopped hours, for a year solved hour by hour */
+  switching?: SwitchingRules;
   /** what the shaft turns */
   drives: TurbineDrive;
 }

@@ -1,5 +1,6 @@
 // Steam sources: fired boilers, waste-heat boilers and purchased steam.
 import type { CasePath } from './issue.js';
+import { resolveSwitching } from './resolveSwitching.js';
 import type { EfficiencyPoint, FiredBoiler, FixedState, Header, HeatRecoveryBoiler, LiquidDestination, SteamImport } from './plantTypes.js';
 import { saturatedLiquid, statePH } from '../properties/index.js';
 import type { ResolveContext } from './resolveContext.js';
@@ -90,10 +91,11 @@ export function resolveBoilers(context: ResolveContext, headers: Map<string, Hea
     if (item.blowdown_to === undefined) context.addDefault([...path, 'blowdown_to'], 'drain', 'blowdown destination not stated: blowdown goes to drain');
     const blowdownTo = liquidDestination(context, [...path, 'blowdown_to'], ['drain'], { kind: 'drain' });
     if (item.can_switch_off === undefined) context.addDefault([...path, 'can_switch_off'], 'true', 'on/off not stated: the optimiser may switch this boiler off');
+    const switching = resolveSwitching(context, [...path, 'switching'], item.can_switch_off !== false, `boiler ${String(item.id)}`);
     if (!header || !outlet || !efficiency || blowdown === undefined || !blowdownTo || typeof item.id !== 'string' || fuels.some((fuel) => fuel === undefined) || fuels.length === 0) return [];
     return [{
       id: item.id, kind: 'boiler' as const, header: header.id, fuels: fuels as string[], steam, outlet, efficiency,
-      blowdownFraction: blowdown, blowdownTo, canSwitchOff: item.can_switch_off !== false,
+      blowdownFraction: blowdown, blowdownTo, canSwitchOff: item.can_switch_off !== false, ...(switching ? { switching } : {}),
     }];
   });
 }

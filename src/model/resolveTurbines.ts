@@ -5,6 +5,7 @@ import type { Header, StageExhaust, StagePerformance, Turbine, TurbineDrive, Tur
 import type { ResolveContext } from './resolveContext.js';
 import { steamPressure } from './resolveHeaders.js';
 import { liquidDestination } from './resolveSupply.js';
+import { resolveSwitching } from './resolveSwitching.js';
 
 function exhaustOf(context: ResolveContext, path: CasePath, headers: Map<string, Header>): StageExhaust | undefined {
   if (context.raw([...path, 'to']) !== undefined) {
@@ -122,11 +123,12 @@ export function resolveTurbines(context: ResolveContext, headers: Map<string, He
     }
     const power = context.range([...path, 'power'], 'power');
     if (item.can_switch_off === undefined) context.addDefault([...path, 'can_switch_off'], 'true', 'on/off not stated: the optimiser may stop this turbine');
+    const switching = resolveSwitching(context, [...path, 'switching'], item.can_switch_off !== false, `turbine ${String(item.id)}`);
     if (!inlet || stages.length === 0 || stages.some((stage) => !stage) || mechanical === undefined || generator === undefined || !drives || typeof item.id !== 'string') return [];
     const resolved = stages as TurbineStage[];
     return [{
       id: item.id, kind: 'turbine' as const, inlet: inlet.id, stages: resolved, inletFlow: resolved[0].sectionFlow,
-      mechanicalEfficiency: mechanical, generatorEfficiency: generator, power, canSwitchOff: item.can_switch_off !== false, drives,
+      mechanicalEfficiency: mechanical, generatorEfficiency: generator, power, canSwitchOff: item.can_switch_off !== false, drives, ...(switching ? { switching } : {}),
     }];
   });
 }

@@ -120,10 +120,13 @@ export async function solvePlant(plant: Plant, options: SolvePlantOptions = {}):
  * The neighbour's on/off decisions converged from its point (load segments
  * decided afresh), then each swap of a running boiler for a stopped one from
  * there (a swap can pay on a curved efficiency even where the linear model at
- * the point does not show it); kept when the MIP at the converged point (every
- * integer free) is no cheaper beyond its gap and chooses the same on/off. Null
- * when they cannot be met, do not settle, or the MIP would choose otherwise:
- * the full search then runs.
+ * the point does not show it). Checked by the MIP at the converged point
+ * (every integer free): kept when it chooses the same on/off and is no cheaper
+ * beyond its gap; where it chooses other on/off, that choice is converged from
+ * the same point and the neighbour's kept when no worse converged (the linear
+ * model away from its point misleads more often than not). Null when they
+ * cannot be met, do not settle, or the MIP's other choice wins and is not
+ * confirmed at its own point: the full search then runs.
  */
 async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<SolvePlantOptions['neighbour']>): Promise<{ best: Converged; tried: CommitmentTried[] } | null> {
   const { plant, objective, backend } = settings;
@@ -145,37 +148,53 @@ async function fromNeighbour(settings: LoopSettings, neighbour: NonNullable<Solv
     segmentsFree = true;
   }
   if (!converged) return null;
+  let current: Converged = converged;
   const entry = (source: CommitmentTried['source'], outcome: Converged): CommitmentTried => ({ source, onOff: Object.fromEntries(onOffOf(outcome.integers)), objective: outcome.result.objective ?? null, note: null, kept: false });
-  const tried: CommitmentTried[] = [entry('neighbour', converged)];
-  const check = buildPass(plant, contributionsOf(plant), converged.point, objective);
-  if (check.context.model.isMip) {
+  const tried: CommitmentTried[] = [entry('neighbour', current)];
+  // The MIP at the converged point, every integer free. Where it chooses other
+  // on/off, that choice is converged too, from the same point: the neighbour's
+  // stands when it is no worse converged; the MIP's choice, when better, is
+  // checked the same way at its own point (once; else the full search runs).
+  for (let round = 0; round < 2; round += 1) {
+    const check = buildPass(plant, contributionsOf(plant), current.point, objective);
+    if (!check.context.model.isMip) break;
     const confirmed = await backend.solve(check.context.model, { ...settings.solveOptions, mipDuals: false });
-    if (confirmed.status !== 'optimal' || confirmed.objective === null || converged.result.objective === null) return null;
-    const held = converged.result.objective;
+    if (confirmed.status !== 'optimal' || confirmed.objective === null || current.result.objective === null) return null;
+    const held = current.result.objective;
     // The MIP's own gap bounds how far below its incumbent the optimum can lie.
     const margin = Math.max(1e-9, settings.solveOptions.mipRelativeGap ?? 0) * Math.max(1, Math.abs(held));
     const better = objective === 'maximumPower' ? confirmed.objective > held + margin : confirmed.objective < held - margin;
     const chosen = integerValues(check, confirmed);
-    // Other on/off choices from the MIP, even at no gain on this linearisation, are judged by the full search.
-    if (better || keyOf(onOffOf(chosen)) !== keyOf(onOffOf(converged.integers))) return null;
+    if (keyOf(onOffOf(chosen)) !== keyOf(onOffOf(current.integers))) {
+      if (round > 0) return null;
+      const rival = (await attempt(current.point, chosen)) ?? (await attempt(current.point, onOffOf(chosen)));
+      if (!rival) return null;
+      tried.push(entry('MIP at the converged points', rival));
+      if (!improves(rival, current, objective)) break;
+      current = rival;
+      segmentsFree = false;
+      continue;
+    }
+    if (better) return null;
     // Other load segments: the same on/off converged again with the segments free, the better kept.
-    if (!segmentsFree && keyOf(sortedByName(chosen)) !== keyOf(sortedByName(converged.integers))) {
-      const again = await attempt(converged.point, onOffOf(converged.integers));
+    if (!segmentsFree && keyOf(sortedByName(chosen)) !== keyOf(sortedByName(current.integers))) {
+      const again = await attempt(current.point, onOffOf(current.integers));
       if (again) {
         tried.push(entry('neighbour', again));
-        if (improves(again, converged, objective)) converged = again;
+        if (improves(again, current, objective)) current = again;
       }
     }
+    break;
   }
-  let best = converged;
-  const around = onOffOf(converged.integers);
+  let best: Converged = current;
+  const around = onOffOf(current.integers);
   const boilers = new Set(plant.boilers.map((boiler) => `${boiler.id}.on`));
   for (const [running, on] of around) {
     for (const [stopped, off] of around) {
       if (on !== 1 || off !== 0 || !boilers.has(running) || !boilers.has(stopped)) continue;
       let outcome: Converged | NotConverged;
       try {
-        outcome = await converge(settings, contributionsOf(plant), converged.point, withHeldSegments(new Map(around).set(running, 0).set(stopped, 1), converged.integers));
+        outcome = await converge(settings, contributionsOf(plant), current.point, withHeldSegments(new Map(around).set(running, 0).set(stopped, 1), current.integers));
       } catch (error) {
         if (error instanceof PlantPhysicsError || error instanceof PropertyRangeError) continue;
         throw error;

@@ -35,7 +35,9 @@ export function yearReportTables(result: YearResult, format: DisplayFormat): Rep
   const value = (perT: number | null): string => (perT === null ? 'n/a' : steamValueNumber(perT, valueUnit, format.system).toFixed(2));
   const a = result.annual;
   const tables: ReportTable[] = [];
-  tables.push({ id: 'year-cost', title: `Annual cost: ${format.money(a.cost)}`, headings: ['component', `cost (${format.currency})`, 'share'], rows: COMPONENTS.map((component) => [component, whole(a.cost_by_component[component]), a.cost > 0 ? `${((a.cost_by_component[component] / a.cost) * 100).toFixed(1)} %` : '-']) });
+  const rolling = result.mode === 'rolling windows';
+  const startRow = rolling ? [['start-ups', whole(a.start_up_cost), a.cost > 0 ? `${((a.start_up_cost / a.cost) * 100).toFixed(1)} %` : '-']] : [];
+  tables.push({ id: 'year-cost', title: `Annual cost: ${format.money(a.cost)}`, headings: ['component', `cost (${format.currency})`, 'share'], rows: [...COMPONENTS.map((component) => [component, whole(a.cost_by_component[component]), a.cost > 0 ? `${((a.cost_by_component[component] / a.cost) * 100).toFixed(1)} %` : '-']), ...startRow] });
   tables.push({
     id: 'year-energy',
     title: 'Annual energy',
@@ -64,8 +66,8 @@ export function yearReportTables(result: YearResult, format: DisplayFormat): Rep
   tables.push({
     id: 'year-units',
     title: 'Units over the year',
-    headings: ['unit', 'kind', 'hours running', 'starts', 'hours out of service', `steam (${units.massUnit})`, `fuel (${units.energyUnit})`, 'power (MWh)'],
-    rows: result.units.map((unit) => [unit.id, unit.kind, whole(unit.hours_running), String(unit.starts), whole(unit.hours_out_of_service), whole(units.mass(unit.steam_t)), whole(units.energy(unit.fuel_GJ)), whole(unit.power_MWh)]),
+    headings: ['unit', 'kind', 'hours running', 'starts', ...(rolling ? [`start costs (${format.currency})`] : []), 'hours out of service', `steam (${units.massUnit})`, `fuel (${units.energyUnit})`, 'power (MWh)'],
+    rows: result.units.map((unit) => [unit.id, unit.kind, whole(unit.hours_running), String(unit.starts), ...(rolling ? [whole(unit.start_up_cost)] : []), whole(unit.hours_out_of_service), whole(units.mass(unit.steam_t)), whole(units.energy(unit.fuel_GJ)), whole(unit.power_MWh)]),
   });
   const limits = result.units.flatMap((unit) => Object.entries(unit.hours_at_limit).map(([limit, hours]) => [unit.id, limit, whole(hours)]));
   if (limits.length > 0) tables.push({ id: 'year-limits', title: 'Hours at each limit', headings: ['unit', 'limit', 'hours'], rows: limits });
@@ -105,9 +107,11 @@ export function yearText(result: YearResult, format: DisplayFormat): string {
 export function yearCsv(result: YearResult, records: Iterable<PeriodRecord>, format: DisplayFormat): string {
   const flow = format.flowUnit;
   const valueUnit = result.marginal_value_unit as SteamValueUnit;
+  const rolling = result.mode === 'rolling windows';
   const heading = [
     'period', 'hours', 'month', 'status', 'solved', `cost [${format.currency}/h]`,
     ...COMPONENTS.map((component) => `${component} cost [${format.currency}/h]`),
+    ...(rolling ? [`start-up cost [${format.currency}]`] : []),
     `fuel [${format.fuelRateUnit}]`, `steam raised [${flow}]`, `process steam [${flow}]`, `let down [${flow}]`, `vented [${flow}]`, `makeup [${flow}]`,
     'power generated [kW]', 'power imported [kW]', 'power exported [kW]', 'site demand [kW]', `CO2 [${format.co2RateUnit}]`,
     ...result.headers.map((header) => `${header.id} marginal value [${format.valueUnit(valueUnit)}]`),
@@ -126,6 +130,7 @@ export function yearCsv(result: YearResult, records: Iterable<PeriodRecord>, for
     const cells = [
       ...head, 'solved', record.how, number(record.cost_per_h),
       ...COMPONENTS.map((component) => number(record.cost_by_component_per_h[component])),
+      ...(rolling ? [number(record.start_up_cost ?? 0)] : []),
       number(format.fuelRateValue(kW_of_GJ_per_h)), number(format.flowValue(record.steam_raised_kg_s)), number(format.flowValue(record.process_steam_kg_s)),
       number(format.flowValue(record.let_down_kg_s)), number(format.flowValue(record.vented_kg_s)), number(format.flowValue(record.makeup_kg_s)),
       number(record.power_generated_kW), number(record.power_imported_kW), number(record.power_exported_kW), number(record.site_demand_kW), number(format.co2RateValue(record.co2_kg_per_h)),

@@ -59,7 +59,8 @@ export function periodPlant(base: Plant, columns: readonly ProfileColumn[], valu
   return plant;
 }
 
-function withoutUnits(plant: Plant, out: ReadonlySet<string>): Plant {
+/** The plant without these units, every reference to them removed (a machine a stopped turbine drove keeps its motor). */
+export function withoutUnits(plant: Plant, out: ReadonlySet<string>): Plant {
   const kept = <T extends { id: string }>(list: T[]): T[] => list.filter((item) => !out.has(item.id));
   const result: Plant = {
     ...plant,

@@ -70,6 +70,8 @@ export type PeriodRecord =
       units: UnitState[];
       /** passes of the kept commitment's convergence */
       passes: number;
+      /** start costs of the units with switching rules that start in this period (a year solved as rolling windows), currency */
+      start_up_cost?: number;
       /** how the period was solved: from its neighbour's decisions, a full search, or a copy of an identical period */
       how: 'neighbour' | 'full' | 'same as an earlier period';
     })

@@ -7,6 +7,7 @@ import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { PeriodRecord } from './periodRecord.js';
+import type { WindowNote } from './solveRolling.js';
 import { solveBlock, type BlockSettings, type BlockTask } from './solveBlock.js';
 
 export interface YearRunOptions {
@@ -14,6 +15,8 @@ export interface YearRunOptions {
   workers?: number;
   /** after each period is solved */
   onProgress?: (done: number, total: number) => void;
+  /** with rolling windows: after each window's program is solved and its periods kept */
+  onWindow?: (note: WindowNote) => void;
 }
 
 const WORKER_URL = new URL('./yearWorker.js', import.meta.url);

@@ -4,6 +4,7 @@
 // Only running sums and one number per hour per header are kept, so memory
 // grows with the headers, not with the size of each period's result.
 import type { Plant } from '../model/index.js';
+import { ruledUnits } from './switchingUnits.js';
 import { COMPONENTS, trackedUnits, type Component, type PeriodRecord, type TrackedUnit } from './periodRecord.js';
 
 const T_PER_KG = 1e-3;
@@ -12,7 +13,10 @@ const GJ_PER_KWH = 0.0036;
 
 export interface EnergyTotals {
   hours: number;
+  /** every period's cost for its hours, start costs included */
   cost: number;
+  /** start costs of units with switching rules (in cost, not in any component), currency */
+  start_up_cost: number;
   cost_by_component: Record<Component, number>;
   fuel_GJ: number;
   steam_raised_t: number;
@@ -40,6 +44,8 @@ export interface UnitYear {
   hours_running: number;
   /** stopped to running between consecutive solved periods */
   starts: number;
+  /** starts times the unit's start cost, where it declares one */
+  start_up_cost: number;
   hours_out_of_service: number;
   hours_at_limit: Record<string, number>;
   steam_t: number;
@@ -85,7 +91,7 @@ export interface YearTotals {
 
 function emptyEnergy(): EnergyTotals {
   return {
-    hours: 0, cost: 0, cost_by_component: Object.fromEntries(COMPONENTS.map((component) => [component, 0])) as Record<Component, number>,
+    hours: 0, cost: 0, start_up_cost: 0, cost_by_component: Object.fromEntries(COMPONENTS.map((component) => [component, 0])) as Record<Component, number>,
     fuel_GJ: 0, steam_raised_t: 0, process_steam_t: 0, process_heat_GJ: 0, power_generated_MWh: 0, power_imported_MWh: 0,
     power_exported_MWh: 0, site_demand_MWh: 0, vented_t: 0, let_down_t: 0, makeup_t: 0, co2_t: 0,
   };
@@ -95,7 +101,8 @@ function addEnergy(totals: EnergyTotals, record: Extract<PeriodRecord, { ok: tru
   const hours = record.hours;
   const tonnes = (kg_s: number): number => kg_s * S_PER_H * T_PER_KG * hours;
   totals.hours += hours;
-  totals.cost += record.cost_per_h * hours;
+  totals.cost += record.cost_per_h * hours + (record.start_up_cost ?? 0);
+  totals.start_up_cost += record.start_up_cost ?? 0;
   for (const component of COMPONENTS) totals.cost_by_component[component] += record.cost_by_component_per_h[component] * hours;
   totals.fuel_GJ += record.fuel_GJ_per_h * hours;
   totals.steam_raised_t += tonnes(record.steam_raised_kg_s);
@@ -131,12 +138,15 @@ export class YearAccumulator {
   private readonly failed: FailedPeriod[] = [];
   private readonly how = { neighbour: 0, full: 0, same_as_earlier: 0, one_pass: 0 };
   private previousRunning: (0 | 1)[] | null = null;
+  private readonly startCost: number[];
   private nextIndex = 0;
   private hours = 0;
 
   constructor(private readonly plant: Plant, periods: number) {
     this.tracked = trackedUnits(plant);
-    this.units = this.tracked.map((unit) => ({ id: unit.id, kind: unit.kind, hours_running: 0, starts: 0, hours_out_of_service: 0, hours_at_limit: {}, steam_t: 0, fuel_GJ: 0, power_MWh: 0 }));
+    const rules = new Map(ruledUnits(plant).map((unit) => [unit.id, unit.rules.startCost]));
+    this.startCost = this.tracked.map((unit) => rules.get(unit.id) ?? 0);
+    this.units = this.tracked.map((unit) => ({ id: unit.id, kind: unit.kind, hours_running: 0, starts: 0, start_up_cost: 0, hours_out_of_service: 0, hours_at_limit: {}, steam_t: 0, fuel_GJ: 0, power_MWh: 0 }));
     this.values = plant.headers.map(() => ({ value: new Float64Array(periods), hours: new Float64Array(periods), count: 0 }));
   }
 
@@ -171,7 +181,10 @@ export class YearAccumulator {
       const unit = this.units[slot];
       if (state.out) unit.hours_out_of_service += record.hours;
       if (state.running) unit.hours_running += record.hours;
-      if (state.running && this.previousRunning && this.previousRunning[slot] === 0) unit.starts += 1;
+      if (state.running && this.previousRunning && this.previousRunning[slot] === 0) {
+        unit.starts += 1;
+        unit.start_up_cost += this.startCost[slot];
+      }
       for (const limit of state.limits) unit.hours_at_limit[limit] = (unit.hours_at_limit[limit] ?? 0) + record.hours;
       unit.steam_t += state.steam_kg_s * S_PER_H * T_PER_KG * record.hours;
       unit.fuel_GJ += state.fuel_kW * GJ_PER_KWH * record.hours;

@@ -53,6 +53,11 @@ function workspace(): string {
   writeFileSync(join(dir, 'absurd.yaml'), ABSURD);
   writeFileSync(join(dir, 'zero.yaml'), smallCase({ extra: '' }).replace('price: 10 USD/GJ', 'price: 0 USD/GJ').replace('cost: 0.5 USD/t', 'cost: 0 USD/t').replace('price: 100 USD/MWh', 'price: 0 USD/MWh'));
   writeFileSync(join(dir, 'badcost.yaml'), `${smallCase()}\ncosts:\n  trap_repair: 350 USD/t\n`);
+  // year: the peaker plant, whose switching rules make the year rolling windows; and with bad rules.
+  const peaker = readFileSync(join(projectRoot, 'tests', 'year', 'fixtures', 'peaker-plant.yaml'), 'utf8');
+  writeFileSync(join(dir, 'pk.yaml'), `${peaker}\nprofile: { file: pk.csv }\n`);
+  writeFileSync(join(dir, 'pk.csv'), `timestamp,process.steam [t/h]\n${[18, 9, 9, 18, 18, 9].map((flow, hour) => `2026-03-01T0${hour}:00,${flow}`).join('\n')}\n`);
+  writeFileSync(join(dir, 'pk-bad.yaml'), peaker.replace('start_cost: 100 EUR', 'start_cost: lots').replace('min_hours_on: 4', 'min_hours_on: -4'));
   writeFileSync(join(dir, 'existing.html'), 'old report');
   writeFileSync(join(dir, 'plain.txt'), 'not a folder');
   mkdirSync(join(dir, 'folder'));
@@ -140,6 +145,8 @@ const cases: HostileCase[] = [
   { title: 'year: a case without a profile', args: ['year', 'c.yaml'], code: 1, says: /c\.yaml {2}the case names no profile; expected "profile: \{ file: year\.csv \}"/ },
   { title: 'year merge: a folder as a part file', args: ['year', 'merge', 'folder'], code: 1, says: /folder: cannot read the part file: it is a directory/ },
   { title: 'year merge: a part file that is not JSON', args: ['year', 'merge', 'plain.txt'], code: 1, says: /plain\.txt: expected a part file written by "steamwright year --shard", found text that is not JSON/ },
+  { title: 'check: switching rules with a bad start cost and negative hours, both located', args: ['check', 'pk-bad.yaml'], code: 1, says: /pk-bad\.yaml:\d+:\d+ {2}boilers\[1\]\.switching\.start_cost {2}expected an amount of money[^]*pk-bad\.yaml:\d+:\d+ {2}boilers\[1\]\.switching\.min_hours_on {2}expected zero or more hours, found -4/ },
+  { title: 'year: --shard of a year solved as rolling windows', args: ['year', 'pk.yaml', '--shard', '1/2', '--part', 'p.json'], code: 2, says: /this year is solved as rolling windows \(peaker declares switching rules\)[^]*cannot be split into shards/, oneLine: true },
   { title: 'year: --shard of zero slices', args: ['year', 'c.yaml', '--shard', '0/0', '--part', 'p.json'], code: 2, says: /--shard expects K\/N with 1 <= K <= N <= 10000/, oneLine: true },
   // Class 5: options.
   { title: 'solve: a doubled --solver', args: ['solve', 'c.yaml', '--solver', 'jslp', '--solver', 'highs'], code: 2, says: /--solver was given 2 times \("jslp", "highs"\); give it once/, oneLine: true },

@@ -36,9 +36,9 @@ describe('year charts', () => {
     const result = {
       plant: 'Test <mill>', currency: 'EUR', unit_system: 'si', objective: 'minimumCost', marginal_value_unit: 'currency', mode: 'independent periods', mode_note: '',
       profile: { file: 'p.csv', kind: 'hourly', periods: 3, columns: [] }, block_periods: 168, periods: 3, hours: 3, hours_solved: 3, complete: true,
-      annual: { hours: 3, cost: 300, cost_by_component: { fuel: 300, power: 0, steam: 0, water: 0, carbon: 0 }, fuel_GJ: 3, steam_raised_t: 10.8, process_steam_t: 0, process_heat_GJ: 0, power_generated_MWh: 0, power_imported_MWh: 0.03, power_exported_MWh: 0, site_demand_MWh: 0, vented_t: 0, let_down_t: 0, makeup_t: 0, co2_t: 0 },
-      months: [{ month: 1, hours: 3, cost: 300, cost_by_component: { fuel: 300, power: 0, steam: 0, water: 0, carbon: 0 }, fuel_GJ: 3, steam_raised_t: 10.8, process_steam_t: 0, process_heat_GJ: 0, power_generated_MWh: 0, power_imported_MWh: 0.03, power_exported_MWh: 0, site_demand_MWh: 0, vented_t: 0, let_down_t: 0, makeup_t: 0, co2_t: 0, supply_t: { b1: 10.8 } }],
-      units: [{ id: 'b1', kind: 'boiler', hours_running: 3, starts: 0, hours_out_of_service: 0, hours_at_limit: {}, steam_t: 10.8, fuel_GJ: 3, power_MWh: 0 }],
+      annual: { hours: 3, cost: 300, start_up_cost: 0, cost_by_component: { fuel: 300, power: 0, steam: 0, water: 0, carbon: 0 }, fuel_GJ: 3, steam_raised_t: 10.8, process_steam_t: 0, process_heat_GJ: 0, power_generated_MWh: 0, power_imported_MWh: 0.03, power_exported_MWh: 0, site_demand_MWh: 0, vented_t: 0, let_down_t: 0, makeup_t: 0, co2_t: 0 },
+      months: [{ month: 1, hours: 3, cost: 300, start_up_cost: 0, cost_by_component: { fuel: 300, power: 0, steam: 0, water: 0, carbon: 0 }, fuel_GJ: 3, steam_raised_t: 10.8, process_steam_t: 0, process_heat_GJ: 0, power_generated_MWh: 0, power_imported_MWh: 0.03, power_exported_MWh: 0, site_demand_MWh: 0, vented_t: 0, let_down_t: 0, makeup_t: 0, co2_t: 0, supply_t: { b1: 10.8 } }],
+      units: [{ id: 'b1', kind: 'boiler', hours_running: 3, starts: 0, start_up_cost: 0, hours_out_of_service: 0, hours_at_limit: {}, steam_t: 10.8, fuel_GJ: 3, power_MWh: 0 }],
       headers: [{ id: 'hp', name: 'HP', hours: 3, mean_per_t: 21, min_per_t: 20, p10_per_t: 20, median_per_t: 21, p90_per_t: 22, max_per_t: 22 }],
       failed: [], how: { neighbour: 0, full: 3, same_as_earlier: 0, one_pass: 0 },
     } as YearResult;

@@ -7,7 +7,7 @@ import type { Argv, CommandModule } from 'yargs';
 import type { BackendName } from '../../lp/index.js';
 import type { Plant } from '../../model/index.js';
 import { plantDisplayFormat, yearCsv, yearHtml, yearText } from '../../report/index.js';
-import { mergeParts, partText, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
+import { mergeParts, partText, ruledUnits, yearFingerprint, yearMeta, type PeriodRecord, type Shard, type YearResult } from '../../year/index.js';
 import { CliError, EXIT_PROBLEMS, EXIT_USAGE } from '../errors.js';
 import { loadCaseOrFail } from '../loadCaseOrFail.js';
 import { runYearWithProgress, yearInputOrFail } from '../yearRun.js';
@@ -129,6 +129,8 @@ export const yearCommand: CommandModule<object, YearArgs> = {
     else await planOutputs(inputs, [...(args.csv !== undefined && args.csv !== '' && args.csv !== '-' ? [{ option: '--csv', path: args.csv }] : []), ...(args.html !== undefined ? [{ option: '--html', path: args.html }] : []), { option: 'the summary', path: '-' }]);
     const loaded = await loadCaseOrFail(args.case);
     const { input, profilePath } = await yearInputOrFail(args.case, loaded.plant, { objective: args.objective ? OBJECTIVE_WORDS[args.objective] : undefined, backend: args.solver, block: args.block });
+    const ruled = ruledUnits(loaded.plant);
+    if (shard && ruled.length > 0) throw new CliError(`--shard: this year is solved as rolling windows (${ruled.map((unit) => unit.id).join(', ')} declare${ruled.length === 1 ? 's' : ''} switching rules), each window starting from the one before, so it cannot be split into shards; run it without --shard`, EXIT_USAGE);
     const run = await runYearWithProgress(input, { workers: args.workers, quiet: quietProgress(args), keepRecords: args.csv !== undefined || args.html !== undefined, ...(shard ? { shard } : {}) });
     if (shard) {
       const planned = await planOutputs([...inputs, { option: 'profile', path: profilePath }], [{ option: '--part', path: args.part! }]);
