@@ -18,6 +18,27 @@ import { setFlagsFromString } from 'node:v8';
 // STEAMWRIGHT_WASM_TIERING=1 keeps V8's default, for measuring.
 if (process.env.STEAMWRIGHT_WASM_TIERING !== '1') setFlagsFromString('--liftoff-only');
 
+const ABOUT = 'Industrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.';
+
+/** `steamwright --help` as yargs lays it out (no wrapping), from the command list alone. */
+function topLevelHelp(): string {
+  const usages = COMMAND_SUMMARIES.map((summary) => `steamwright ${summary.command}`);
+  const width = Math.max(...usages.map((usage) => usage.length)) + 2;
+  return [
+    'steamwright <command> [options]',
+    '',
+    ABOUT,
+    '',
+    'Commands:',
+    ...COMMAND_SUMMARIES.map((summary, at) => `  ${usages[at].padEnd(width)}${summary.describe}`),
+    '',
+    'Options:',
+    '  --help     Show help  [boolean]',
+    '  --version  Show version number  [boolean]',
+    '',
+  ].join('\n');
+}
+
 /** yargs reads a lone "-" as an unknown argument, not as an option's value ("--batch -" for stdin). */
 function joinStdinValues(argv: string[]): string[] {
   const joined: string[] = [];
@@ -66,10 +87,16 @@ export async function main(argv: string[]): Promise<number> {
     process.stdout.write(`${packageVersion()}\n`);
     return 0;
   }
+  // The top-level help is written here, not by yargs, whose loading alone
+  // takes longer than Node's start; a test keeps it equal to yargs's own.
+  if (!named && argv.length === 1 && argv[0] === '--help' && process.env.STEAMWRIGHT_YARGS_HELP !== '1') {
+    process.stdout.write(topLevelHelp());
+    return 0;
+  }
   const { default: yargs } = await import('yargs');
   const parser = yargs(joinNegativeValues(joinStdinValues(argv), BOOLEAN_FLAGS))
     .scriptName('steamwright')
-    .usage('$0 <command> [options]\n\nIndustrial steam-system planning: IAPWS-IF97 properties, plant cases, optimised steam balances.')
+    .usage(`$0 <command> [options]\n\n${ABOUT}`)
     .strict()
     .demandCommand(1, 'Name a command, for example: steamwright state --p "10 barg" --x 1')
     .recommendCommands()

@@ -11,11 +11,11 @@ export interface CliRun {
   stderr: string;
 }
 
-export function runCli(args: string[], options: { input?: string; cwd?: string } = {}): Promise<CliRun> {
+export function runCli(args: string[], options: { input?: string; cwd?: string; env?: Record<string, string> } = {}): Promise<CliRun> {
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, [binary, ...args], {
       cwd: options.cwd ?? projectRoot,
-      env: { ...process.env, FORCE_COLOR: '0', NO_COLOR: '1' },
+      env: { ...process.env, FORCE_COLOR: '0', NO_COLOR: '1', ...options.env },
     });
     let stdout = '';
     let stderr = '';
