@@ -87,6 +87,9 @@ export function yearHeadline(result: YearResult): string[] {
   lines.push(`On/off across periods: ${result.mode}; ${result.mode_note}.`);
   const solved = result.periods - result.failed.length;
   lines.push(`Solved ${solved} of ${result.periods} periods: ${result.how.full} by a full search, ${result.how.neighbour} from the period before's on/off choices and point, ${result.how.same_as_earlier} identical to an earlier period; ${result.how.one_pass} settled in one pass.`);
+  for (const window of result.unscheduled_windows ?? []) {
+    lines.push(`Warning: the rolling window's program found no schedule (${window.status}) for ${window.from} to ${window.to} (${window.periods} periods): each keeps its own optimum, so the start costs and minimum running and stopped hours may not hold there.`);
+  }
   if (!result.complete) lines.push(`Totals cover the ${whole(result.hours_solved)} h that solved, not the ${whole(result.hours)} h of the profile: ${result.failed.length} periods failed (listed below).`);
   return lines;
 }

@@ -10,7 +10,7 @@ export { periodRecord, trackedUnits, COMPONENTS, type PeriodRecord, type UnitSta
 export { solveBlock, blockTasks, BLOCK_PERIODS, type BlockTask, type BlockSettings } from './solveBlock.js';
 export { solveBlocks, type YearRunOptions } from './solveYear.js';
 export { YearAccumulator, type YearTotals, type EnergyTotals, type MonthTotals, type UnitYear, type HeaderYear, type FailedPeriod } from './yearTotals.js';
-export { runYear, yearMeta, yearFingerprint, shardBlocks, totalsOf, YearModeError, type YearInput, type YearMeta, type YearResult, type Shard } from './runYear.js';
+export { runYear, yearMeta, yearFingerprint, shardBlocks, totalsOf, YearModeError, type YearInput, type YearMeta, type YearResult, type Shard, type UnscheduledWindow } from './runYear.js';
 export { mergeParts, partText, PART_FORMAT, type PartFile, type MergeOutcome } from './parts.js';
 export { ruledUnits, heldPlant, type RuledUnit } from './switchingUnits.js';
 export { windowModel, type UnitHistory, type WayToRun, type WindowPeriod, type WindowModel } from './windowModel.js';

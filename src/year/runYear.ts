@@ -31,7 +31,18 @@ export interface YearMeta {
   block_periods: number;
 }
 
-export interface YearResult extends YearMeta, YearTotals {}
+/** A rolling window whose program found no schedule: its kept periods keep their own optimum, and the switching rules may not hold there. */
+export interface UnscheduledWindow {
+  from: string;
+  to: string;
+  periods: number;
+  status: string;
+}
+
+export interface YearResult extends YearMeta, YearTotals {
+  /** with rolling windows: the windows whose program found no schedule (empty when every one did) */
+  unscheduled_windows?: UnscheduledWindow[];
+}
 
 export interface YearInput {
   plant: Plant;
@@ -122,13 +133,17 @@ export async function runYear(input: YearInput, options: YearRunOptions & { keep
     const total = input.profile.labels.length;
     let done = 0;
     const [task] = blockTasks(input.profile, Math.max(1, total));
+    const unscheduled: UnscheduledWindow[] = [];
     await solveRolling(settings, task, windowOf(input), (block) => {
       for (const record of block) {
         accumulator.add(record);
         records?.push(record);
       }
-    }, () => options.onProgress?.(++done, total), options.onWindow);
-    return { result: { ...yearMeta(input), ...accumulator.totals() }, records };
+    }, () => options.onProgress?.(++done, total), (note) => {
+      if (!note.scheduled) unscheduled.push({ from: note.firstLabel, to: note.lastKeptLabel, periods: note.kept, status: note.status });
+      options.onWindow?.(note);
+    });
+    return { result: { ...yearMeta(input), ...accumulator.totals(), unscheduled_windows: unscheduled }, records };
   }
   const tasks = blockTasks(input.profile, input.blockPeriods ?? BLOCK_PERIODS);
   const chosen = options.shard ? tasks.slice(shardBlocks(tasks.length, options.shard).first, shardBlocks(tasks.length, options.shard).end) : tasks;

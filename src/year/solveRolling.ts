@@ -33,7 +33,13 @@ export interface WindowSize {
 export interface WindowNote {
   first: number;
   periods: number;
+  /** periods kept from this window, and the labels of the first and last of them */
+  kept: number;
+  firstLabel: string;
+  lastKeptLabel: string;
   status: string;
+  /** whether the window's program found a schedule; without one each kept period keeps its own optimum */
+  scheduled: boolean;
   /** objective of the window's program, and its solve time */
   objective: number | null;
   ms: number;
@@ -162,7 +168,7 @@ export async function solveRolling(settings: BlockSettings, task: BlockTask, siz
       records.push(withStartCost(record, units, slotOf, lastRunning, history));
       onPeriod?.();
     }
-    onWindow?.({ first: task.first + first, periods: end - first, status: result.status, objective: result.objective, ms: result.timeMs, changed });
+    onWindow?.({ first: task.first + first, periods: end - first, kept: keptEnd - first, firstLabel: task.labels[first], lastKeptLabel: task.labels[keptEnd - 1], status: result.status, scheduled: result.hasSolution, objective: result.objective, ms: result.timeMs, changed });
     for (let at = first; at < keptEnd; at += 1) solvedAt.delete(at);
     if (byInputs.size > 4 * (size.kept + size.overlap)) byInputs.clear();
     onRecords(records);

@@ -6,10 +6,11 @@
 // peaker's two states built from separate solves of each period with the
 // peaker held running and left out; start costs are in the totals to the cent.
 import { readFileSync } from 'node:fs';
-import { beforeAll, describe, expect, test } from 'vitest';
+import { beforeAll, describe, expect, test, vi } from 'vitest';
+import { createFakeBackend, highsBackend } from '../../src/lp/index.js';
 import type { Plant } from '../../src/model/index.js';
 import { plantResult, solvePlant } from '../../src/plant/index.js';
-import { displayFormat, yearCsv } from '../../src/report/index.js';
+import { displayFormat, yearCsv, yearText } from '../../src/report/index.js';
 import { COMPONENTS, periodPlant, runYear, switchingIssues, YearModeError, type PeriodRecord, type Profile, type YearInput, type YearResult } from '../../src/year/index.js';
 import { loadPlant, profileOf } from './helpers.js';
 
@@ -203,6 +204,32 @@ describe('rolling windows', () => {
     expect(minimumTimesHold(states)).toEqual([]);
     const independent = await dynamicProgramCost(SHAPE, out);
     expect(Math.abs(withOutage.result.annual.cost - independent)).toBeLessThan(1e-6 * independent);
+  });
+
+  test('a window whose program finds no schedule is named in the result, and its periods keep their own optimum', async () => {
+    expect(rolling.result.unscheduled_windows).toEqual([]);
+    // The window programs answer "infeasible" (as when a rule cannot be kept); every period's own solve is real.
+    const solve = highsBackend.solve.bind(highsBackend);
+    const refuse = createFakeBackend({ status: 'infeasible' });
+    const spy = vi.spyOn(highsBackend, 'solve').mockImplementation((model, options) => (model.name === 'window' ? refuse.solve(model, options) : solve(model, options)));
+    let refused: { result: YearResult; records: PeriodRecord[] };
+    try {
+      refused = await run({ plant, profile, profileFile: 'profile.csv', window: { kept: 12, overlap: 6 } });
+    } finally {
+      spy.mockRestore();
+    }
+    expect(refuse.calls.length).toBe(Math.ceil(SHAPE.length / 12));
+    expect(refused.result.unscheduled_windows).toEqual([
+      { from: profile.labels[0], to: profile.labels[11], periods: 12, status: 'infeasible' },
+      { from: profile.labels[12], to: profile.labels[23], periods: 12, status: 'infeasible' },
+      { from: profile.labels[24], to: profile.labels[35], periods: 12, status: 'infeasible' },
+      { from: profile.labels[36], to: profile.labels[37], periods: 2, status: 'infeasible' },
+    ]);
+    // Each period is then its own optimum: what the plant left to itself does, rules broken and all.
+    const free = loadPlant(plantText.replace(/    switching:\n(?: {6}.*\n)+/, ''));
+    const unruled = await run({ plant: free, profile: profileOf(free, profileText(SHAPE)), profileFile: 'profile.csv' });
+    expect(peakerStates(refused.result, refused.records).map((state) => state.running)).toEqual(peakerStates(unruled.result, unruled.records).map((state) => state.running));
+    expect(yearText(refused.result, displayFormat('si', 'EUR', 0.1013))).toContain(`Warning: the rolling window's program found no schedule (infeasible) for ${profile.labels[0]} to ${profile.labels[11]} (12 periods)`);
   });
 
   test('a year solved as rolling windows cannot be sharded', async () => {
