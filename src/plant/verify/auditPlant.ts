@@ -4,12 +4,12 @@
 import type { Plant } from '../../model/index.js';
 import { PropertyRangeError } from '../../properties/index.js';
 import { AuditStates } from './auditStates.js';
-import { Ledger, type RelationCheck } from './ledger.js';
+import { Ledger, type AuditStream, type RelationCheck } from './ledger.js';
 import { auditDeaerator, auditDeaeratorVent, auditFlashTanks, auditHeaders, auditLetdowns, auditUsers } from './network.js';
 import { auditPower } from './power.js';
 import { solvedPlantFromReports, type ReportedUnit, type SolvedPlant } from './solvedPlant.js';
 import { auditBoilers, auditFeedPumps } from './supplies.js';
-import { BALANCE_TOLERANCE, ENTROPY_TOLERANCE } from './tolerances.js';
+import { AUDIT_FLOOR_SHARE, BALANCE_TOLERANCE, ENTROPY_TOLERANCE } from './tolerances.js';
 import { auditTurbines } from './turbines.js';
 import { auditAbsorptionChillers, auditTrapGroups } from './chillersAndTraps.js';
 
@@ -75,6 +75,14 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
   const pumpShaft = auditFeedPumps(plant, solved, states, ledger);
   auditPower(plant, solved, ledger, turbinePower, pumpShaft);
 
+  // A unit that is off can carry the solver's round-off (flows of 1e-13 kg/s,
+  // even slightly negative); its balances are then noise. Each relative test
+  // is scaled to at least a share of the plant's largest stream figure.
+  const floor = (figure: (stream: AuditStream) => number): number => Math.max(AUDIT_FLOOR_SHARE * ledger.streams.reduce((largest, stream) => Math.max(largest, Math.abs(figure(stream))), 0), 1e-9);
+  const massFloor = floor((stream) => stream.m);
+  const energyFloor = floor((stream) => stream.m * stream.h);
+  const entropyFloor = floor((stream) => stream.m * stream.s);
+
   const units: UnitAudit[] = [];
   for (const volume of ledger.volumes.values()) {
     const into = ledger.into(volume.id);
@@ -93,9 +101,9 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
     }
     const hasStreams = into.length + outOf.length > 0;
     const massResidual = massIn - massOut;
-    const massRelative = Math.abs(massResidual) / Math.max(Math.abs(massIn), Math.abs(massOut), 1e-9);
+    const massRelative = Math.abs(massResidual) / Math.max(Math.abs(massIn), Math.abs(massOut), massFloor);
     const energyResidual = hasStreams && volume.energyCloses ? energyIn - energyOut : null;
-    const energyRelative = energyResidual === null ? null : Math.abs(energyResidual) / Math.max(Math.abs(energyIn), Math.abs(energyOut), 1e-9);
+    const energyRelative = energyResidual === null ? null : Math.abs(energyResidual) / Math.max(Math.abs(energyIn), Math.abs(energyOut), energyFloor);
     const generation = hasStreams ? entropy : null;
     const checks = ledger.checks.get(volume.id) ?? [];
     const problems = [...(broken.get(volume.id) ?? [])];
@@ -103,7 +111,7 @@ export function auditPlant(plant: Plant, solved: SolvedPlant): IndependentAudit 
     if (energyRelative !== null && energyResidual !== null && energyRelative > BALANCE_TOLERANCE) {
       problems.push(`energy does not close: ${energyResidual.toPrecision(3)} kW (${energyRelative.toExponential(2)} of the energy through it)`);
     }
-    if (generation !== null && generation < -ENTROPY_TOLERANCE * Math.max(entropyFlow, 1e-9)) {
+    if (generation !== null && generation < -ENTROPY_TOLERANCE * Math.max(entropyFlow, entropyFloor)) {
       problems.push(`entropy generation ${generation.toPrecision(3)} kW/K is negative: the second law forbids it`);
     }
     for (const check of checks) {

@@ -19,6 +19,17 @@ export const FUEL_CURVE_TOLERANCE = 1e-3;
  */
 export const ENTROPY_TOLERANCE = 1e-5;
 
+/**
+ * A unit's relative tests (mass, energy, entropy) are scaled to at least this
+ * share of the plant's largest stream figure (mass flow, energy flow, entropy
+ * flow). A unit that is off carries only the solver's round-off: flows near
+ * 1e-13 kg/s, even slightly below zero, were seen after warm starts, with
+ * "residuals" of 1e-14 kg/s and "entropy generation" of -1e-14 kW/K that say
+ * nothing about the plant. For the board mill (largest flow about 60 kg/s)
+ * the mass test then ignores residuals below about 6e-11 kg/s.
+ */
+export const AUDIT_FLOOR_SHARE = 1e-6;
+
 /** Terminals: where streams come from or go to outside the plant. */
 export const OUTSIDE = 'outside';
 export const ATMOSPHERE = 'atmosphere';

@@ -215,3 +215,24 @@ describe('auditPlant: the deaerator', () => {
     expect(auditPlant(plant, perturbed).failures.map((line) => line.split(':')[0])).toContain('deaerator');
   });
 });
+
+describe('auditPlant: round-off at a unit that is off', () => {
+  it('a stopped boiler carrying the solver\'s round-off passes; the same boiler with a real flow and no fuel fails', async () => {
+    const { loadCase } = await import('../../../src/model/index.js');
+    const loaded = await loadCase('cases/kestrel-bay-board-mill.yaml');
+    if (!loaded.ok) throw new Error('the mill should load');
+    const solved = solvedOf(await solve(loaded.plant));
+    const stopped = solved.boilers.find((boiler) => !boiler.running && boiler.steam === 0);
+    if (!stopped) throw new Error('the mill should leave a boiler off');
+    expect(auditPlant(loaded.plant, solved).ok).toBe(true);
+    // Seen after a warm-started solve: -4e-13 kg/s, inside HiGHS's feasibility tolerance.
+    const noise = structuredClone(solved);
+    noise.boilers.find((boiler) => boiler.id === stopped.id)!.steam = -4.073e-13;
+    const withNoise = auditPlant(loaded.plant, noise);
+    expect(withNoise.failures).toEqual([]);
+    // A thousandth of a kilogram a second with no fuel is not round-off.
+    const real = structuredClone(solved);
+    real.boilers.find((boiler) => boiler.id === stopped.id)!.steam = 1e-3;
+    expect(auditPlant(loaded.plant, real).failures.map((line) => line.split(':')[0])).toContain(stopped.id);
+  });
+});
