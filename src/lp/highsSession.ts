@@ -30,8 +30,8 @@ export class HighsSession {
   private constructor(
     private readonly highs: Highs,
     private readonly solver: HighsModel,
-    private readonly compiled: CompiledModel,
-    private readonly source: LinearModel,
+    private compiled: CompiledModel,
+    private source: LinearModel,
     private options: SolveOptions,
   ) {}
 
@@ -118,6 +118,37 @@ export class HighsSession {
     else if (declared.sense === '>=') this.setRowBounds(declared.name, bound, Number.POSITIVE_INFINITY);
     else if (declared.sense === '=') this.setRowBounds(declared.name, bound, bound);
     else throw new Error(`Row "${declared.name}" is ranged; use setRowBounds(row, lower, upper) for it.`);
+  }
+
+  /**
+   * Takes another model of the same structure (same columns, rows, matrix
+   * pattern and integrality: see structureKey) and changes in HiGHS only the
+   * costs, bounds and coefficients that differ, keeping the basis for a warm
+   * start. The caller vouches for the structure.
+   */
+  reload(model: LinearModel, compiled: CompiledModel, options: SolveOptions): void {
+    this.live();
+    const old = this.compiled;
+    const costColumns: number[] = [];
+    const costs: number[] = [];
+    for (let column = 0; column < compiled.colCost.length; column++) {
+      if (compiled.colCost[column] !== old.colCost[column]) {
+        costColumns.push(column);
+        costs.push(compiled.colCost[column]);
+      }
+      if (compiled.colLower[column] !== old.colLower[column] || compiled.colUpper[column] !== old.colUpper[column]) this.solver.changeColBounds(column, compiled.colLower[column], compiled.colUpper[column]);
+    }
+    if (costColumns.length > 0) this.solver.changeColsCost({ kind: 'set', indices: costColumns }, costs);
+    if (compiled.offset !== old.offset) this.solver.changeObjectiveOffset(compiled.offset);
+    for (let row = 0; row < compiled.rowLower.length; row++) {
+      if (compiled.rowLower[row] !== old.rowLower[row] || compiled.rowUpper[row] !== old.rowUpper[row]) this.solver.changeRowBounds(row, compiled.rowLower[row], compiled.rowUpper[row]);
+      for (let k = compiled.starts[row]; k < compiled.starts[row + 1]; k++) {
+        if (compiled.values[k] !== old.values[k]) this.solver.changeCoefficient(row, compiled.indices[k], compiled.values[k]);
+      }
+    }
+    this.compiled = copyCompiled(compiled);
+    this.source = model;
+    this.setOptions(options);
   }
 
   /** Solves the current state; the time limit applies to this run alone. */

@@ -9,7 +9,7 @@ export { checkPrimalFeasibility, defaultFeasibilityTolerance, type FeasibilityRe
 export type { SolveResult, SolveStatus, DualSource } from './result.js';
 export type { SolverBackend, SolveOptions } from './backend.js';
 export { getBackend, backendNames, type BackendName } from './getBackend.js';
-export { highsBackend } from './highsBackend.js';
+export { highsBackend, withModelReuse } from './highsBackend.js';
 export { HighsSession, openHighsSession, type SessionSolveOptions } from './highsSession.js';
 export { loadHighs, highsLoadTimeMs } from './highsLoader.js';
 export { highsStatusTable } from './highsStatus.js';

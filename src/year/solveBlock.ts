@@ -3,7 +3,7 @@
 // same function runs in a worker and in process, and a block always starts
 // cold, so a period's result depends only on its block: never on the number
 // of workers or shards.
-import { getBackend, type BackendName } from '../lp/index.js';
+import { getBackend, withModelReuse, type BackendName } from '../lp/index.js';
 import type { Objective, Plant } from '../model/index.js';
 import { solvePlant, type PassPoint, type PlantOutcome } from '../plant/index.js';
 import { periodPlant, PeriodPlantError } from './periodPlant.js';
@@ -32,7 +32,15 @@ export interface BlockSettings {
 /** Periods per block: a week of hours. */
 export const BLOCK_PERIODS = 168;
 
-export async function solveBlock(settings: BlockSettings, task: BlockTask, onPeriod?: () => void): Promise<PeriodRecord[]> {
+export function solveBlock(settings: BlockSettings, task: BlockTask, onPeriod?: () => void): Promise<PeriodRecord[]> {
+  // The block's periods are alike and solved in a fixed order, so HiGHS keeps
+  // each model structure from one period to the next (changed coefficients
+  // only, warm from the last basis); the block's result depends only on its
+  // own inputs, as the shards need.
+  return withModelReuse(() => solveBlockPeriods(settings, task, onPeriod));
+}
+
+async function solveBlockPeriods(settings: BlockSettings, task: BlockTask, onPeriod?: () => void): Promise<PeriodRecord[]> {
   const { plant: base, columns } = settings;
   const tracked = trackedUnits(base);
   const backend = getBackend(settings.backend ?? 'highs');

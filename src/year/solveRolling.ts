@@ -6,7 +6,7 @@
 // period under the start costs and minimum times. Only the window's first part
 // is kept; its last state carries into the next window. Every kept figure is
 // a converged, audited solve.
-import { getBackend } from '../lp/index.js';
+import { getBackend, withModelReuse } from '../lp/index.js';
 import type { Plant } from '../model/index.js';
 import { solvePlant, type PassPoint, type PlantOutcome } from '../plant/index.js';
 import { periodPlant, PeriodPlantError, withoutUnits } from './periodPlant.js';
@@ -59,7 +59,12 @@ interface PeriodWays {
   ways: Way[];
 }
 
-export async function solveRolling(settings: BlockSettings, task: BlockTask, size: WindowSize, onRecords: (records: PeriodRecord[]) => void, onPeriod?: () => void, onWindow?: (note: WindowNote) => void): Promise<void> {
+export function solveRolling(settings: BlockSettings, task: BlockTask, size: WindowSize, onRecords: (records: PeriodRecord[]) => void, onPeriod?: () => void, onWindow?: (note: WindowNote) => void): Promise<void> {
+  // One chain in a fixed order: HiGHS keeps each model structure between solves (see solveBlock).
+  return withModelReuse(() => solveWindows(settings, task, size, onRecords, onPeriod, onWindow));
+}
+
+async function solveWindows(settings: BlockSettings, task: BlockTask, size: WindowSize, onRecords: (records: PeriodRecord[]) => void, onPeriod?: () => void, onWindow?: (note: WindowNote) => void): Promise<void> {
   const { plant: base, columns } = settings;
   const objective = settings.objective ?? base.objective;
   const backend = getBackend(settings.backend ?? 'highs');
