@@ -9,6 +9,7 @@
 //   npm run bench:year -- 720 2190     chosen sizes
 //   npm run bench:year -- --workers 2  worker threads (default: one per core)
 //   npm run bench:year -- 720 --switching  boiler 1 with a start cost and minimum times (invented): rolling windows
+//   npm run bench:year -- 720 --compare-reuse  also each size with every model loaded afresh (STEAMWRIGHT_MODEL_REUSE=0), as a ratio
 import { spawn } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync, mkdirSync } from 'node:fs';
 import { availableParallelism, tmpdir } from 'node:os';
@@ -23,6 +24,7 @@ const workersAt = args.indexOf('--workers');
 const workers = workersAt >= 0 ? Number(args[workersAt + 1]) : availableParallelism();
 const sizes = args.filter((arg, at) => /^\d+$/.test(arg) && !(workersAt >= 0 && at === workersAt + 1)).map(Number);
 const switching = args.includes('--switching');
+const compareReuse = args.includes('--compare-reuse');
 const BOILER_1 = '    blowdown_to: blowdown_flash     # flashed, the vapour recovered to the LP header\n    can_switch_off: true\n';
 
 function peakKB(pid: number): number {
@@ -43,7 +45,7 @@ interface Run {
   mode: string;
 }
 
-async function run(periods: number): Promise<Run> {
+async function run(periods: number, reuse = true): Promise<Run> {
   const folder = mkdtempSync(path.join(tmpdir(), 'steamwright-year-bench-'));
   try {
     mkdirSync(path.join(folder, 'profiles'));
@@ -54,7 +56,7 @@ async function run(periods: number): Promise<Run> {
     }
     writeFileSync(path.join(folder, 'mill.yaml'), text);
     writeFileSync(path.join(folder, 'profiles', 'kestrel-bay-year.csv'), millProfileCsv({ hours: periods }));
-    const child = spawn(process.execPath, [cli, 'year', path.join(folder, 'mill.yaml'), '--json', '--workers', String(workers)], { stdio: ['ignore', 'pipe', 'inherit'] });
+    const child = spawn(process.execPath, [cli, 'year', path.join(folder, 'mill.yaml'), '--json', '--workers', String(workers)], { stdio: ['ignore', 'pipe', 'inherit'], env: { ...process.env, STEAMWRIGHT_MODEL_REUSE: reuse ? '1' : '0' } });
     let output = '';
     let peak = 0;
     child.stdout.setEncoding('utf8').on('data', (chunk: string) => (output += chunk));
@@ -80,6 +82,10 @@ for (const periods of sizes.length > 0 ? sizes : [720, 2190, 8760]) {
     `${String(periods).padStart(5)} periods  ${result.seconds.toFixed(1).padStart(7)} s  ${((result.seconds * 1000) / periods).toFixed(1).padStart(6)} ms/period  peak ${result.peakMB.toFixed(0).padStart(4)} MB  ` +
       `from neighbour ${((100 * result.how.neighbour) / Math.max(1, solved)).toFixed(1)} %, full search ${result.how.full}, identical ${result.how.same_as_earlier}, one pass ${result.how.one_pass} (${((100 * result.how.one_pass) / Math.max(1, solved)).toFixed(1)} %), failed ${result.failed}, ${result.mode}`,
   );
+  if (compareReuse) {
+    const fresh = await run(periods, false);
+    console.log(`${String(periods).padStart(5)} periods  ${fresh.seconds.toFixed(1).padStart(7)} s  every model loaded afresh: kept models take x${(result.seconds / fresh.seconds).toFixed(2)} of the time, peak ${fresh.peakMB.toFixed(0)} MB`);
+  }
 }
 if (runs.length > 1) {
   const first = runs[0];

@@ -97,6 +97,8 @@ function structureKey(compiled: CompiledModel): string {
  * fixed by the inputs (one block of periods), not across independent jobs.
  */
 export async function withModelReuse<T>(work: () => Promise<T>): Promise<T> {
+  // STEAMWRIGHT_MODEL_REUSE=0 solves each model afresh, for measuring (bench:year -- --compare-reuse).
+  if (process.env.STEAMWRIGHT_MODEL_REUSE === '0') return work();
   const pool = new ModelPool();
   try {
     return await reuse.run(pool, work);
