@@ -1,27 +1,9 @@
 // The reconciliation laid on the demo's solved result, as the HTML report's
 // balance diagram takes it.
-import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
-import { loadCase, resolveMeters } from '../../src/model/index.js';
-import { plantResult, solvePlant, streamNetwork } from '../../src/plant/index.js';
-import { meterStreams, parseReadings, reconcilePlant, reconciledDiagram } from '../../src/reconcile/index.js';
+import { reconciledDiagram } from '../../src/reconcile/index.js';
 import { balanceDiagram, displayFormat } from '../../src/report/index.js';
-
-const DEMO = 'cases/millbrook-creamery.yaml';
-const READINGS = 'cases/millbrook-creamery.readings.csv';
-
-async function demo() {
-  const loaded = await loadCase(DEMO);
-  if (!loaded.ok) throw new Error('demo does not load');
-  const solved = await solvePlant(loaded.plant);
-  if (!solved.ok) throw new Error('demo does not solve');
-  const network = streamNetwork(loaded.plant);
-  const { metered } = meterStreams(resolveMeters(readFileSync(DEMO, 'utf8')).meters, network);
-  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(metered.map(({ meter }) => meter.tag)));
-  if (!parsed.ok) throw new Error('demo readings do not parse');
-  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network);
-  return { plant: loaded.plant, network, result: plantResult(solved), outcome };
-}
+import { reconciledDemo as demo } from './helpers/reconciledDemo.js';
 
 describe('reconciledDiagram', () => {
   test('the demo: every solved stream carries its reconciled flow, and the suspect sits on the turbine inlet', async () => {

@@ -2,30 +2,10 @@
 // must put each estimate on its own stream: checked by the mass balance of
 // every header, recomputed here from the drawn streams alone, which closes
 // only if every flow sits where the reconciliation put it.
-import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
-import { loadCase, resolveMeters } from '../../src/model/index.js';
-import { plantResult, solvePlant, streamNetwork } from '../../src/plant/index.js';
-import { meterStreams, parseReadings, reconcilePlant } from '../../src/reconcile/index.js';
 import { plantDisplayFormat } from '../../src/report/index.js';
 import { reconciledDiagram } from '../../src/report/reconciledDiagram.js';
-
-const CASE = 'cases/millbrook-creamery.yaml';
-const READINGS = 'cases/millbrook-creamery.readings.csv';
-
-async function reconciledDemo() {
-  const loaded = await loadCase(CASE);
-  if (!loaded.ok) throw new Error('demo does not load');
-  const solved = await solvePlant(loaded.plant);
-  if (!solved.ok) throw new Error('demo does not solve');
-  const network = streamNetwork(loaded.plant);
-  const { meters } = resolveMeters(readFileSync(CASE, 'utf8'));
-  const { metered } = meterStreams(meters, network);
-  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(meters.map((meter) => meter.tag)), { from: null, to: null });
-  if (!parsed.ok) throw new Error('demo readings do not parse');
-  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network);
-  return { plant: loaded.plant, result: plantResult(solved), outcome };
-}
+import { reconciledDemo } from '../reconcile/helpers/reconciledDemo.js';
 
 describe('the diagram of reconciled flows', () => {
   test('each observable stream carries its estimate, and every header balances on the drawn flows', async () => {

@@ -5,6 +5,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, test } from 'vitest';
 import { caseWithProjects, evaluateChanges, findSavings, measureAsProject, mergeChanges, resolveMeasurePlants, solveBase, type SavingsResult } from '../../src/savings/index.js';
 import { load, solvedSaving } from './helpers/solvedSaving.js';
+import { caseOpening } from '../helpers/caseText.js';
 
 const creameryText = readFileSync(new URL('../../cases/millbrook-creamery.yaml', import.meta.url), 'utf8');
 const creamery = load(creameryText);
@@ -48,17 +49,7 @@ describe('savings on the creamery demo', () => {
 // An invented works with one planted vent: a back-pressure turbine that may
 // not pass less than 20 t/h exhausts into a low-pressure header that needs
 // about 11 t/h, so the rest is vented in every hour.
-const plantedVent = `format_version: 1
-name: Planted vent works (invented)
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.8 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 10 USD/GJ, basis: HHV, co2: 56 kg/GJ }
-power: { site_demand: 3 MW, import: { price: 120 USD/MWh, max: 10 MW } }
+const plantedVent = `${caseOpening({ name: 'Planted vent works (invented)', makeupCost: 0.8, fuelPrice: 10, co2: 56 })}power: { site_demand: 3 MW, import: { price: 120 USD/MWh, max: 10 MW } }
 headers:
   - { id: hp, pressure: 40 barg, state: controlled, temperature: 400 degC, venting: forbidden }
   - { id: lp, pressure: 3 barg, state: floating, venting: allowed }
@@ -127,17 +118,7 @@ describe('insulation repair', () => {
   // condensate back, fuel saved = loss saved / boiler efficiency, within the
   // deaerator's vent (0.1 % of feedwater) and the pump work.
   test('saves the fuel of the heat loss it ends: loss saved / boiler efficiency', async () => {
-    const text = `format_version: 1
-name: Bare pipe works (invented)
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.5 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 10 USD/GJ, basis: HHV, co2: 0 kg/GJ }
-power: { site_demand: 0 kW, import: { price: 100 USD/MWh, max: 5 MW } }
+    const text = `${caseOpening({ name: 'Bare pipe works (invented)', makeupCost: 0.5, fuelPrice: 10, co2: 0 })}power: { site_demand: 0 kW, import: { price: 100 USD/MWh, max: 5 MW } }
 headers:
   - { id: main, pressure: 10 barg, state: floating, venting: forbidden, heat_loss: 150 kW }
 boilers:

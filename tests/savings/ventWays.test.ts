@@ -10,18 +10,9 @@ import { saturatedLiquid, saturatedVapour, statePT, temperaturePH } from '../../
 import { findSavings, type MeasureResult } from '../../src/savings/index.js';
 import { expectClose } from '../helpers/expectClose.js';
 import { load, solvedSaving } from './helpers/solvedSaving.js';
+import { caseOpening } from '../helpers/caseText.js';
 
-const text = `format_version: 1
-name: Sprayed vent works (invented)
-site:
-  atmospheric_pressure: 101.325 kPa
-  ambient_temperature: 15 degC
-  makeup_water: { temperature: 15 degC, cost: 0.8 USD/t }
-  currency: USD
-  units: si
-fuels:
-  - { id: gas, price: 10 USD/GJ, basis: HHV, co2: 56 kg/GJ }
-power: { site_demand: 3 MW, import: { price: 120 USD/MWh, max: 10 MW } }
+const text = `${caseOpening({ name: 'Sprayed vent works (invented)', makeupCost: 0.8, fuelPrice: 10, co2: 56 })}power: { site_demand: 3 MW, import: { price: 120 USD/MWh, max: 10 MW } }
 headers:
   - { id: hp, pressure: 40 barg, state: controlled, temperature: 400 degC, venting: forbidden }
   - { id: lp, pressure: 3 barg, state: controlled, temperature: 150 degC, venting: allowed }

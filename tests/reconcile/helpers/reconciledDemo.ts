@@ -1,0 +1,23 @@
+// The creamery demo solved and its bundled readings reconciled: shared by the
+// tests of the reconciled diagram (the reconcile module's flows and the
+// report's drawing).
+import { readFileSync } from 'node:fs';
+import { loadCase, resolveMeters } from '../../../src/model/index.js';
+import { plantResult, solvePlant, streamNetwork } from '../../../src/plant/index.js';
+import { meterStreams, parseReadings, reconcilePlant } from '../../../src/reconcile/index.js';
+
+export const DEMO = 'cases/millbrook-creamery.yaml';
+export const READINGS = 'cases/millbrook-creamery.readings.csv';
+
+export async function reconciledDemo() {
+  const loaded = await loadCase(DEMO);
+  if (!loaded.ok) throw new Error('demo does not load');
+  const solved = await solvePlant(loaded.plant);
+  if (!solved.ok) throw new Error('demo does not solve');
+  const network = streamNetwork(loaded.plant);
+  const { metered } = meterStreams(resolveMeters(readFileSync(DEMO, 'utf8')).meters, network);
+  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(metered.map(({ meter }) => meter.tag)));
+  if (!parsed.ok) throw new Error('demo readings do not parse');
+  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network);
+  return { plant: loaded.plant, network, result: plantResult(solved), outcome };
+}
