@@ -91,12 +91,12 @@ export function savingsTables(result: SavingsResult, format: DisplayFormat): Rep
       id: 'roadmap',
       title: 'Roadmap: the measures that save money, applied in rank order, re-solved at each step',
       headings: ['step', 'measure added', 'capital so far', 'annual saving so far', 'added by this step', 'alone', 'NPV so far'],
-      rows: result.roadmap.map((step) => [
+      rows: result.roadmap.map((step, at) => [
         String(step.step),
         step.measure,
         money(format, step.capital),
         step.result.ok ? `${money(format, step.result.annual_saving)}/yr` : `not solved: ${step.result.reason}`,
-        money(format, step.incremental_saving),
+        addedByStep(step, at > 0 ? result.roadmap[at - 1] : null, format),
         money(format, step.standalone_saving),
         step.result.ok ? money(format, step.result.npv) : 'n/a',
       ]),
@@ -115,6 +115,19 @@ export function savingsTables(result: SavingsResult, format: DisplayFormat): Rep
     },
   ];
   return tables;
+}
+
+/**
+ * What a roadmap step adds; where that is next to nothing against what the
+ * measure saves alone, say so, and when the steps before leave more steam
+ * vented than today, that what it saves goes there.
+ */
+function addedByStep(step: SavingsResult['roadmap'][number], before: SavingsResult['roadmap'][number] | null, format: DisplayFormat): string {
+  const added = money(format, step.incremental_saving);
+  if (step.incremental_saving === null || step.standalone_saving === null || !(step.standalone_saving > 0) || step.incremental_saving > 0.01 * step.standalone_saving) return added;
+  const ventedMore = before?.result.ok ? -before.result.physical.vented_less_t_per_h : 0;
+  const vent = ventedMore > 0.01 ? `: they leave ${format.flow(ventedMore / 3.6)} more steam vented than today, and what it saves is vented too` : '';
+  return `${added} (next to nothing once the steps before are in${vent})`;
 }
 
 /** Each measure as the project a planner copies under `projects:` in the case, then edits. */

@@ -34,6 +34,22 @@ describe('savings output', async () => {
     expect(tables[5].title).toMatch(/screening estimate, -30 % to \+50 %/);
   });
 
+  test('a roadmap step that adds next to nothing says so, and says when the steps before leave steam vented', () => {
+    expect(savings.roadmap.length).toBeGreaterThan(1);
+    const changed = structuredClone(savings);
+    const [first, second] = changed.roadmap;
+    if (!first.result.ok) throw new Error('the first step should solve');
+    second.standalone_saving = 1000;
+    second.incremental_saving = 0;
+    first.result.physical.vented_less_t_per_h = -1.8;
+    const roadmap = savingsTables(changed, format).find((table) => table.id === 'roadmap')!;
+    expect(roadmap.rows[1][4]).toMatch(/^0 USD \(next to nothing once the steps before are in: they leave 1\.80 t\/h more steam vented than today, and what it saves is vented too\)$/);
+    first.result.physical.vented_less_t_per_h = 0;
+    expect(savingsTables(changed, format).find((table) => table.id === 'roadmap')!.rows[1][4]).toMatch(/^0 USD \(next to nothing once the steps before are in\)$/);
+    // As solved, this plant's steps each add a good part of what they save alone.
+    expect(savingsTables(savings, format).find((table) => table.id === 'roadmap')!.rows.some((row) => row[4].includes('next to nothing'))).toBe(false);
+  });
+
   test('the overlays load back into the case as projects', () => {
     const yaml = measureOverlaysYaml(savings);
     const reloaded = loadCaseText(`${text}${yaml}`, 'c.yaml');
