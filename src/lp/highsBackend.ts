@@ -67,9 +67,9 @@ class ModelPool {
     const session = await HighsSession.open(model, options);
     this.sessions.set(key, session);
     if (this.sessions.size > POOL_SIZE) {
-      const [oldest, session] = this.sessions.entries().next().value as [string, HighsSession];
+      const [oldest, evicted] = this.sessions.entries().next().value as [string, HighsSession];
       this.sessions.delete(oldest);
-      session.dispose();
+      evicted.dispose();
     }
     return session.solve({ warmStart: false });
   }
