@@ -20,6 +20,8 @@ export interface NetworkStream {
   p: number;
   /** specific enthalpy at the design point, kJ/kg */
   h: number;
+  /** heat with no mass (a makeup preheater's duty into the deaerator): in no mass balance, and no meter can name it */
+  heatOnly?: boolean;
 }
 
 export interface StreamNetwork {
@@ -53,7 +55,15 @@ export function streamNetwork(plant: Plant): StreamNetwork {
   const context = pass.context;
   const balance = new Set(context.nodes.keys());
   const ids = streamIds(context.streams);
-  const streams: NetworkStream[] = context.streams.map((stream, at) => ({ id: ids[at], from: TERMINALS.has(stream.from) ? ENVIRONMENT : stream.from, to: TERMINALS.has(stream.to) ? ENVIRONMENT : stream.to, kind: stream.kind, p: stream.p, h: stream.h }));
+  const streams: NetworkStream[] = context.streams.map((stream, at) => ({
+    id: ids[at],
+    from: TERMINALS.has(stream.from) ? ENVIRONMENT : stream.from,
+    to: TERMINALS.has(stream.to) ? ENVIRONMENT : stream.to,
+    kind: stream.kind,
+    p: stream.p,
+    h: stream.h,
+    ...(stream.flow.terms.size === 0 && stream.flow.constant === 0 ? { heatOnly: true } : {}),
+  }));
 
   // A unit conserves mass when its inflows less its outflows vanish term by term.
   const units = new Set<string>();

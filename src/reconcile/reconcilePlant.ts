@@ -66,6 +66,8 @@ export interface StreamResult {
   atBound: boolean;
   sigma: number | null;
   observable: boolean;
+  /** heat with no mass (a makeup preheater's duty): no flow to estimate */
+  heatOnly: boolean;
 }
 
 export interface SuspectResult {
@@ -110,6 +112,7 @@ export function balanceRows(network: StreamNetwork): BalanceRow[] {
   return network.nodes.map((node) => {
     const terms = new Map<number, number>();
     network.streams.forEach((stream, index) => {
+      if (stream.heatOnly) return; // heat with no mass: no flow to balance
       if (stream.to === node) terms.set(index, (terms.get(index) ?? 0) + 1);
       if (stream.from === node) terms.set(index, (terms.get(index) ?? 0) - 1);
     });
@@ -220,7 +223,8 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     const atBound = heldFinal.has(index);
     if (unbounded !== null && unbounded < -3 * (sigma ?? 0) - 1e-6) notes.push(`${stream.id} is estimated negative (${(unbounded * 3.6).toFixed(2)} t/h) beyond three standard deviations${atBound ? ' (reported at zero)' : ''}: a meter or the case's topology is likely wrong`);
     else if (atBound) notes.push(`${stream.id} is held at zero: the unbounded fit gives ${(unbounded! * 3.6).toFixed(3)} t/h, within its uncertainty of zero`);
-    return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: meterOf.get(index) ?? null, value, unbounded, atBound, sigma, observable: tested.final.observable[index] };
+    if (stream.heatOnly) return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: null, value: null, unbounded: null, atBound: false, sigma: null, observable: false, heatOnly: true };
+    return { id: stream.id, from: stream.from, to: stream.to, kind: stream.kind, meter: meterOf.get(index) ?? null, value, unbounded, atBound, sigma, observable: tested.final.observable[index], heatOnly: false };
   });
 
   return {

@@ -89,7 +89,7 @@ export function reconcileTables(outcome: ReconcileOutcome, system: UnitSystem): 
     id: 'streams',
     title: outcome.suspects.length === 0 ? 'Streams:' : 'Streams (suspect meters set aside):',
     headings: ['stream', 'meter', 'estimate', '95 % interval'],
-    rows: outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.observable ? `${flow(stream.value, system)}${stream.atBound ? ' *' : ''}` : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
+    rows: outcome.streams.map((stream) => [stream.id, stream.meter ?? '-', stream.heatOnly ? 'heat only, no flow' : stream.observable ? `${flow(stream.value, system)}${stream.atBound ? ' *' : ''}` : 'not observable', stream.observable && stream.sigma !== null ? `±${flow(stream.sigma * 1.96, system)}` : '-']),
   });
   return tables;
 }

@@ -37,6 +37,37 @@ describe('streamNetwork', () => {
     }
   });
 
+  test('a makeup preheater\'s heat is in no mass balance: it opens no path for mass, and the tank\'s liquid stays observable', async () => {
+    const creamery = readFileSync('cases/millbrook-creamery.yaml', 'utf8');
+    // Both boilers' blowdown flashed in a new tank; with and without a preheater on its liquid.
+    const tank = (preheater: boolean) => creamery
+      .replace('    blowdown_to: drain\n', '    blowdown_to: blowdown_tank\n')
+      .replace('    can_switch_off: true\n', '    can_switch_off: true\n    blowdown_to: blowdown_tank\n')
+      .replace('flash_tanks:\n', `flash_tanks:\n  - { id: blowdown_tank, pressure: 18 psig, vapour_to: lp, liquid_to: drain${preheater ? ', makeup_preheater: { leaving_temperature: 80 degF }' : ''} }\n`);
+    const { loadCaseText } = await import('../../src/model/index.js');
+    const reconciled = (text: string) => {
+      const loaded = loadCaseText(text, 'creamery.yaml');
+      if (!loaded.ok) throw new Error(loaded.issues.map((issue) => issue.message).join('; '));
+      const network = streamNetwork(loaded.plant);
+      const { metered, issues } = meterStreams(resolveMeters(text).meters, network);
+      expect(issues).toEqual([]);
+      // Every meter reads 1 klb/h: the figures do not matter here, only which flows the balances determine.
+      const readings = new Map<string, AveragedReading>(metered.map(({ meter }) => [meter.tag, { tag: meter.tag, value: 0.126, count: 1, line: 1, drift: null }]));
+      return { network, outcome: reconcilePlant(loaded.plant, metered, readings, {}, network) };
+    };
+    const plain = reconciled(tank(false));
+    const warmed = reconciled(tank(true));
+    const heat = warmed.network.streams.filter((stream) => stream.heatOnly);
+    expect(heat.map((stream) => stream.id)).toEqual(['blowdown_tank->deaerator:makeupHeat']);
+    const heatAt = warmed.network.streams.indexOf(heat[0]);
+    for (const row of balanceRows(warmed.network)) expect(row.terms.has(heatAt), row.name).toBe(false);
+    expect(warmed.outcome.streams[heatAt]).toMatchObject({ heatOnly: true, value: null, observable: false });
+    // Every flow stream is as observable as without the preheater: the heat opened no second way out of the tank.
+    const observable = (outcome: typeof plain.outcome) => new Map(outcome.streams.filter((stream) => !stream.heatOnly).map((stream) => [stream.id, stream.observable]));
+    expect(observable(warmed.outcome)).toEqual(observable(plain.outcome));
+    expect(observable(warmed.outcome).get('blowdown_tank->drain:flashLiquid')).toBe(true);
+  });
+
   test('readings equal to a solved balance are left as they are, and the unmetered flows come out as solved', async () => {
     const { plant, result } = await solved('cases/kestrel-bay-board-mill.yaml');
     const network = streamNetwork(plant);
