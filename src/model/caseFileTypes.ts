@@ -330,6 +330,8 @@ export interface FeedwaterPumpEntry {
   name?: string;
   efficiency: QuantityText;
   motor_efficiency?: QuantityText;
+  /** the other drive it could have in place of its own, for the savings drive measure */
+  alternative_drive?: AlternativeDriveEntry;
 }
 
 export interface DeaeratorEntry {

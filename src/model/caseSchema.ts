@@ -269,6 +269,7 @@ const defs: Record<string, Schema> = {
     id, name,
     efficiency: percent('hydraulic efficiency', '70 %'),
     motor_efficiency: percent('efficiency of its electric motor; leave out if only a turbine drives it', '95 %'),
+    alternative_drive: ref('alternativeDrive'),
   }, ['id', 'efficiency']),
   deaerator: object('the deaerator', {
     pressure: quantity('pressure', '0.3 barg', 'deaerator pressure'),

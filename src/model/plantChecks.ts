@@ -27,7 +27,7 @@ export function linkDrives(context: ResolveContext, plant: PlantParts): void {
     }
   }
   // An alternative drive replaces the installed one, so the installed one must be the other kind.
-  for (const machine of plant.machines) {
+  for (const machine of [...plant.machines, ...plant.deaerator.feedwaterPumps]) {
     const alternative = machine.alternativeDrive;
     if (!alternative) continue;
     const path = [...(context.ids.get(machine.id)?.path ?? []), 'alternative_drive'];

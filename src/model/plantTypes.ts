@@ -318,6 +318,9 @@ export interface FlashTank {
   makeupPreheater?: { leavingTemperature: number; leavingH: number };
 }
 
+/** A drive a machine or pump could have in place of its own: a motor, or a back-pressure turbine between two headers. */
+export type AlternativeDrive = { kind: 'motor'; efficiency: number } | { kind: 'turbine'; from: string; to: string; isentropicEfficiency: number };
+
 export interface FeedwaterPump {
   id: string;
   kind: 'feedwaterPump';
@@ -327,6 +330,8 @@ export interface FeedwaterPump {
   motor: { efficiency: number } | null;
   /** id of the turbine that can drive it, or null */
   turbine: string | null;
+  /** the other drive the case says it could have (for the savings drive measure), absent when none */
+  alternativeDrive?: AlternativeDrive;
 }
 
 export interface Deaerator {
@@ -363,7 +368,7 @@ export interface DrivenMachine {
    * (headers, isentropic efficiency) in place of its motor. Absent when the
    * case gives none.
    */
-  alternativeDrive?: { kind: 'motor'; efficiency: number } | { kind: 'turbine'; from: string; to: string; isentropicEfficiency: number };
+  alternativeDrive?: AlternativeDrive;
 }
 
 /**

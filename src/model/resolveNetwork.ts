@@ -1,7 +1,7 @@
 // Letdowns, process users, flash tanks, the deaerator and driven machines.
 import { saturatedLiquid, saturationTemperature, statePT } from '../properties/index.js';
 import type { CasePath } from './issue.js';
-import type { Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, Site, SteamUser } from './plantTypes.js';
+import type { AlternativeDrive, Deaerator, DrivenMachine, FeedwaterPump, FlashTank, Header, Letdown, LiquidDestination, Site, SteamUser } from './plantTypes.js';
 import type { ResolveContext } from './resolveContext.js';
 import { steamPressure } from './resolveHeaders.js';
 import { liquidDestination } from './resolveSupply.js';
@@ -164,8 +164,9 @@ export function resolveDeaerator(context: ResolveContext, headers: Map<string, H
   for (const { item, path: pumpPath } of context.entries([...path, 'feedwater_pumps'])) {
     const efficiency = context.fraction([...pumpPath, 'efficiency'], { zeroAllowed: false });
     const motor = motorOf(context, [...pumpPath, 'motor_efficiency']);
-    if (efficiency === undefined || motor === undefined || typeof item.id !== 'string') pumpsOk = false;
-    else pumps.push({ id: item.id, kind: 'feedwaterPump', pumpEfficiency: efficiency, motor, turbine: null });
+    const alternative = context.raw([...pumpPath, 'alternative_drive']) === undefined ? null : alternativeDrive(context, [...pumpPath, 'alternative_drive'], headers);
+    if (efficiency === undefined || motor === undefined || alternative === undefined || typeof item.id !== 'string') pumpsOk = false;
+    else pumps.push({ id: item.id, kind: 'feedwaterPump', pumpEfficiency: efficiency, motor, turbine: null, ...(alternative ? { alternativeDrive: alternative } : {}) });
   }
   const pumpWork = context.raw([...path, 'feedwater_pumps']) !== 'none';
   if (context.raw([...path, 'feedwater_pumps']) === undefined) {
@@ -188,8 +189,8 @@ export function resolveMachines(context: ResolveContext, headers: Map<string, He
   });
 }
 
-/** A machine's alternative drive: a motor, or a back-pressure turbine between two headers, down in pressure. */
-function alternativeDrive(context: ResolveContext, path: CasePath, headers: Map<string, Header>): DrivenMachine['alternativeDrive'] | undefined {
+/** A machine's or feedwater pump's alternative drive: a motor, or a back-pressure turbine between two headers, down in pressure. */
+function alternativeDrive(context: ResolveContext, path: CasePath, headers: Map<string, Header>): AlternativeDrive | undefined {
   // Both or neither of motor_efficiency and turbine_from: the schema says so.
   if ((context.raw([...path, 'motor_efficiency']) === undefined) === (context.raw([...path, 'turbine_from']) === undefined)) return undefined;
   if (context.raw([...path, 'motor_efficiency']) !== undefined) {

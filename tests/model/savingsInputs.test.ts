@@ -4,7 +4,7 @@
 // expected against what was found.
 import { describe, expect, test } from 'vitest';
 import { loadCaseText } from '../../src/model/index.js';
-import { issuesOf, starter } from './caseText.js';
+import { edited, issuesOf, starter } from './caseText.js';
 
 const withSection = (yaml: string): string => `${starter}\n${yaml}\n`;
 
@@ -110,6 +110,19 @@ describe('makeup preheater on a flash tank', () => {
   test('leaving at or below the makeup, or at or above the tank\'s saturation, it is refused with both figures', () => {
     expect(issuesOf(tank('drain', '10 degC'))).toMatch(/^case\.yaml:\d+:\d+ {2}flash_tanks\[0\]\.makeup_preheater\.leaving_temperature {2}leaving temperature 10 degC is not above the makeup water's 15\.00 degC; heat flows from the liquid to the makeup, so give a higher temperature$/m);
     expect(issuesOf(tank('drain', '140 degC'))).toMatch(/^case\.yaml:\d+:\d+ {2}flash_tanks\[0\]\.makeup_preheater\.leaving_temperature {2}leaving temperature 140 degC is not below the tank's saturation \(133\.7 degC at 2\.000 barg\); the exchanger cools the liquid, so give a lower temperature$/m);
+  });
+});
+
+describe('a feedwater pump\'s alternative drive', () => {
+  const pump = (alternative: string, motor = 'motor_efficiency: 95 %, '): string =>
+    edited(['  vent: 0.5 %\n', `  vent: 0.5 %\n  feedwater_pumps:\n    - { id: bfw1, efficiency: 70 %, ${motor}alternative_drive: ${alternative} }\n`]);
+  test('a turbine in place of its motor loads onto the pump', () => {
+    const result = loadCaseText(pump('{ turbine_from: hp, turbine_to: lp, isentropic_efficiency: 40 % }'), 'case.yaml');
+    expect(result.ok).toBe(true);
+    if (result.ok) expect(result.plant.deaerator.feedwaterPumps[0].alternativeDrive).toEqual({ kind: 'turbine', from: 'hp', to: 'lp', isentropicEfficiency: 0.4 });
+  });
+  test('a motor alternative on a pump that has a motor is refused at its place', () => {
+    expect(issuesOf(pump('{ motor_efficiency: 96 % }'))).toMatch(/^case\.yaml:\d+:\d+ {2}deaerator\.feedwater_pumps\[0\]\.alternative_drive\.motor_efficiency {2}bfw1 already has a motor \(motor_efficiency\); a motor alternative replaces a turbine drive, so leave it out or give a turbine alternative$/m);
   });
 });
 

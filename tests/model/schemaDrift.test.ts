@@ -36,7 +36,7 @@ const fieldLists: Record<string, Record<string, 'required' | 'optional'>> = {
   user: { id: 'required', name: 'optional', header: 'required', steam: 'optional', heat: 'optional', condensate: 'optional' } satisfies FieldList<Case.UserEntry>,
   flashTank: { id: 'required', name: 'optional', pressure: 'required', vapour_to: 'required', liquid_to: 'required', makeup_preheater: 'optional' } satisfies FieldList<Case.FlashTankEntry>,
   makeupPreheater: { leaving_temperature: 'required' } satisfies FieldList<Case.MakeupPreheaterEntry>,
-  feedwaterPump: { id: 'required', name: 'optional', efficiency: 'required', motor_efficiency: 'optional' } satisfies FieldList<Case.FeedwaterPumpEntry>,
+  feedwaterPump: { id: 'required', name: 'optional', efficiency: 'required', motor_efficiency: 'optional', alternative_drive: 'optional' } satisfies FieldList<Case.FeedwaterPumpEntry>,
   deaerator: { pressure: 'required', heating_steam: 'required', vent: 'required', feedwater_pumps: 'optional' } satisfies FieldList<Case.DeaeratorEntry>,
   machine: { id: 'required', name: 'optional', type: 'required', shaft_power: 'required', motor_efficiency: 'optional', alternative_drive: 'optional' } satisfies FieldList<Case.MachineEntry>,
   alternativeDrive: { motor_efficiency: 'optional', turbine_from: 'optional', turbine_to: 'optional', isentropic_efficiency: 'optional' } satisfies FieldList<Case.AlternativeDriveEntry>,

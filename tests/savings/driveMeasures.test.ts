@@ -6,8 +6,10 @@
 // steam is bought at a price and what the turbines exhaust is vented, so the
 // steam each drive takes is paid for at that price.
 import { describe, expect, test } from 'vitest';
-import { entropyRegion2, statePT, temperaturePSRegion2 } from '../../src/properties/index.js';
+import { plantResult, solvePlant } from '../../src/plant/index.js';
+import { entropyRegion2, saturatedLiquid, statePT, temperaturePSRegion2 } from '../../src/properties/index.js';
 import { findSavings, type MeasureResult } from '../../src/savings/index.js';
+import { caseOpening } from '../helpers/caseText.js';
 import { expectClose } from '../helpers/expectClose.js';
 import { load, solvedSaving } from './helpers/solvedSaving.js';
 
@@ -86,5 +88,66 @@ describe('drive measures', async () => {
   test('capital is the shaft power at the case\'s cost per kW', () => {
     expect(find('turbineDrive').capital).toBeCloseTo(300 * 400, 6);
     expect(find('motorDrive').capital).toBeCloseTo(200 * 150, 6);
+  });
+});
+
+// A feedwater pump with a motor whose case offers a turbine drive: the
+// pump's work follows the feedwater, so the drive is sized for the largest
+// pumping over the scenarios, and the changed plant buys none of the motor's
+// electricity. Invented plant; checks by IF97 apart from the solver.
+const pumpText = `${caseOpening({ name: 'Pump drive works (invented)', makeupCost: 0.5, fuelPrice: 8, co2: 0 })}power: { site_demand: 0 kW, import: { price: 150 USD/MWh, max: 5 MW } }
+headers:
+  - { id: hp, pressure: 40 barg, state: controlled, temperature: 400 degC, venting: forbidden }
+  - { id: lp, pressure: 3 barg, state: floating, venting: allowed }
+boilers:
+  - { id: boiler, header: hp, fuels: [gas], steam: { min: 5 t/h, max: 60 t/h }, outlet_temperature: 400 degC, efficiency: 85 %, blowdown: 2 %, can_switch_off: false }
+letdowns:
+  - { id: prv, from: hp, to: lp, capacity: 40 t/h }
+users:
+  - { id: process, header: lp, steam: 25 t/h, condensate: { return: 60 %, temperature: 90 degC, to: deaerator } }
+deaerator:
+  pressure: 0.3 barg
+  heating_steam: lp
+  vent: 0.1 %
+  feedwater_pumps:
+    - { id: bfw_pump, efficiency: 70 %, motor_efficiency: 94 %, alternative_drive: { turbine_from: hp, turbine_to: lp, isentropic_efficiency: 45 % } }
+scenarios:
+  - { id: winter, hours: 4000 }
+  - { id: summer, hours: 4000, changes: { users: [{ id: process, steam: 15 t/h }] } }
+`;
+
+describe('drive measures: a feedwater pump', async () => {
+  const loaded = load(pumpText);
+  const savings = await findSavings(pumpText, loaded.plant, loaded.variants, { workers: 1 });
+  const measure = savings.measures.find((entry) => entry.id === 'turbine_drive_bfw_pump');
+  const shaftOf = async (plant: typeof loaded.plant): Promise<number> => {
+    const outcome = await solvePlant(plant);
+    if (!outcome.ok) throw new Error(outcome.message);
+    return plantResult(outcome).units.find((unit) => unit.id === 'deaerator')!.values.pump_shaft_kW as number;
+  };
+
+  test('a turbine in place of the pump\'s motor: sized for the largest pumping, no motor electricity bought after, and two solves agree to the cent', async () => {
+    if (!measure) throw new Error(`no pump drive measure among ${savings.measures.map((entry) => entry.id).join(', ')}`);
+    if (!measure.result.ok) throw new Error(measure.result.reason);
+    expect(measure.changes).toMatchObject({ deaerator: { feedwater_pumps: [{ id: 'bfw_pump', motor_efficiency: null }] } });
+    const shafts = await Promise.all(loaded.variants.scenarios.map((scenario) => shaftOf(scenario.plant)));
+    expect(measure.capital).toBeCloseTo(Math.max(...shafts) * 400, 6);
+    // After the change no electricity goes to the pump: imports fall by each scenario's motor input, hours-weighted.
+    const motorMW = shafts.reduce((total, shaft) => total + shaft / 0.94 / 1000, 0) / shafts.length;
+    expectClose(measure.result.physical.imported_less_MW, motorMW, 1e-6, 'electricity no longer bought, MW');
+    expect(measure.result.annual_saving).toBeCloseTo(await solvedSaving(pumpText, measure.changes), 2);
+  });
+
+  test('the pump\'s shaft power is v dp x feedwater / efficiency, by IF97 apart from the solver', async () => {
+    const winter = loaded.variants.scenarios.find((scenario) => scenario.id === 'winter')!.plant;
+    const outcome = await solvePlant(winter);
+    if (!outcome.ok) throw new Error(outcome.message);
+    const result = plantResult(outcome);
+    // The boiler's feedwater: steam / (1 - blowdown share).
+    const feedwater = (result.units.find((unit) => unit.id === 'boiler')!.values.steam_kg_s as number) / (1 - 0.02);
+    // 0.3 barg and 40 barg at 101.325 kPa: 0.131325 and 4.101325 MPa.
+    const v = saturatedLiquid(0.131325).v;
+    const shaft = (v * (4.101325 - 0.131325) * 1000 * feedwater) / 0.7;
+    expectClose(result.units.find((unit) => unit.id === 'deaerator')!.values.pump_shaft_kW as number, shaft, 1e-9, 'pump shaft kW');
   });
 });
