@@ -2,7 +2,7 @@ import { describe, expect, test } from 'vitest';
 import { loadHighs } from '../../src/lp/index.js';
 import { reconcileBounded, reconcileLinear, type LinearProblem } from '../../src/reconcile/index.js';
 import { expectClose } from '../helpers/expectClose.js';
-import { balances, generateNetwork, readingsOf, seededRandom } from './helpers/generatedNetworks.js';
+import { balances, generateNetwork, leastSquaresLp, readingsOf, seededRandom } from './helpers/generatedNetworks.js';
 
 describe('reconcileBounded', () => {
   test('one node a = b + c: a small outlet driven negative is held at zero, and a and b meet at their weighted mean', () => {
@@ -44,12 +44,8 @@ describe('reconcileBounded', () => {
       const lower = unbounded.estimate.map((value) => (value === null ? null : 0));
       const { result, atBound } = reconcileBounded(problem, lower);
       held += atBound.length;
-      const linear = problem.readings.map((reading) => `${-2 * reading.value / reading.sigma ** 2} x${reading.variable}`).join(' + ').replace(/\+ -/g, '- ');
-      const quadratic = problem.readings.map((reading) => `${2 / reading.sigma ** 2} x${reading.variable} ^ 2`).join(' + ');
-      const rows = problem.balances.map((row, i) => ` b${i}: ${[...row.terms].map(([j, c]) => `${c >= 0 ? '+' : '-'} x${j}`).join(' ')} = 0`).join('\n');
       // Unobservable flows stay free, as the active-set method leaves them.
-      const free = lower.flatMap((bound, j) => (bound === null ? [` x${j} free`] : [])).join('\n');
-      const lp = `Minimize\n obj: ${linear} + [ ${quadratic} ] / 2\nSubject To\n${rows}\nBounds\n${free}\nEnd`;
+      const lp = leastSquaresLp(problem, (j) => lower[j] === null);
       const solved = highs.solve(lp);
       expect(solved.Status, `trial ${trial}`).toBe('Optimal');
       for (let j = 0; j < problem.variableCount; j++) {

@@ -3,7 +3,7 @@ import { describe, expect, test } from 'vitest';
 import { loadHighs } from '../../src/lp/index.js';
 import { reconcileLinear, type LinearProblem } from '../../src/reconcile/index.js';
 import { expectClose } from '../helpers/expectClose.js';
-import { balances, generateNetwork, observableByGraph, readingsOf, redundantByGraph, seededRandom } from './helpers/generatedNetworks.js';
+import { balances, generateNetwork, leastSquaresLp, observableByGraph, readingsOf, redundantByGraph, seededRandom } from './helpers/generatedNetworks.js';
 
 describe('reconcileLinear', () => {
   test('one node, all flows measured, matches the closed form', () => {
@@ -74,12 +74,7 @@ describe('reconcileLinear', () => {
       const network = generateNetwork(random, 3 + Math.floor(random() * 8), Math.floor(random() * 6), 0.7);
       const problem: LinearProblem = { variableCount: network.edges.length, balances: balances(network), readings: readingsOf(network, random) };
       const result = reconcileLinear(problem);
-      // minimise sum (x_i - y_i)^2 / s_i^2 = sum x_i^2 / s_i^2 - 2 y_i x_i / s_i^2 + const
-      const linear = problem.readings.map((reading) => `${-2 * reading.value / reading.sigma ** 2} x${reading.variable}`).join(' + ').replace(/\+ -/g, '- ');
-      const quadratic = problem.readings.map((reading) => `${2 / reading.sigma ** 2} x${reading.variable} ^ 2`).join(' + ');
-      const rows = problem.balances.map((row, i) => ` b${i}: ${[...row.terms].map(([j, c]) => `${c >= 0 ? '+' : '-'} x${j}`).join(' ')} = 0`).join('\n');
-      const free = Array.from({ length: problem.variableCount }, (_, j) => ` x${j} free`).join('\n');
-      const lp = `Minimize\n obj: ${linear} + [ ${quadratic} ] / 2\nSubject To\n${rows}\nBounds\n${free}\nEnd`;
+      const lp = leastSquaresLp(problem, () => true);
       const solved = highs.solve(lp);
       expect(solved.Status, `trial ${trial}`).toBe('Optimal');
       for (let j = 0; j < problem.variableCount; j++) {

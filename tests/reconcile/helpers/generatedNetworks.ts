@@ -1,6 +1,6 @@
 // Random flow networks for the reconciliation tests, from a seeded generator
 // so every run tests the same ones.
-import type { BalanceRow, Reading } from '../../../src/reconcile/index.js';
+import type { BalanceRow, LinearProblem, Reading } from '../../../src/reconcile/index.js';
 export { seededRandom } from '../../../src/seededRandom.js';
 import { seededRandom } from '../../../src/seededRandom.js';
 
@@ -101,4 +101,19 @@ export function redundantByGraph(network: GeneratedNetwork): boolean[] {
   const unmeasured = network.edges.filter((_, index) => !network.measured[index]);
   const find = components(network.nodes, unmeasured);
   return network.edges.map((edge, index) => network.measured[index] && find(edge.from) !== find(edge.to));
+}
+
+/**
+ * The weighted least-squares fit of a linear problem as an LP-format
+ * quadratic programme for HiGHS, the second solver the reconciliation is
+ * checked against: minimise sum (x_i - y_i)^2 / s_i^2, i.e. sum x_i^2 / s_i^2
+ * - 2 y_i x_i / s_i^2 (the constant dropped), subject to the balances. The
+ * variables `free(j)` says are free get no bound; the others are zero or more.
+ */
+export function leastSquaresLp(problem: LinearProblem, free: (variable: number) => boolean): string {
+  const linear = problem.readings.map((reading) => `${-2 * reading.value / reading.sigma ** 2} x${reading.variable}`).join(' + ').replace(/\+ -/g, '- ');
+  const quadratic = problem.readings.map((reading) => `${2 / reading.sigma ** 2} x${reading.variable} ^ 2`).join(' + ');
+  const rows = problem.balances.map((row, i) => ` b${i}: ${[...row.terms].map(([j, c]) => `${c >= 0 ? '+' : '-'} x${j}`).join(' ')} = 0`).join('\n');
+  const bounds = Array.from({ length: problem.variableCount }, (_, j) => j).filter(free).map((j) => ` x${j} free`).join('\n');
+  return `Minimize\n obj: ${linear} + [ ${quadratic} ] / 2\nSubject To\n${rows}\nBounds\n${bounds}\nEnd`;
 }
