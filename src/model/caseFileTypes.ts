@@ -371,7 +371,7 @@ export interface MeterEntry {
   tag: string;
   name?: string;
   unit: string;
-  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid' | 'temperature';
+  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid' | 'temperature' | 'power';
   to?: string;
   uncertainty: QuantityText;
   confidence?: QuantityText;

@@ -1,25 +1,26 @@
-// The case's flow meters, read with their positions so that a meter naming no
-// stream can be located by the reconciliation (which knows the streams).
+// The case's meters (flow meters, thermometers, power meters), read with their
+// positions so that a meter naming no stream or turbine can be located by the
+// reconciliation (which knows the streams).
 import type { CasePath, Issue } from './issue.js';
 import { makeIssue, parseYaml } from './yamlSource.js';
 import { ResolveContext } from './resolveContext.js';
 
 export type MeteredFlow = 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
 
-/** What a meter reads: a flow word, or `temperature` (a thermometer). */
-export type MeterMeasure = MeteredFlow | 'temperature';
+/** What a meter reads: a flow word, `temperature` (a thermometer) or `power` (a turbine's output). */
+export type MeterMeasure = MeteredFlow | 'temperature' | 'power';
 
 export interface Meter {
   tag: string;
   name: string;
-  /** unit, header, flash tank or deaerator whose stream it measures */
+  /** unit, header, flash tank or deaerator whose stream it measures; for a power meter, the turbine */
   unit: string;
   measures: MeterMeasure;
   /** the stream's other end, where the unit has several of that kind */
   to: string | null;
   /** expanded uncertainty as a fraction of the reading, or null */
   relativeUncertainty: number | null;
-  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K), or null */
+  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K; a power meter's in kW), or null */
   absoluteUncertainty: number | null;
   /** two-sided confidence of the stated uncertainty, e.g. 0.95 */
   confidence: number;
@@ -49,7 +50,7 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
       continue;
     }
     tags.set(tag, path);
-    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature');
+    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature' ? 'temperature' : item.measures === 'power' ? 'power' : 'flow');
     let confidence = 0.95;
     if (item.confidence !== undefined) {
       const value = context.quantity([...path, 'confidence'], 'percent');
@@ -75,11 +76,11 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
   return { meters, issues: context.issues };
 }
 
-function uncertaintyOf(context: ResolveContext, path: CasePath, thermometer: boolean): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
+function uncertaintyOf(context: ResolveContext, path: CasePath, reads: 'flow' | 'temperature' | 'power'): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
   const text = context.text(path);
   if (text === undefined) return null;
   const relative = /%\s*$/.test(text);
-  if (thermometer) {
+  if (reads === 'temperature') {
     // A share of a temperature depends on its scale (degC, K): only a difference means anything.
     if (relative) {
       context.error('uncertainty-kind', path, `expected a thermometer's uncertainty as a temperature difference such as "1 K" or "2 degF", found "${text}"`);
@@ -93,10 +94,10 @@ function uncertaintyOf(context: ResolveContext, path: CasePath, thermometer: boo
     }
     return { relativeUncertainty: null, absoluteUncertainty: value };
   }
-  const value = context.quantity(path, relative ? 'percent' : 'massFlow');
+  const value = context.quantity(path, relative ? 'percent' : reads === 'power' ? 'power' : 'massFlow');
   if (value === undefined) return null;
   if (!(value > 0)) {
-    context.error('uncertainty-not-positive', path, `expected an uncertainty above zero (such as "2 %" or "0.5 t/h"), found "${text}"`);
+    context.error('uncertainty-not-positive', path, `expected an uncertainty above zero (such as "2 %" or ${reads === 'power' ? '"20 kW"' : '"0.5 t/h"'}), found "${text}"`);
     return null;
   }
   return relative ? { relativeUncertainty: value, absoluteUncertainty: null } : { relativeUncertainty: null, absoluteUncertainty: value };

@@ -1,6 +1,7 @@
 // What each equipment kind gives the linear model. The builder loops over these
 // and never asks what kind a unit is.
 import type { BuildContext } from './context.js';
+import type { Stream } from './network.js';
 import type { PassSolution } from './passSolution.js';
 
 export interface UnitReport {
@@ -31,4 +32,16 @@ export interface UnitContribution {
   report(solution: PassSolution): UnitReport;
   /** Runs after every unit has built: for rows that need streams or loads declared by others. */
   finish?(context: BuildContext): void;
+  /**
+   * The power the unit makes, kW, as a linear function of the flows of streams
+   * it declared, at this pass's point and with the unit running: for
+   * reconciling a power meter against the unit's steam (see streamNetwork).
+   */
+  powerInFlows?(): PowerInFlows;
+}
+
+/** power = sum of coefficient x stream flow + constant, kW */
+export interface PowerInFlows {
+  terms: { stream: Stream; coefficient: number }[];
+  constant: number;
 }

@@ -30,6 +30,14 @@ export interface StreamNetwork {
   nodes: string[];
   /** units whose streams do not conserve mass in the model (taken as open to the environment) */
   openUnits: string[];
+  /**
+   * Each turbine's power, kW, running, as a linear function of its streams'
+   * flows (index into `streams`) at the design point's states: for a power
+   * meter. An isentropic stage's drop is taken at the case's header states,
+   * so on a header whose temperature floats the relation is the design
+   * point's, not the day's.
+   */
+  power: Map<string, { terms: Map<number, number>; constant: number }>;
 }
 
 const TERMINALS = new Set([ATMOSPHERE, DRAIN, MAKEUP, PROCESS]);
@@ -51,7 +59,8 @@ export function streamIds(streams: readonly { from: string; to: string; kind: st
 
 /** The streams of the plant's first pass (no solve needed: the topology does not depend on the point). */
 export function streamNetwork(plant: Plant): StreamNetwork {
-  const pass = buildPass(plant, contributionsOf(plant), { headerEnthalpy: initialHeaderEnthalpy(plant), previous: null, trust: new Map() }, plant.objective);
+  const contributions = contributionsOf(plant);
+  const pass = buildPass(plant, contributions, { headerEnthalpy: initialHeaderEnthalpy(plant), previous: null, trust: new Map() }, plant.objective);
   const context = pass.context;
   const balance = new Set(context.nodes.keys());
   const ids = streamIds(context.streams);
@@ -88,5 +97,17 @@ export function streamNetwork(plant: Plant): StreamNetwork {
     if (residual <= 1e-9 * Math.max(1, scale)) nodes.push(unit);
     else openUnits.push(unit);
   }
-  return { streams, nodes, openUnits };
+  const power = new Map<string, { terms: Map<number, number>; constant: number }>();
+  for (const unit of contributions) {
+    const relation = unit.powerInFlows?.();
+    if (!relation) continue;
+    const terms = new Map<number, number>();
+    for (const { stream, coefficient } of relation.terms) {
+      const index = context.streams.indexOf(stream);
+      if (index < 0) throw new Error(`unit ${unit.id} gave its power in a stream it did not declare`);
+      terms.set(index, (terms.get(index) ?? 0) + coefficient);
+    }
+    power.set(unit.id, { terms, constant: relation.constant });
+  }
+  return { streams, nodes, openUnits, power };
 }

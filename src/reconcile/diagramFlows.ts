@@ -26,12 +26,12 @@ export interface SuspectOnStream {
   tag: string;
   /** 1 for the first meter serial elimination set aside */
   rank: number;
-  /** the stream's id and ends, for marking it on the diagram */
+  /** the stream's id and ends, for marking it on the diagram (a meter on a header or a turbine: its id, as both ends) */
   stream: string;
   from: string;
   to: string;
   kind: string;
-  /** the reading less the value the other meters give it, kg/s */
+  /** the reading less the value the other meters give it, kg/s (K for a thermometer, kW for a power meter) */
   bias: number;
   biasSigma: number;
   /** meters the balances cannot tell apart from this one */
@@ -75,11 +75,14 @@ export function reconciledDiagram(result: PlantResult, outcome: ReconcileOutcome
       atBound: reconciled.atBound,
     };
   });
-  const streamOfMeter = new Map(outcome.meters.map((meter) => [meter.tag, meter.stream]));
+  const meterOf = new Map(outcome.meters.map((meter) => [meter.tag, meter]));
   const suspects: SuspectOnStream[] = outcome.suspects.map((suspect, index) => {
-    const id = streamOfMeter.get(suspect.tag)!;
-    const stream = streams.find((entry) => entry.id === id)!;
-    return { tag: suspect.tag, rank: index + 1, stream: id, from: stream.from, to: stream.to, kind: stream.kind, bias: suspect.bias, biasSigma: suspect.biasSigma, equivalent: suspect.equivalent };
+    const meter = meterOf.get(suspect.tag)!;
+    const stream = streams.find((entry) => entry.id === meter.stream);
+    // A thermometer on a header, or a power meter on a turbine, sits on no one
+    // stream: it is marked on that header or turbine itself.
+    const at = stream ?? { from: meter.stream, to: meter.stream, kind: meter.quantity };
+    return { tag: suspect.tag, rank: index + 1, stream: meter.stream, from: at.from, to: at.to, kind: at.kind, bias: suspect.bias, biasSigma: suspect.biasSigma, equivalent: suspect.equivalent };
   });
   const reconciledStreams: StreamResult[] = result.streams.map((stream, index) => ({ ...stream, mass_kg_s: streams[index].reconciled ?? stream.mass_kg_s }));
   return { streams, suspects, result: { ...result, streams: reconciledStreams } };

@@ -52,6 +52,12 @@ export interface EnergyProblem {
   flows: readonly Reading[];
   /** temperature readings, `variable` = point index, K */
   temperatures: readonly Reading[];
+  /**
+   * Further linear rows with variables of their own, numbered after the
+   * streams and the points (a turbine's power tied to its flows): their count,
+   * their rows and their readings, which come last in the linear problem.
+   */
+  extra?: { variables: number; rows: readonly BalanceRow[]; readings: readonly Reading[] };
 }
 
 export interface EnergyResult {
@@ -62,9 +68,10 @@ export interface EnergyResult {
   temperatures: (number | null)[];
   temperatureSigma: (number | null)[];
   /**
-   * The last pass: variables are the streams, then the points; its readings
-   * are the flow readings, then the temperature readings, in the problem's
-   * order; its global statistic and measurement tests are the reconciliation's.
+   * The last pass: variables are the streams, then the points, then the
+   * extra variables; its readings are the flow readings, then the temperature
+   * readings, then the extra readings, in the problem's order; its global
+   * statistic and measurement tests are the reconciliation's.
    */
   last: LinearResult;
   /** the last pass's linear problem (the linearisation at the estimate), for the tests and serial elimination */
@@ -93,7 +100,8 @@ export function reconcileWithEnergy(problem: EnergyProblem, settings: EnergySett
   const maxIterations = settings.maxIterations ?? 50;
   const streamCount = problem.streams.length;
   const pointCount = problem.points.length;
-  const readings: Reading[] = [...problem.flows, ...problem.temperatures.map((reading) => ({ ...reading, variable: streamCount + reading.variable }))];
+  const extra = problem.extra ?? { variables: 0, rows: [], readings: [] };
+  const readings: Reading[] = [...problem.flows, ...problem.temperatures.map((reading) => ({ ...reading, variable: streamCount + reading.variable })), ...extra.readings];
   const massRows = massBalances(problem);
 
   // Start: the mass-only reconciliation's flows, the temperature readings.
@@ -105,7 +113,7 @@ export function reconcileWithEnergy(problem: EnergyProblem, settings: EnergySett
   let last: LinearResult | null = null;
   let moved = '';
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
-    const linear: LinearProblem = { variableCount: streamCount + pointCount, balances: [...massRows, ...energyBalances(problem, flows, temperatures)], readings };
+    const linear: LinearProblem = { variableCount: streamCount + pointCount + extra.variables, balances: [...massRows, ...energyBalances(problem, flows, temperatures), ...extra.rows], readings };
     last = reconcileLinear(linear);
     const nextFlows = flows.map((value, j) => last!.estimate[j] ?? value);
     const nextTemperatures = temperatures.map((value, k) => last!.estimate[streamCount + k] ?? value);

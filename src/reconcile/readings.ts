@@ -2,8 +2,9 @@
 // series (a `time` column, several rows per tag) averaged over a window.
 //
 // Columns, by header name: tag, value, unit, and optionally time. Every row
-// that does not parse, names an unknown tag, has no unit, a unit that is not a
-// mass flow, or a negative flow is reported with its line, all at once.
+// that does not parse, names an unknown tag, has no unit, a unit that is not
+// the meter's quantity (a mass flow, a temperature, a power), or a negative
+// flow or power is reported with its line, all at once.
 import { parse } from 'csv-parse/sync';
 import { parseQuantity } from '../units/index.js';
 
@@ -14,11 +15,11 @@ export interface ReadingIssue {
 
 export interface AveragedReading {
   tag: string;
-  /** mean of the readings in the window, kg/s */
+  /** mean of the readings in the window, kg/s (a thermometer's in K, a power meter's in kW) */
   value: number;
   /** readings averaged */
   count: number;
-  /** for a series: mean of the second half less mean of the first half, kg/s */
+  /** for a series: mean of the second half less mean of the first half, in the reading's unit (kg/s, K or kW) */
   drift: number | null;
   /** first line of the tag in the file */
   line: number;
@@ -33,8 +34,12 @@ export interface ReadingsWindow {
 
 export type ReadingsResult = { ok: true; readings: Map<string, AveragedReading>; series: boolean; rows: number } | { ok: false; issues: ReadingIssue[] };
 
-/** `temperatureTags`: the thermometers among the known tags, read as temperatures (K inside) rather than flows. */
-export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, temperatureTags: ReadonlySet<string> = new Set()): ReadingsResult {
+/**
+ * `temperatureTags`: the thermometers among the known tags, read as
+ * temperatures (K inside); `powerTags`: the power meters, read as powers (kW
+ * inside); every other tag is a flow meter (kg/s inside).
+ */
+export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, temperatureTags: ReadonlySet<string> = new Set(), powerTags: ReadonlySet<string> = new Set()): ReadingsResult {
   const issues: ReadingIssue[] = [];
   let records: { record: string[]; info: { lines: number } }[];
   const skipped = (error: { message?: string; lines?: number } | undefined): undefined => {
@@ -81,15 +86,16 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       if ((window.from !== null && time < window.from) || (window.to !== null && time > window.to)) continue;
     }
     const thermometer = temperatureTags.has(tag);
+    const wattmeter = powerTags.has(tag);
     if (unit === '') {
-      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
+      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : wattmeter ? 'a power unit such as kW or MW' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
       continue;
     }
     if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(valueText)) {
       issues.push({ line, message: `value of ${tag}: expected a number, found "${valueText}"` });
       continue;
     }
-    const parsed = parseQuantity(`${valueText} ${unit}`, thermometer ? 'temperature' : 'massFlow');
+    const parsed = parseQuantity(`${valueText} ${unit}`, thermometer ? 'temperature' : wattmeter ? 'power' : 'massFlow');
     if (!parsed.ok) {
       issues.push({ line, message: `unit of ${tag}: ${parsed.message}` });
       continue;
@@ -98,7 +104,11 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       issues.push({ line, message: `reading of ${tag} is ${valueText} ${unit}; expected a water or steam temperature above 0 degC and below 800 degC (the IF97 range the balances use)` });
       continue;
     }
-    if (!thermometer && parsed.value < 0) {
+    if (wattmeter && parsed.value < 0) {
+      issues.push({ line, message: `reading of ${tag} is a negative power, "${valueText} ${unit}"; a turbine's power meter reads zero or more (a motoring generator is not modelled)` });
+      continue;
+    }
+    if (!thermometer && !wattmeter && parsed.value < 0) {
       issues.push({ line, message: `reading of ${tag} is a negative flow, "${valueText} ${unit}"; a flow meter reads zero or more (check the sign or the meter's direction)` });
       continue;
     }

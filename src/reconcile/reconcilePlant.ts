@@ -9,6 +9,7 @@ import { reconcileWithEnergy, type EnergyProblem } from './energyReconciliation.
 import { planThermometers, type Thermometer } from './thermometers.js';
 import type { BalanceRow, LinearProblem, LinearResult, Reading } from './linearReconciliation.js';
 import type { MeteredStream } from './meterStreams.js';
+import { POWER_SCALE, powerRow, type PowerMeter } from './powerMeters.js';
 import type { AveragedReading } from './readings.js';
 import { testReconciliation, type GlobalTest } from './serialElimination.js';
 import { coverageFactor } from './statistics.js';
@@ -18,11 +19,11 @@ export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 19
 export interface MeterResult {
   tag: string;
   name: string;
-  /** a flow meter (values in kg/s) or a thermometer (values in K, uncertainties in K) */
-  quantity: 'flow' | 'temperature';
-  /** the stream it reads; a thermometer on a header, the header */
+  /** a flow meter (values in kg/s), a thermometer (values in K, uncertainties in K) or a power meter (values in kW) */
+  quantity: 'flow' | 'temperature' | 'power';
+  /** the stream it reads; a thermometer on a header, the header; a power meter, its turbine */
   stream: string;
-  /** averaged reading, kg/s (K for a thermometer) */
+  /** averaged reading, kg/s (K for a thermometer, kW for a power meter) */
   measured: number;
   /** standard deviation of the reading, kg/s (stated uncertainty over its coverage factor) */
   sigma: number;
@@ -120,12 +121,17 @@ export function balanceRows(network: StreamNetwork): BalanceRow[] {
   });
 }
 
-export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), thermometers: readonly Thermometer[] = []): ReconcileOutcome {
+export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), thermometers: readonly Thermometer[] = [], power: readonly PowerMeter[] = []): ReconcileOutcome {
   const level = settings.level ?? 0.05;
   const notes: string[] = [];
   const read = metered.filter(({ meter }) => readings.has(meter.tag));
   const readThermometers = thermometers.filter((thermometer) => readings.has(thermometer.meter.tag) && fixesEnthalpy(thermometer, readings, []));
-  const unread = [...metered.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag), ...thermometers.filter((thermometer) => !readings.has(thermometer.meter.tag)).map((thermometer) => thermometer.meter.tag)];
+  const readPower = power.filter(({ meter }) => readings.has(meter.tag));
+  const unread = [
+    ...metered.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
+    ...thermometers.filter((thermometer) => !readings.has(thermometer.meter.tag)).map((thermometer) => thermometer.meter.tag),
+    ...power.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
+  ];
   const flowReadings: Reading[] = read.map(({ meter, stream }) => {
     const value = readings.get(meter.tag)!.value;
     return { variable: stream, value, sigma: readingSigma(meter, value) };
@@ -137,6 +143,17 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
   // the estimate. Without them, the mass balances alone.
   for (const thermometer of thermometers) if (readings.has(thermometer.meter.tag)) fixesEnthalpy(thermometer, readings, notes);
   const energyHeaders = energyHeadersOf(plant, network, readThermometers, notes);
+  // A power meter: one more variable, the turbine's power in MW, after the
+  // streams (and the temperature points), tied to the turbine's outflows.
+  const powerBase = streamCount + (energyHeaders.size > 0 ? readThermometers.length : 0);
+  const powerRows = readPower.map((meter, i) => powerRow(meter, powerBase + i));
+  const powerReadings: Reading[] = readPower.map(({ meter }, i) => {
+    const value = readings.get(meter.tag)!.value;
+    return { variable: powerBase + i, value: value * POWER_SCALE, sigma: readingSigma(meter, value) * POWER_SCALE };
+  });
+  if (readPower.length > 0) {
+    notes.push(`power meters (${readPower.map(({ meter }) => meter.tag).join(', ')}): each turbine's power tied to its outflows with it running, at the case's steam states (an isentropic section's drop at its header's design state, a Willans section's line); a flagged power meter may also mean the turbine's efficiency in the case is not the day's`);
+  }
   let problem: LinearProblem;
   if (energyHeaders.size > 0) {
     const pointOf = new Map<number, number>();
@@ -148,16 +165,19 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
       points: readThermometers.map((thermometer) => ({ id: thermometer.meter.tag, p: thermometer.p, guess: readings.get(thermometer.meter.tag)!.value })),
       flows: flowReadings,
       temperatures: readThermometers.map((thermometer, point) => ({ variable: point, value: readings.get(thermometer.meter.tag)!.value, sigma: readingSigma(thermometer.meter, 0) })),
+      extra: { variables: readPower.length, rows: powerRows, readings: powerReadings },
     };
     problem = reconcileWithEnergy(energyProblem).problem;
     notes.push(`energy balances written at ${[...energyHeaders].join(', ')} (IF97 enthalpies at the thermometers' temperatures, successive linearisation; the tests are made on the linearisation at the estimate)`);
   } else {
-    problem = { variableCount: streamCount, balances: balanceRows(network), readings: flowReadings };
+    problem = { variableCount: streamCount + readPower.length, balances: [...balanceRows(network), ...powerRows], readings: [...flowReadings, ...powerReadings] };
   }
   const tested = testReconciliation(problem, { level });
-  // Reading i of the problem: the flow meters, then the thermometers used.
+  // Reading i of the problem: the flow meters, then the thermometers used, then the power meters.
   const used = energyHeaders.size > 0 ? readThermometers : [];
-  const tagOf = (index: number): string => (index < read.length ? read[index].meter.tag : used[index - read.length].meter.tag);
+  const tagOf = (index: number): string => (index < read.length ? read[index].meter.tag : index < read.length + used.length ? used[index - read.length].meter.tag : readPower[index - read.length - used.length].meter.tag);
+  /** From the problem's units back to the report's: a power reading is in MW inside, kW out. */
+  const unitOf = (index: number): number => (index >= read.length + used.length ? 1 / POWER_SCALE : 1);
 
   for (const node of network.nodes) {
     const touching = network.streams.filter((stream) => stream.from === node || stream.to === node);
@@ -179,18 +199,23 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
 
   const suspectRank = new Map<number, number>();
   tested.suspects.forEach((suspect, rank) => suspectRank.set(suspect.reading, rank + 1));
-  const meterRows: { meter: Meter; variable: number; where: string; quantity: 'flow' | 'temperature' }[] = [
+  const meterRows: { meter: Meter; variable: number; where: string; quantity: 'flow' | 'temperature' | 'power' }[] = [
     ...read.map(({ meter, stream }) => ({ meter, variable: stream, where: network.streams[stream].id, quantity: 'flow' as const })),
     ...used.map((thermometer, point) => ({ meter: thermometer.meter, variable: streamCount + point, where: thermometer.meter.unit === thermometer.header ? thermometer.header : network.streams[thermometer.streams[0]].id, quantity: 'temperature' as const })),
+    ...readPower.map(({ meter, turbine }, i) => ({ meter, variable: powerBase + i, where: turbine, quantity: 'power' as const })),
   ];
   const meters: MeterResult[] = meterRows.map(({ meter, variable, where, quantity }, index) => {
+    const unit = unitOf(index);
     const result = tested.result.readings[index];
-    const reconciled = allBounded.result.estimate[variable] ?? result.reconciled;
+    const reconciled = (allBounded.result.estimate[variable] ?? result.reconciled) * unit;
     const reading = readings.get(meter.tag)!;
-    const sigma = problem.readings[index].sigma;
+    const sigma = problem.readings[index].sigma * unit;
     const stated = sigma * coverageFactor(meter.confidence);
     const unsteady = reading.drift !== null && Math.abs(reading.drift) > stated;
-    if (unsteady) notes.push(`${meter.tag} drifted ${quantity === 'flow' ? `${(reading.drift! * 3.6).toFixed(2)} t/h` : `${reading.drift!.toFixed(2)} K`} across the window, more than its stated uncertainty: the window may not be steady`);
+    if (unsteady) {
+      const drift = quantity === 'flow' ? `${(reading.drift! * 3.6).toFixed(2)} t/h` : quantity === 'power' ? `${(reading.drift! / 1000).toFixed(3)} MW` : `${reading.drift!.toFixed(2)} K`;
+      notes.push(`${meter.tag} drifted ${drift} across the window, more than its stated uncertainty: the window may not be steady`);
+    }
     return {
       tag: meter.tag,
       name: meter.name,
@@ -199,11 +224,11 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
       measured: reading.value,
       sigma,
       reconciled,
-      unbounded: result.reconciled,
+      unbounded: result.reconciled * unit,
       atBound: heldAll.has(variable),
-      reconciledSigma: result.sigma,
+      reconciledSigma: result.sigma * unit,
       adjustment: reconciled - reading.value,
-      adjustmentSigma: result.adjustmentSigma,
+      adjustmentSigma: result.adjustmentSigma * unit,
       redundant: result.redundant,
       statistic: result.statistic,
       flagged: tested.measurementFlagged.includes(index),
@@ -236,7 +261,7 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     global: tested.global,
     measurementCritical: tested.measurementCritical,
     vdi2048: { globalPassed: tested.vdi2048.globalPassed, critical: tested.vdi2048.critical, flagged: tested.vdi2048.flagged.map(tagOf) },
-    suspects: tested.suspects.map((suspect) => ({ tag: tagOf(suspect.reading), statistic: suspect.statistic, bias: suspect.bias, biasSigma: suspect.biasSigma, globalAfter: suspect.globalAfter, equivalent: suspect.equivalent.map(tagOf) })),
+    suspects: tested.suspects.map((suspect) => ({ tag: tagOf(suspect.reading), statistic: suspect.statistic, bias: suspect.bias * unitOf(suspect.reading), biasSigma: suspect.biasSigma * unitOf(suspect.reading), globalAfter: suspect.globalAfter, equivalent: suspect.equivalent.map(tagOf) })),
     unread,
     notes,
   };

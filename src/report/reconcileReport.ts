@@ -19,14 +19,21 @@ function flow(value: number | null, system: UnitSystem): string {
   return value === null ? '-' : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'massFlow', system, { digits: 4 });
 }
 
-/** A reading in the case's units: a flow, or a thermometer's temperature. */
-function reading(value: number, quantity: 'flow' | 'temperature', system: UnitSystem): string {
+/** A reading in the case's units: a flow, a thermometer's temperature or a power meter's power. */
+function reading(value: number, quantity: 'flow' | 'temperature' | 'power', system: UnitSystem): string {
+  if (quantity === 'power') return power(value, system);
   return quantity === 'flow' ? flow(value, system) : formatQuantity(value, 'temperature', system, { digits: 4 });
 }
 
-/** An adjustment or interval: a flow, or a temperature difference. */
-function difference(value: number, quantity: 'flow' | 'temperature', system: UnitSystem): string {
+/** An adjustment or interval: a flow, a temperature difference or a power. */
+function difference(value: number, quantity: 'flow' | 'temperature' | 'power', system: UnitSystem): string {
+  if (quantity === 'power') return power(value, system);
   return quantity === 'flow' ? flow(value, system) : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'temperatureDifference', system, { digits: 3 });
+}
+
+function power(value: number, system: UnitSystem): string {
+  // Round-off below a milliwatt is shown as zero.
+  return formatQuantity(Math.abs(value) < 1e-6 ? 0 : value, 'power', system, { digits: 4 });
 }
 
 const AT_BOUND_NOTE = '* held at zero: flows are zero or more, so the fit is bounded there; the tests and intervals are the unbounded fit\'s.';
@@ -149,7 +156,7 @@ export function reconcileSectionHtml(outcome: ReconcileOutcome, system: UnitSyst
   ].join('\n');
 }
 
-/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K), for spreadsheets. */
+/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K; a power meter's, `quantity` power, in kW), for spreadsheets. */
 export function reconcileCsv(outcome: ReconcileOutcome): string {
   const lines: string[] = [];
   lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound', 'quantity'].join(','));

@@ -79,7 +79,7 @@ describe('report sections from the year and the meters', () => {
     const folder = mkdtempSync(join(tmpdir(), 'steamwright-report-meters-'));
     const alone = await runCli(['reconcile', CREAMERY, '--readings', READINGS, '--json']);
     expect(alone.code).toBe(0);
-    const outcome = JSON.parse(alone.stdout) as { suspects: { tag: string }[]; meters: { tag: string; reconciled: number }[] };
+    const outcome = JSON.parse(alone.stdout) as { suspects: { tag: string }[]; meters: { tag: string; reconciled: number; quantity: string }[] };
     expect(outcome.suspects.length).toBeGreaterThan(0);
     const run = await runCli(['report', CREAMERY, '--readings', READINGS, '--out', join(folder, 'creamery.html')]);
     expect(run.stderr).toBe('');
@@ -100,11 +100,17 @@ describe('report sections from the year and the meters', () => {
     expect(metered.observable).toBe(true);
     const klb = (kgPerS: number): string => `${((kgPerS * 3600) / 453.59237).toPrecision(3)} klb/h`;
     expect(diagram).toContain(klb(metered.value!));
-    // Each reading's reconciled value, from reconcile --json (kg/s), in the case's klb/h to the report's digits.
+    // Each reading's reconciled value, from reconcile --json (kg/s; kW for the power meter), in the case's klb/h (kW) to the report's digits.
     const rows = [...html.matchAll(/<tr data-id="([^"]+)"><td>[^<]*<\/td><td class="num">([^<]*)<\/td><td class="num">([^<]*)<\/td>/g)];
+    expect(outcome.meters.map((meter) => meter.quantity)).toContain('power');
     for (const meter of outcome.meters) {
       const row = rows.find((match) => match[1] === meter.tag);
       expect(row, meter.tag).toBeDefined();
+      if (meter.quantity === 'power') {
+        expect(row![3]).toMatch(/ kW$/);
+        expect(Number.parseFloat(row![3])).toBeCloseTo(meter.reconciled, 1);
+        continue;
+      }
       const klbPerHour = (meter.reconciled * 3600) / 453.59237;
       expect(Number.parseFloat(row![3])).toBeCloseTo(klbPerHour, 1);
     }

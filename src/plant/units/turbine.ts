@@ -4,7 +4,8 @@ import { expr, term, type LinearExpression, type Variable } from '../../lp/index
 import type { Turbine, TurbineStage } from '../../model/index.js';
 import { saturatedLiquid, statePH, statePT } from '../../properties/index.js';
 import type { BuildContext } from '../context.js';
-import type { PointChange, UnitContribution, UnitReport } from '../contribution.js';
+import type { PointChange, PowerInFlows, UnitContribution, UnitReport } from '../contribution.js';
+import type { Stream } from '../network.js';
 import type { PassSolution } from '../passSolution.js';
 import { expandIsentropic } from '../physics/turbineStage.js';
 import { liquidNode } from './steamRaising.js';
@@ -22,6 +23,8 @@ export class TurbineContribution implements UnitContribution {
   private exhaustSlope: number[] = [];
   private inletMove: LinearExpression = expr();
   private stagePower: LinearExpression[] = [];
+  /** the stream each section's outflow leaves by, as declared this pass */
+  private outflows: Stream[] = [];
   /** each Willans point's last move, for damping */
   private readonly lastStep: number[];
   /** enthalpy drop per kg of each Willans section, from the previous pass's flow */
@@ -58,6 +61,7 @@ export class TurbineContribution implements UnitContribution {
 
     this.power = expr();
     this.stagePower = [];
+    this.outflows = [];
     turbine.stages.forEach((stage, k) => {
       const flow = this.sections[k];
       const next = this.sections[k + 1];
@@ -154,15 +158,38 @@ export class TurbineContribution implements UnitContribution {
         const inletH = k === 0 ? this.inletH : this.exhaustH[k - 1];
         const inletSlope = k === 0 ? 1 : this.exhaustSlope[k - 1];
         const energy = term(flow, inletH).addExpression(this.inletMove, context.pointValue(term(flow)) * inletSlope).addExpression(stagePower, -1 / this.overallEfficiency);
-        context.stream({ ...stream, energy });
+        this.outflows.push(context.stream({ ...stream, energy }));
       } else {
-        context.stream(stream);
+        this.outflows.push(context.stream(stream));
       }
     } else {
       // The condenser's condensate leaves as saturated liquid, to the deaerator unless the case says otherwise.
       const condensate = saturatedLiquid(stage.exhaust.pressure).h;
-      context.stream({ from: id, to: liquidNode(stage.exhaust.condensateTo), kind: 'condensate', flow: outflow, h: condensate, p: stage.exhaust.pressure });
+      this.outflows.push(context.stream({ from: id, to: liquidNode(stage.exhaust.condensateTo), kind: 'condensate', flow: outflow, h: condensate, p: stage.exhaust.pressure }));
     }
+  }
+
+  /**
+   * Power, running, in the outflows: section k carries every outflow from k
+   * on, so with power = sum a_k section_k - b (a_k the section's kW per kg/s:
+   * its drop at this pass's states times the mechanical and generator
+   * efficiencies, or a Willans slope; b the Willans intercepts), outflow j's
+   * coefficient is a_1 + ... + a_j. On a first pass the inlet does not move,
+   * so this is the pass's own power expression rewritten, exactly.
+   */
+  powerInFlows(): PowerInFlows {
+    let perFlow = 0;
+    let constant = 0;
+    const terms = this.turbine.stages.map((stage, k) => {
+      if (stage.performance.kind === 'willans') {
+        perFlow += stage.performance.slope;
+        constant -= stage.performance.intercept;
+      } else {
+        perFlow += this.drops[k] * this.overallEfficiency;
+      }
+      return { stream: this.outflows[k], coefficient: perFlow };
+    });
+    return { terms, constant };
   }
 
   /**

@@ -4,7 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { loadCase, resolveMeters } from '../../../src/model/index.js';
 import { plantResult, solvePlant, streamNetwork } from '../../../src/plant/index.js';
-import { meterStreams, parseReadings, reconcilePlant } from '../../../src/reconcile/index.js';
+import { meterStreams, parseReadings, powerMeters, reconcilePlant } from '../../../src/reconcile/index.js';
 
 export const DEMO = 'cases/millbrook-creamery.yaml';
 export const READINGS = 'cases/millbrook-creamery.readings.csv';
@@ -15,9 +15,12 @@ export async function reconciledDemo() {
   const solved = await solvePlant(loaded.plant);
   if (!solved.ok) throw new Error('demo does not solve');
   const network = streamNetwork(loaded.plant);
-  const { metered } = meterStreams(resolveMeters(readFileSync(DEMO, 'utf8')).meters, network);
-  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(metered.map(({ meter }) => meter.tag)));
+  const meters = resolveMeters(readFileSync(DEMO, 'utf8')).meters;
+  const { metered } = meterStreams(meters, network);
+  const power = powerMeters(meters, network).metered;
+  const powerTags = new Set(power.map(({ meter }) => meter.tag));
+  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(meters.map((meter) => meter.tag)), undefined, new Set(), powerTags);
   if (!parsed.ok) throw new Error('demo readings do not parse');
-  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network);
+  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network, [], power);
   return { plant: loaded.plant, network, result: plantResult(solved), outcome };
 }
