@@ -277,13 +277,13 @@ const defs: Record<string, Schema> = {
     vent: percent('vent as a share of feedwater', '0.5 %'),
     feedwater_pumps: { description: 'boiler feedwater pumps, or none to leave pump work out; when left out, pump work is counted at 100 % efficiency and bought as electricity', oneOf: [list('feedwaterPump', 'boiler feedwater pumps'), { const: 'none' }] },
   }, ['pressure', 'heating_steam', 'vent']),
-  meter: object('a flow meter on one stream, a thermometer on a header or a stream into one, or a power meter on a turbine, read by steamwright reconcile', {
+  meter: object('a flow meter on one stream, a thermometer on a header or a stream into one, a power meter on a turbine or a fuel meter on a fired boiler, read by steamwright reconcile', {
     tag: { type: 'string', pattern: '^[A-Za-z0-9][A-Za-z0-9_./-]*$', description: 'the meter tag as the readings file names it, unique among meters', examples: ['FT-101'] },
     name: text('what the meter is called on site'),
     unit: reference('id of the unit, header, flash tank or the deaerator whose stream it measures'),
-    measures: choice(['steam', 'feedwater', 'blowdown', 'condensate', 'letdown', 'spray', 'extraction', 'exhaust', 'vent', 'makeup', 'heating_steam', 'flash_vapour', 'flash_liquid', 'temperature', 'power'], 'which of its streams; temperature: a header\'s steam temperature (unit: the header), or that of a unit\'s stream into a header (to: the header); power: a turbine\'s output (unit: the turbine), at its generator terminals or, for a turbine that drives a machine, at its shaft'),
+    measures: choice(['steam', 'feedwater', 'blowdown', 'condensate', 'letdown', 'spray', 'extraction', 'exhaust', 'vent', 'makeup', 'heating_steam', 'flash_vapour', 'flash_liquid', 'temperature', 'power', 'fuel'], 'which of its streams; temperature: a header\'s steam temperature (unit: the header), or that of a unit\'s stream into a header (to: the header); power: a turbine\'s output (unit: the turbine), at its generator terminals or, for a turbine that drives a machine, at its shaft; fuel: a fired boiler\'s fuel as energy per hour on its fuel\'s heating-value basis (unit: the boiler)'),
     to: reference('the other end of the stream, where the unit has several of that kind (a turbine stage exhaust, a condensate return)'),
-    uncertainty: { type: 'string', pattern: QUANTITY_PATTERN, description: 'expanded uncertainty of a reading: as % of reading or as a flow for a flow meter, as a temperature difference for a thermometer, as % or a power for a power meter', examples: ['2 %', '0.5 t/h', '1 K', '20 kW'] },
+    uncertainty: { type: 'string', pattern: QUANTITY_PATTERN, description: 'expanded uncertainty of a reading: as % of reading or as a flow for a flow meter, as a temperature difference for a thermometer, as % or a power (energy per hour) for a power or fuel meter', examples: ['2 %', '0.5 t/h', '1 K', '20 kW'] },
     confidence: { type: 'string', pattern: QUANTITY_PATTERN, 'x-quantity': 'percent', description: 'two-sided confidence of the stated uncertainty; default 95 %', examples: ['95 %'] },
   }, ['tag', 'unit', 'measures', 'uncertainty']),
   machine: object('a machine a turbine may drive (pump, fan, compressor)', {

@@ -7,20 +7,20 @@ import { ResolveContext } from './resolveContext.js';
 
 export type MeteredFlow = 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
 
-/** What a meter reads: a flow word, `temperature` (a thermometer) or `power` (a turbine's output). */
-export type MeterMeasure = MeteredFlow | 'temperature' | 'power';
+/** What a meter reads: a flow word, `temperature` (a thermometer), `power` (a turbine's output) or `fuel` (a fired boiler's fuel, energy per hour). */
+export type MeterMeasure = MeteredFlow | 'temperature' | 'power' | 'fuel';
 
 export interface Meter {
   tag: string;
   name: string;
-  /** unit, header, flash tank or deaerator whose stream it measures; for a power meter, the turbine */
+  /** unit, header, flash tank or deaerator whose stream it measures; for a power meter, the turbine; for a fuel meter, the boiler */
   unit: string;
   measures: MeterMeasure;
   /** the stream's other end, where the unit has several of that kind */
   to: string | null;
   /** expanded uncertainty as a fraction of the reading, or null */
   relativeUncertainty: number | null;
-  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K; a power meter's in kW), or null */
+  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K; a power or fuel meter's in kW), or null */
   absoluteUncertainty: number | null;
   /** two-sided confidence of the stated uncertainty, e.g. 0.95 */
   confidence: number;
@@ -50,7 +50,7 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
       continue;
     }
     tags.set(tag, path);
-    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature' ? 'temperature' : item.measures === 'power' ? 'power' : 'flow');
+    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature' ? 'temperature' : item.measures === 'power' || item.measures === 'fuel' ? 'power' : 'flow');
     let confidence = 0.95;
     if (item.confidence !== undefined) {
       const value = context.quantity([...path, 'confidence'], 'percent');

@@ -38,6 +38,12 @@ export interface UnitContribution {
    * reconciling a power meter against the unit's steam (see streamNetwork).
    */
   powerInFlows?(): PowerInFlows;
+  /**
+   * The fuel the unit fires, kW, against the flow of one stream it declared
+   * (a boiler's steam), with the unit running, at this pass's point: for
+   * reconciling a fuel meter. Not linear: the reconciliation linearises it.
+   */
+  fuelOfSteam?(): { stream: Stream; fuel: (steam: number) => number };
 }
 
 /** power = sum of coefficient x stream flow + constant, kW */

@@ -38,6 +38,12 @@ export interface StreamNetwork {
    * point's, not the day's.
    */
   power: Map<string, { terms: Map<number, number>; constant: number }>;
+  /**
+   * Each fired boiler's fuel, kW on its fuel's heating-value basis, against
+   * its steam stream's flow (index into `streams`), running: the case's
+   * efficiency table at the design point's heat per kg; for a fuel meter.
+   */
+  fuel: Map<string, { steam: number; fuel: (steam: number) => number }>;
 }
 
 const TERMINALS = new Set([ATMOSPHERE, DRAIN, MAKEUP, PROCESS]);
@@ -109,5 +115,10 @@ export function streamNetwork(plant: Plant): StreamNetwork {
     }
     power.set(unit.id, { terms, constant: relation.constant });
   }
-  return { streams, nodes, openUnits, power };
+  const fuel = new Map<string, { steam: number; fuel: (steam: number) => number }>();
+  for (const unit of contributions) {
+    const curve = unit.fuelOfSteam?.();
+    if (curve) fuel.set(unit.id, { steam: context.streams.indexOf(curve.stream), fuel: curve.fuel });
+  }
+  return { streams, nodes, openUnits, power, fuel };
 }

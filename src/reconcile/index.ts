@@ -4,7 +4,7 @@ export { reconcileLinear, InconsistentBalancesError, type BalanceRow, type Linea
 export { testReconciliation, type GlobalTest, type Suspect, type TestSettings, type TestedReconciliation } from './serialElimination.js';
 export { globalCritical, globalPValue, sidakCritical, normalCritical, coverageFactor } from './statistics.js';
 export { meterStreams, type MeteredStream } from './meterStreams.js';
-export { powerMeters, powerRow, POWER_SCALE, type PowerMeter } from './powerMeters.js';
+export { fuelMeters, fuelRow, powerMeters, powerRow, steamForFuel, POWER_SCALE, type FuelMeter, type PowerMeter } from './powerMeters.js';
 export { parseReadings, type AveragedReading, type ReadingIssue, type ReadingsResult, type ReadingsWindow } from './readings.js';
 export { reconcilePlant, readingSigma, balanceRows, METHOD, type MeterResult, type ReconcileOutcome, type ReconcileSettings, type StreamResult, type SuspectResult } from './reconcilePlant.js';
 export { planThermometers, type Thermometer, type ThermometerPlan } from './thermometers.js';

@@ -4,7 +4,7 @@
 // Columns, by header name: tag, value, unit, and optionally time. Every row
 // that does not parse, names an unknown tag, has no unit, a unit that is not
 // the meter's quantity (a mass flow, a temperature, a power), or a negative
-// flow or power is reported with its line, all at once.
+// flow, power or fuel is reported with its line, all at once.
 import { parse } from 'csv-parse/sync';
 import { parseQuantity } from '../units/index.js';
 
@@ -15,7 +15,7 @@ export interface ReadingIssue {
 
 export interface AveragedReading {
   tag: string;
-  /** mean of the readings in the window, kg/s (a thermometer's in K, a power meter's in kW) */
+  /** mean of the readings in the window, kg/s (a thermometer's in K, a power or fuel meter's in kW) */
   value: number;
   /** readings averaged */
   count: number;
@@ -36,10 +36,11 @@ export type ReadingsResult = { ok: true; readings: Map<string, AveragedReading>;
 
 /**
  * `temperatureTags`: the thermometers among the known tags, read as
- * temperatures (K inside); `powerTags`: the power meters, read as powers (kW
- * inside); every other tag is a flow meter (kg/s inside).
+ * temperatures (K inside); `powerTags` and `fuelTags`: the power and fuel
+ * meters, read as powers (kW inside); every other tag is a flow meter (kg/s
+ * inside).
  */
-export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, temperatureTags: ReadonlySet<string> = new Set(), powerTags: ReadonlySet<string> = new Set()): ReadingsResult {
+export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, temperatureTags: ReadonlySet<string> = new Set(), powerTags: ReadonlySet<string> = new Set(), fuelTags: ReadonlySet<string> = new Set()): ReadingsResult {
   const issues: ReadingIssue[] = [];
   let records: { record: string[]; info: { lines: number } }[];
   const skipped = (error: { message?: string; lines?: number } | undefined): undefined => {
@@ -86,9 +87,10 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       if ((window.from !== null && time < window.from) || (window.to !== null && time > window.to)) continue;
     }
     const thermometer = temperatureTags.has(tag);
-    const wattmeter = powerTags.has(tag);
+    const fuelMeter = fuelTags.has(tag);
+    const wattmeter = powerTags.has(tag) || fuelMeter;
     if (unit === '') {
-      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : wattmeter ? 'a power unit such as kW or MW' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
+      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : fuelMeter ? 'an energy per hour such as MW, GJ/h or MMBtu/h' : wattmeter ? 'a power unit such as kW or MW' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
       continue;
     }
     if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(valueText)) {
@@ -105,7 +107,7 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       continue;
     }
     if (wattmeter && parsed.value < 0) {
-      issues.push({ line, message: `reading of ${tag} is a negative power, "${valueText} ${unit}"; a turbine's power meter reads zero or more (a motoring generator is not modelled)` });
+      issues.push({ line, message: fuelMeter ? `reading of ${tag} is a negative fuel rate, "${valueText} ${unit}"; a fuel meter reads zero or more` : `reading of ${tag} is a negative power, "${valueText} ${unit}"; a turbine's power meter reads zero or more (a motoring generator is not modelled)` });
       continue;
     }
     if (!thermometer && !wattmeter && parsed.value < 0) {

@@ -9,7 +9,7 @@ import { reconcileWithEnergy, type EnergyProblem } from './energyReconciliation.
 import { planThermometers, type Thermometer } from './thermometers.js';
 import type { BalanceRow, LinearProblem, LinearResult, Reading } from './linearReconciliation.js';
 import type { MeteredStream } from './meterStreams.js';
-import { POWER_SCALE, powerRow, type PowerMeter } from './powerMeters.js';
+import { fuelRow, POWER_SCALE, powerRow, steamForFuel, type FuelMeter, type PowerMeter } from './powerMeters.js';
 import type { AveragedReading } from './readings.js';
 import { testReconciliation, type GlobalTest } from './serialElimination.js';
 import { coverageFactor } from './statistics.js';
@@ -19,11 +19,11 @@ export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 19
 export interface MeterResult {
   tag: string;
   name: string;
-  /** a flow meter (values in kg/s), a thermometer (values in K, uncertainties in K) or a power meter (values in kW) */
-  quantity: 'flow' | 'temperature' | 'power';
-  /** the stream it reads; a thermometer on a header, the header; a power meter, its turbine */
+  /** a flow meter (values in kg/s), a thermometer (values in K, uncertainties in K), a power meter or a fuel meter (values in kW) */
+  quantity: 'flow' | 'temperature' | 'power' | 'fuel';
+  /** the stream it reads; a thermometer on a header, the header; a power meter, its turbine; a fuel meter, its boiler */
   stream: string;
-  /** averaged reading, kg/s (K for a thermometer, kW for a power meter) */
+  /** averaged reading, kg/s (K for a thermometer, kW for a power or fuel meter) */
   measured: number;
   /** standard deviation of the reading, kg/s (stated uncertainty over its coverage factor) */
   sigma: number;
@@ -121,16 +121,18 @@ export function balanceRows(network: StreamNetwork): BalanceRow[] {
   });
 }
 
-export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), thermometers: readonly Thermometer[] = [], power: readonly PowerMeter[] = []): ReconcileOutcome {
+export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), thermometers: readonly Thermometer[] = [], power: readonly PowerMeter[] = [], fuel: readonly FuelMeter[] = []): ReconcileOutcome {
   const level = settings.level ?? 0.05;
   const notes: string[] = [];
   const read = metered.filter(({ meter }) => readings.has(meter.tag));
   const readThermometers = thermometers.filter((thermometer) => readings.has(thermometer.meter.tag) && fixesEnthalpy(thermometer, readings, []));
   const readPower = power.filter(({ meter }) => readings.has(meter.tag));
+  const readFuel = fuel.filter(({ meter }) => readings.has(meter.tag));
   const unread = [
     ...metered.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
     ...thermometers.filter((thermometer) => !readings.has(thermometer.meter.tag)).map((thermometer) => thermometer.meter.tag),
     ...power.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
+    ...fuel.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
   ];
   const flowReadings: Reading[] = read.map(({ meter, stream }) => {
     const value = readings.get(meter.tag)!.value;
@@ -143,19 +145,30 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
   // the estimate. Without them, the mass balances alone.
   for (const thermometer of thermometers) if (readings.has(thermometer.meter.tag)) fixesEnthalpy(thermometer, readings, notes);
   const energyHeaders = energyHeadersOf(plant, network, readThermometers, notes);
-  // A power meter: one more variable, the turbine's power in MW, after the
-  // streams (and the temperature points), tied to the turbine's outflows.
+  // A power or fuel meter: one more variable, in MW, after the streams (and
+  // the temperature points), tied to the turbine's outflows or the boiler's
+  // steam.
   const powerBase = streamCount + (energyHeaders.size > 0 ? readThermometers.length : 0);
+  const fuelBase = powerBase + readPower.length;
   const powerRows = readPower.map((meter, i) => powerRow(meter, powerBase + i));
-  const powerReadings: Reading[] = readPower.map(({ meter }, i) => {
+  const unitReading = (meter: Meter, variable: number): Reading => {
     const value = readings.get(meter.tag)!.value;
-    return { variable: powerBase + i, value: value * POWER_SCALE, sigma: readingSigma(meter, value) * POWER_SCALE };
-  });
+    return { variable, value: value * POWER_SCALE, sigma: readingSigma(meter, value) * POWER_SCALE };
+  };
+  const extraReadings: Reading[] = [...readPower.map(({ meter }, i) => unitReading(meter, powerBase + i)), ...readFuel.map(({ meter }, i) => unitReading(meter, fuelBase + i))];
   if (readPower.length > 0) {
     notes.push(`power meters (${readPower.map(({ meter }) => meter.tag).join(', ')}): each turbine's power tied to its outflows with it running, at the case's steam states (an isentropic section's drop at its header's design state, a Willans section's line); a flagged power meter may also mean the turbine's efficiency in the case is not the day's`);
   }
-  let problem: LinearProblem;
-  if (energyHeaders.size > 0) {
+  if (readFuel.length > 0) {
+    notes.push(`fuel meters (${readFuel.map(({ meter }) => meter.tag).join(', ')}): each boiler's fuel tied to its steam by the case's efficiency table and the heat each kg of steam takes at the case's states (blowdown at the case's share), with it running, linearised at the estimate; a flagged fuel meter may also mean the boiler's efficiency is not the case's`);
+  }
+  if (energyHeaders.size > 0) notes.push(`energy balances written at ${[...energyHeaders].join(', ')} (IF97 enthalpies at the thermometers' temperatures, successive linearisation; the tests are made on the linearisation at the estimate)`);
+
+  /** The linear problem with each fuel row the tangent at its boiler's steam flow `fuelAt[i]`. */
+  const problemAt = (fuelAt: readonly number[]): LinearProblem => {
+    const extraRows = [...powerRows, ...readFuel.map((meter, i) => fuelRow(meter, fuelBase + i, fuelAt[i]))];
+    const extraCount = readPower.length + readFuel.length;
+    if (energyHeaders.size === 0) return { variableCount: streamCount + extraCount, balances: [...balanceRows(network), ...extraRows], readings: [...flowReadings, ...extraReadings] };
     const pointOf = new Map<number, number>();
     readThermometers.forEach((thermometer, point) => thermometer.streams.forEach((index) => pointOf.set(index, point)));
     const headerLoss = new Map(plant.headers.map((header) => [header.id, header.heatLoss]));
@@ -165,18 +178,34 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
       points: readThermometers.map((thermometer) => ({ id: thermometer.meter.tag, p: thermometer.p, guess: readings.get(thermometer.meter.tag)!.value })),
       flows: flowReadings,
       temperatures: readThermometers.map((thermometer, point) => ({ variable: point, value: readings.get(thermometer.meter.tag)!.value, sigma: readingSigma(thermometer.meter, 0) })),
-      extra: { variables: readPower.length, rows: powerRows, readings: powerReadings },
+      extra: { variables: extraCount, rows: extraRows, readings: extraReadings },
     };
-    problem = reconcileWithEnergy(energyProblem).problem;
-    notes.push(`energy balances written at ${[...energyHeaders].join(', ')} (IF97 enthalpies at the thermometers' temperatures, successive linearisation; the tests are made on the linearisation at the estimate)`);
-  } else {
-    problem = { variableCount: streamCount + readPower.length, balances: [...balanceRows(network), ...powerRows], readings: [...flowReadings, ...powerReadings] };
+    return reconcileWithEnergy(energyProblem).problem;
+  };
+  // The fuel rows by successive linearisation: from the steam each fuel
+  // reading implies, each tangent moved to the estimate until no estimate
+  // moves. At the fixed point the tangent is exact to first order, so the
+  // tests are those of the last pass (as for the energy balances).
+  const boilerMax = new Map(plant.boilers.map((boiler) => [boiler.id, boiler.steam.max]));
+  let fuelAt = readFuel.map((meter) => steamForFuel(meter, readings.get(meter.meter.tag)!.value, boilerMax.get(meter.boiler) ?? 1));
+  let problem = problemAt(fuelAt);
+  let tested = testReconciliation(problem, { level });
+  for (let pass = 1; readFuel.length > 0; pass++) {
+    const next = readFuel.map((meter, i) => tested.result.estimate[meter.steam] ?? fuelAt[i]);
+    if (next.every((value, i) => Math.abs(value - fuelAt[i]) <= FUEL_TOLERANCE * Math.max(1, Math.abs(value)))) break;
+    if (pass === FUEL_PASSES) {
+      notes.push(`the fuel rows did not settle in ${FUEL_PASSES} passes (a boiler's steam estimate kept moving across a corner of its efficiency table); the results are the last pass's`);
+      break;
+    }
+    fuelAt = next;
+    problem = problemAt(fuelAt);
+    tested = testReconciliation(problem, { level });
   }
-  const tested = testReconciliation(problem, { level });
-  // Reading i of the problem: the flow meters, then the thermometers used, then the power meters.
+  // Reading i of the problem: the flow meters, then the thermometers used, then the power meters, then the fuel meters.
   const used = energyHeaders.size > 0 ? readThermometers : [];
-  const tagOf = (index: number): string => (index < read.length ? read[index].meter.tag : index < read.length + used.length ? used[index - read.length].meter.tag : readPower[index - read.length - used.length].meter.tag);
-  /** From the problem's units back to the report's: a power reading is in MW inside, kW out. */
+  const unitTags = [...readPower.map(({ meter }) => meter.tag), ...readFuel.map(({ meter }) => meter.tag)];
+  const tagOf = (index: number): string => (index < read.length ? read[index].meter.tag : index < read.length + used.length ? used[index - read.length].meter.tag : unitTags[index - read.length - used.length]);
+  /** From the problem's units back to the report's: a power or fuel reading is in MW inside, kW out. */
   const unitOf = (index: number): number => (index >= read.length + used.length ? 1 / POWER_SCALE : 1);
 
   for (const node of network.nodes) {
@@ -199,10 +228,11 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
 
   const suspectRank = new Map<number, number>();
   tested.suspects.forEach((suspect, rank) => suspectRank.set(suspect.reading, rank + 1));
-  const meterRows: { meter: Meter; variable: number; where: string; quantity: 'flow' | 'temperature' | 'power' }[] = [
+  const meterRows: { meter: Meter; variable: number; where: string; quantity: MeterResult['quantity'] }[] = [
     ...read.map(({ meter, stream }) => ({ meter, variable: stream, where: network.streams[stream].id, quantity: 'flow' as const })),
     ...used.map((thermometer, point) => ({ meter: thermometer.meter, variable: streamCount + point, where: thermometer.meter.unit === thermometer.header ? thermometer.header : network.streams[thermometer.streams[0]].id, quantity: 'temperature' as const })),
     ...readPower.map(({ meter, turbine }, i) => ({ meter, variable: powerBase + i, where: turbine, quantity: 'power' as const })),
+    ...readFuel.map(({ meter, boiler }, i) => ({ meter, variable: fuelBase + i, where: boiler, quantity: 'fuel' as const })),
   ];
   const meters: MeterResult[] = meterRows.map(({ meter, variable, where, quantity }, index) => {
     const unit = unitOf(index);
@@ -213,7 +243,7 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     const stated = sigma * coverageFactor(meter.confidence);
     const unsteady = reading.drift !== null && Math.abs(reading.drift) > stated;
     if (unsteady) {
-      const drift = quantity === 'flow' ? `${(reading.drift! * 3.6).toFixed(2)} t/h` : quantity === 'power' ? `${(reading.drift! / 1000).toFixed(3)} MW` : `${reading.drift!.toFixed(2)} K`;
+      const drift = quantity === 'flow' ? `${(reading.drift! * 3.6).toFixed(2)} t/h` : quantity === 'power' || quantity === 'fuel' ? `${(reading.drift! / 1000).toFixed(3)} MW` : `${reading.drift!.toFixed(2)} K`;
       notes.push(`${meter.tag} drifted ${drift} across the window, more than its stated uncertainty: the window may not be steady`);
     }
     return {
@@ -288,6 +318,10 @@ function fixesEnthalpy(thermometer: Thermometer, readings: ReadonlyMap<string, A
 }
 
 const SATURATION_MARGIN = 2;
+
+/** Largest relative move of a boiler's steam (kg/s, at least 1) that ends the fuel rows' iteration, and the most passes. */
+const FUEL_TOLERANCE = 1e-9;
+const FUEL_PASSES = 30;
 
 /** The headers whose energy balance can be written with the thermometers that have readings. */
 function energyHeadersOf(plant: Plant, network: StreamNetwork, read: readonly Thermometer[], notes: string[]): Set<string> {

@@ -1,7 +1,7 @@
 // The reconciliation as text and CSV: every reading with its reconciled value,
 // uncertainty, adjustment and test statistic; the tests; the suspect meters;
 // the streams with their estimates. No computation here beyond formatting.
-import type { ReconcileOutcome } from '../reconcile/index.js';
+import type { MeterResult, ReconcileOutcome } from '../reconcile/index.js';
 import { formatQuantity, type UnitSystem } from '../units/index.js';
 import { csvCell } from './safeCells.js';
 import type { ReportTable } from './reportTables.js';
@@ -19,16 +19,23 @@ function flow(value: number | null, system: UnitSystem): string {
   return value === null ? '-' : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'massFlow', system, { digits: 4 });
 }
 
-/** A reading in the case's units: a flow, a thermometer's temperature or a power meter's power. */
-function reading(value: number, quantity: 'flow' | 'temperature' | 'power', system: UnitSystem): string {
+/** A reading in the case's units: a flow, a thermometer's temperature, a power meter's power or a fuel meter's fuel rate. */
+function reading(value: number, quantity: MeterResult['quantity'], system: UnitSystem): string {
+  if (quantity === 'fuel') return fuelRate(value, system);
   if (quantity === 'power') return power(value, system);
   return quantity === 'flow' ? flow(value, system) : formatQuantity(value, 'temperature', system, { digits: 4 });
 }
 
-/** An adjustment or interval: a flow, a temperature difference or a power. */
-function difference(value: number, quantity: 'flow' | 'temperature' | 'power', system: UnitSystem): string {
+/** An adjustment or interval: a flow, a temperature difference, a power or a fuel rate. */
+function difference(value: number, quantity: MeterResult['quantity'], system: UnitSystem): string {
+  if (quantity === 'fuel') return fuelRate(value, system);
   if (quantity === 'power') return power(value, system);
   return quantity === 'flow' ? flow(value, system) : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'temperatureDifference', system, { digits: 3 });
+}
+
+/** Fuel as energy per hour, as fuel is bought: GJ/h, or MMBtu/h in US units. */
+function fuelRate(value: number, system: UnitSystem): string {
+  return formatQuantity(Math.abs(value) < 1e-6 ? 0 : value, 'power', system, { digits: 4, unit: system === 'us' ? 'MMBtu/h' : 'GJ/h' });
 }
 
 function power(value: number, system: UnitSystem): string {
@@ -156,7 +163,7 @@ export function reconcileSectionHtml(outcome: ReconcileOutcome, system: UnitSyst
   ].join('\n');
 }
 
-/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K; a power meter's, `quantity` power, in kW), for spreadsheets. */
+/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K; a power or fuel meter's, `quantity` power or fuel, in kW), for spreadsheets. */
 export function reconcileCsv(outcome: ReconcileOutcome): string {
   const lines: string[] = [];
   lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound', 'quantity'].join(','));

@@ -167,7 +167,7 @@ const cases: HostileCase[] = [
   { title: 'reconcile: --write-case over the readings', args: ['reconcile', 'm.yaml', '--readings', 'r-good.csv', '--write-case', 'r-good.csv'], code: 2, says: /--write-case/, oneLine: true },
   { title: 'reconcile: a level of significance of 0', args: ['reconcile', 'm.yaml', '--readings', 'r-good.csv', '--level', '0'], code: 2, says: /--level: expected a level of significance above 0/, oneLine: true },
   { title: 'reconcile: a thermometer read in a flow unit', args: ['reconcile', 'm-tt.yaml', '--readings', 'r-tt.csv'], code: 1, says: /r-tt\.csv:3: unit of TT-1: [\s\S]*nothing was reconciled/ },
-  { title: 'reconcile: a thermometer\'s uncertainty as a share', args: ['reconcile', 'm-tt-pct.yaml', '--readings', 'r-good.csv'], code: 1, says: /m-tt-pct\.yaml:\d+:\d+ +meters\[19\]\.uncertainty +expected a thermometer's uncertainty as a temperature difference/ },
+  { title: 'reconcile: a thermometer\'s uncertainty as a share', args: ['reconcile', 'm-tt-pct.yaml', '--readings', 'r-good.csv'], code: 1, says: /m-tt-pct\.yaml:\d+:\d+ +meters\[20\]\.uncertainty +expected a thermometer's uncertainty as a temperature difference/ },
   { title: 'reconcile: a case without meters', args: ['reconcile', 'c.yaml', '--readings', 'r-good.csv'], code: 1, says: /the case has no meters/, oneLine: true },
 ];
 

@@ -22,7 +22,7 @@ describe('steamwright reconcile', () => {
   test('the demo: the global test rejects and serial elimination names the turbine inlet meter', async () => {
     const result = await runCli(['reconcile', DEMO, '--readings', READINGS]);
     expect(result.code).toBe(0);
-    expect(result.stdout).toMatch(/Global test: chi-square [\d.]+ on 4 degrees of freedom, critical 9\.49 at 5 %: rejected/);
+    expect(result.stdout).toMatch(/Global test: chi-square [\d.]+ on 5 degrees of freedom, critical 11\.07 at 5 %: rejected/);
     expect(result.stdout).toMatch(/ 1 {2}FT-111 /);
     expect(result.stdout).toMatch(/Not redundant, so not checked by any balance: FT-103, /);
     expect(result.stdout).toMatch(/ASME|licensed engineers/);
@@ -32,7 +32,7 @@ describe('steamwright reconcile', () => {
     const json = await runCli(['reconcile', DEMO, '--readings', READINGS, '--json']);
     expect(json.code).toBe(0);
     const outcome = JSON.parse(json.stdout) as { meters: { tag: string; statistic: number | null; redundant: boolean }[]; suspects: { tag: string; bias: number }[]; global: { dof: number } };
-    expect(outcome.meters).toHaveLength(19);
+    expect(outcome.meters).toHaveLength(20);
     expect(outcome.suspects[0].tag).toBe('FT-111');
     // The demo's turbine inlet reading is 15 % above the flow its readings file was drawn from (12.29 klb/h, invented).
     expect(outcome.suspects[0].bias * 3.6 / 0.45359237).toBeGreaterThan(1.0);
@@ -82,9 +82,9 @@ describe('steamwright reconcile', () => {
     expect(result.stdout).toBe('');
     expect(result.stderr).not.toMatch(STACK_FRAME);
     expect(result.stderr).toMatchInlineSnapshot(`
-      "plant.yaml:205:26  meters[0].unit  meter FT-101 names "boiler_z", which no stream of the plant starts or ends at; expected the id of a unit, header, flash tank or "deaerator"
-      plant.yaml:212:70  meters[7].uncertainty  expected an uncertainty above zero (such as "2 %" or "0.5 t/h"), found "0 %"
-      plant.yaml:216:54  meters[11].measures  meter FT-303: direct_injection has no spray stream; its streams are process from lp, condensate to environment
+      "plant.yaml:206:26  meters[0].unit  meter FT-101 names "boiler_z", which no stream of the plant starts or ends at; expected the id of a unit, header, flash tank or "deaerator"
+      plant.yaml:213:70  meters[7].uncertainty  expected an uncertainty above zero (such as "2 %" or "0.5 t/h"), found "0 %"
+      plant.yaml:217:54  meters[11].measures  meter FT-303: direct_injection has no spray stream; its streams are process from lp, condensate to environment
       steamwright: plant.yaml: 3 errors in the meters; nothing was reconciled
       "
     `);
@@ -135,11 +135,30 @@ describe('steamwright reconcile', () => {
     expect(below.stdout).toBe('');
   });
 
+  test('a fuel meter: one on a turbine is located; a fuel rate in a flow unit, or below zero, is located in the readings', async () => {
+    const onTurbine = readFileSync(DEMO, 'utf8').replace('{ tag: FQ-101, unit: boiler_a, measures: fuel,', '{ tag: FQ-101, unit: bptg, measures: fuel,');
+    const result = await runCli(['check', 'plant.yaml'], { cwd: workspace(onTurbine, readFileSync(READINGS, 'utf8')) });
+    expect(result.code).toBe(1);
+    expect(result.stderr).toMatch(/plant\.yaml:\d+:\d+ +meters\[19\]\.unit +fuel meter FQ-101 names "bptg", which is not a fired boiler; expected a fired boiler: "boiler_a", "boiler_b"/);
+    const readings = readFileSync(READINGS, 'utf8').replace('FQ-101,34.6,MMBtu/h', 'FQ-101,34.6,klb/h').replace('JT-111,238,kW', 'JT-111,-238,kW');
+    const run = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: workspace(readFileSync(DEMO, 'utf8'), readings) });
+    expect(run.code).toBe(1);
+    expect(run.stderr).not.toMatch(STACK_FRAME);
+    expect(run.stderr).toMatch(/readings\.csv:21: reading of JT-111 is a negative power[\s\S]*readings\.csv:22: unit of FQ-101: /);
+    const negative = readFileSync(READINGS, 'utf8').replace('FQ-101,34.6,MMBtu/h', 'FQ-101,-1,GJ/h');
+    const below = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: workspace(readFileSync(DEMO, 'utf8'), negative) });
+    expect(below.stderr).toContain('readings.csv:22: reading of FQ-101 is a negative fuel rate, "-1 GJ/h"; a fuel meter reads zero or more');
+  });
+
   test('the demo\'s generator meter: in the text in kW, in --json as quantity power, and checking the turbine\'s steam meters', async () => {
     const text = await runCli(['reconcile', DEMO, '--readings', READINGS]);
     expect(text.stdout).toMatch(/\n {2}JT-111 +238\.0 kW +[\d.]+ kW /);
     const json = JSON.parse((await runCli(['reconcile', DEMO, '--readings', READINGS, '--json'])).stdout) as { meters: { tag: string; quantity: string; stream: string; redundant: boolean; measured: number }[]; suspects: { tag: string; globalAfter: { passed: boolean } }[] };
     expect(json.meters.find((meter) => meter.tag === 'JT-111')).toMatchObject({ quantity: 'power', stream: 'bptg', redundant: true, measured: 238 });
+    // The gas meter reads energy per hour: 34.6 MMBtu/h in the file, kW in the JSON.
+    expect(json.meters.find((meter) => meter.tag === 'FQ-101')).toMatchObject({ quantity: 'fuel', stream: 'boiler_a', redundant: true });
+    expect(json.meters.find((meter) => meter.tag === 'FQ-101')!.measured).toBeCloseTo((34.6 * 1_055_055.85262) / 3600, 6);
+    expect(text.stdout).toMatch(/\n {2}FQ-101 +34\.60 MMBtu\/h /);
     // The power meter agrees with the exhaust meter, so the inlet meter is the one set aside, and then every test passes.
     expect(json.suspects.map((suspect) => suspect.tag)).toEqual(['FT-111']);
     expect(json.suspects[0].globalAfter.passed).toBe(true);

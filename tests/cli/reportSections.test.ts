@@ -100,15 +100,21 @@ describe('report sections from the year and the meters', () => {
     expect(metered.observable).toBe(true);
     const klb = (kgPerS: number): string => `${((kgPerS * 3600) / 453.59237).toPrecision(3)} klb/h`;
     expect(diagram).toContain(klb(metered.value!));
-    // Each reading's reconciled value, from reconcile --json (kg/s; kW for the power meter), in the case's klb/h (kW) to the report's digits.
+    // Each reading's reconciled value, from reconcile --json (kg/s; kW for the power and fuel meters), in the case's units to the report's digits.
     const rows = [...html.matchAll(/<tr data-id="([^"]+)"><td>[^<]*<\/td><td class="num">([^<]*)<\/td><td class="num">([^<]*)<\/td>/g)];
-    expect(outcome.meters.map((meter) => meter.quantity)).toContain('power');
+    expect(outcome.meters.map((meter) => meter.quantity)).toEqual(expect.arrayContaining(['power', 'fuel']));
     for (const meter of outcome.meters) {
       const row = rows.find((match) => match[1] === meter.tag);
       expect(row, meter.tag).toBeDefined();
       if (meter.quantity === 'power') {
         expect(row![3]).toMatch(/ kW$/);
         expect(Number.parseFloat(row![3])).toBeCloseTo(meter.reconciled, 1);
+        continue;
+      }
+      if (meter.quantity === 'fuel') {
+        // kW in the JSON, MMBtu/h (1 MMBtu = 1,055,055.85 kJ, IT Btu) on the page.
+        expect(row![3]).toMatch(/ MMBtu\/h$/);
+        expect(Number.parseFloat(row![3])).toBeCloseTo((meter.reconciled * 3600) / 1_055_055.85262, 1);
         continue;
       }
       const klbPerHour = (meter.reconciled * 3600) / 453.59237;

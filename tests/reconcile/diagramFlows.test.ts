@@ -45,15 +45,16 @@ describe('reconciledDiagram', () => {
   test('a suspect meter on no one stream (a power meter) is marked on its turbine', async () => {
     const { plant, network, result, outcome } = await demo();
     // The same readings with the generator meter at 300 kW and the inlet meter put right (12.3 klb/h).
-    const { meterStreams, parseReadings, powerMeters, reconcilePlant } = await import('../../src/reconcile/index.js');
+    const { fuelMeters, meterStreams, parseReadings, powerMeters, reconcilePlant } = await import('../../src/reconcile/index.js');
     const { resolveMeters } = await import('../../src/model/index.js');
     const { readFileSync } = await import('node:fs');
     const meters = resolveMeters(readFileSync('cases/millbrook-creamery.yaml', 'utf8')).meters;
     const power = powerMeters(meters, network).metered;
     const text = readFileSync('cases/millbrook-creamery.readings.csv', 'utf8').replace('JT-111,238,kW', 'JT-111,300,kW').replace('FT-111,14.14,klb/h', 'FT-111,12.30,klb/h');
-    const parsed = parseReadings(text, new Set(meters.map((meter) => meter.tag)), undefined, new Set(), new Set(power.map(({ meter }) => meter.tag)));
+    const fuel = fuelMeters(meters, network).metered;
+    const parsed = parseReadings(text, new Set(meters.map((meter) => meter.tag)), undefined, new Set(), new Set(power.map(({ meter }) => meter.tag)), new Set(fuel.map(({ meter }) => meter.tag)));
     if (!parsed.ok) throw new Error('readings do not parse');
-    const biased = reconcilePlant(plant, meterStreams(meters, network).metered, parsed.readings, {}, network, [], power);
+    const biased = reconcilePlant(plant, meterStreams(meters, network).metered, parsed.readings, {}, network, [], power, fuel);
     expect(biased.suspects[0]?.tag).toBe('JT-111');
     expect(outcome.suspects[0].tag).toBe('FT-111');
     const diagram = reconciledDiagram(result, biased);

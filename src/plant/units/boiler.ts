@@ -5,7 +5,8 @@ import type { FiredBoiler } from '../../model/index.js';
 import type { BuildContext } from '../context.js';
 import type { UnitContribution, UnitReport } from '../contribution.js';
 import type { PassSolution } from '../passSolution.js';
-import { fuelCurve } from '../pieces.js';
+import type { Stream } from '../network.js';
+import { efficiencyAt, fuelCurve } from '../pieces.js';
 import { declareSteamRaising, steamRaisingPoint } from './steamRaising.js';
 
 export class BoilerContribution implements UnitContribution {
@@ -17,6 +18,7 @@ export class BoilerContribution implements UnitContribution {
   private fuelShares: { fuel: string; variable: Variable }[] = [];
   private heatPerKg = 0;
   private convex = true;
+  private steamStream: Stream | null = null;
 
   constructor(private readonly boiler: FiredBoiler) {}
 
@@ -81,6 +83,7 @@ export class BoilerContribution implements UnitContribution {
     }
     this.fuel = fuel;
     declareSteamRaising(context, id, boiler.header, steam, boiler.outlet, probe, boiler.blowdownTo);
+    this.steamStream = context.streams.find((stream) => stream.from === id && stream.kind === 'steam') ?? null;
 
     this.fuelCost = expr();
     if (boiler.fuels.length === 1) {
@@ -96,6 +99,20 @@ export class BoilerContribution implements UnitContribution {
       });
       context.row(id, `${id}.fuel`, split.addExpression(fuel, -1), '=', 0);
     }
+  }
+
+  /**
+   * Fuel for a steam flow, running: steam x heat per kg (steam and its share
+   * of blowdown raised from feedwater, at this pass's states) over the
+   * efficiency the case's table gives at that load (outside the table, its
+   * end value). The model's own curve is this one's chords, within
+   * FUEL_CURVE_ACCURACY.
+   */
+  fuelOfSteam(): { stream: Stream; fuel: (steam: number) => number } {
+    if (!this.steamStream) throw new Error(`boiler ${this.boiler.id} has no steam stream to read its fuel against`);
+    const { efficiency, steam } = this.boiler;
+    const heatPerKg = this.heatPerKg;
+    return { stream: this.steamStream, fuel: (flow) => (flow * heatPerKg) / efficiencyAt(efficiency, flow / steam.max) };
   }
 
   report(solution: PassSolution): UnitReport {

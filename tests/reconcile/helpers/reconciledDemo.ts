@@ -4,7 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { loadCase, resolveMeters } from '../../../src/model/index.js';
 import { plantResult, solvePlant, streamNetwork } from '../../../src/plant/index.js';
-import { meterStreams, parseReadings, powerMeters, reconcilePlant } from '../../../src/reconcile/index.js';
+import { fuelMeters, meterStreams, parseReadings, powerMeters, reconcilePlant } from '../../../src/reconcile/index.js';
 
 export const DEMO = 'cases/millbrook-creamery.yaml';
 export const READINGS = 'cases/millbrook-creamery.readings.csv';
@@ -18,9 +18,10 @@ export async function reconciledDemo() {
   const meters = resolveMeters(readFileSync(DEMO, 'utf8')).meters;
   const { metered } = meterStreams(meters, network);
   const power = powerMeters(meters, network).metered;
-  const powerTags = new Set(power.map(({ meter }) => meter.tag));
-  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(meters.map((meter) => meter.tag)), undefined, new Set(), powerTags);
+  const fuel = fuelMeters(meters, network).metered;
+  const tags = (list: readonly { meter: { tag: string } }[]) => new Set(list.map(({ meter }) => meter.tag));
+  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(meters.map((meter) => meter.tag)), undefined, new Set(), tags(power), tags(fuel));
   if (!parsed.ok) throw new Error('demo readings do not parse');
-  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network, [], power);
+  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network, [], power, fuel);
   return { plant: loaded.plant, network, result: plantResult(solved), outcome };
 }
