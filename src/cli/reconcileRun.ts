@@ -5,7 +5,7 @@ import { open } from 'node:fs/promises';
 import { formatIssue, resolveMeters, type Issue, type Plant } from '../model/index.js';
 import { streamNetwork } from '../plant/index.js';
 import { PropertyRangeError } from '../properties/index.js';
-import { EnergyIterationError, InconsistentBalancesError, fuelMeters, meterStreams, parseReadings, planThermometers, powerMeters, readingSigma, reconcilePlant, type AveragedReading, type ReconcileOutcome } from '../reconcile/index.js';
+import { EnergyIterationError, InconsistentBalancesError, fuelMeters, meterStreams, parseReadings, planThermometers, powerMeters, pressureMeters, readingSigma, reconcilePlant, type AveragedReading, type ReadingKind, type ReconcileOutcome } from '../reconcile/index.js';
 import { CliError, EXIT_PROBLEMS } from './errors.js';
 
 /** A readings file larger than this is refused (a year of minute readings of 50 meters is some 30 MB). */
@@ -26,7 +26,8 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
   const plan = planThermometers(meters, network, plant);
   const power = powerMeters(meters, network);
   const fuel = fuelMeters(meters, network);
-  const caseIssues: Issue[] = [...meterIssues, ...streamIssues, ...plan.issues, ...power.issues, ...fuel.issues];
+  const pressure = pressureMeters(meters, plant);
+  const caseIssues: Issue[] = [...meterIssues, ...streamIssues, ...plan.issues, ...power.issues, ...fuel.issues, ...pressure.issues];
   if (meters.length === 0 && caseIssues.length === 0) throw new CliError(`${casePath}: the case has no meters; add a "meters:" list (tag, unit, measures, uncertainty) to reconcile`, EXIT_PROBLEMS);
   if (caseIssues.length > 0) {
     for (const issue of caseIssues.sort((a, b) => a.line - b.line)) say(formatIssue(issue, casePath));
@@ -35,16 +36,22 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
 
   const readingsText = (await readBounded(readingsPath, MAX_READINGS_BYTES)).toString('utf8');
   const window = { from: settings.from === undefined ? null : Date.parse(settings.from), to: settings.to === undefined ? null : Date.parse(settings.to) };
-  const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window, new Set(plan.thermometers.map((thermometer) => thermometer.meter.tag)), new Set(power.metered.map(({ meter }) => meter.tag)), new Set(fuel.metered.map(({ meter }) => meter.tag)));
+  const kinds = new Map<string, ReadingKind>([
+    ...plan.thermometers.map((thermometer) => [thermometer.meter.tag, 'temperature'] as const),
+    ...pressure.metered.map(({ meter }) => [meter.tag, 'pressure'] as const),
+    ...power.metered.map(({ meter }) => [meter.tag, 'power'] as const),
+    ...fuel.metered.map(({ meter }) => [meter.tag, 'fuel'] as const),
+  ]);
+  const parsed = parseReadings(readingsText, new Set(meters.map((meter) => meter.tag)), window, kinds, { atmosphericPressure_MPa: plant.site.atmosphericPressure });
   const readingProblems = parsed.ok ? [] : parsed.issues;
   if (parsed.ok && !parsed.series && (window.from !== null || window.to !== null)) {
     throw new CliError(`${readingsPath}: --from and --to choose a window of a series, but the file has no time column`, EXIT_PROBLEMS);
   }
   const readings: Map<string, AveragedReading> = parsed.ok ? parsed.readings : new Map();
-  for (const { meter } of [...metered, ...power.metered, ...fuel.metered]) {
+  for (const { meter } of [...metered, ...power.metered, ...fuel.metered, ...pressure.metered]) {
     const reading = readings.get(meter.tag);
     if (reading && !(readingSigma(meter, reading.value) > 0)) {
-      readingProblems.push({ line: reading.line, message: `reading of ${meter.tag} is zero and its uncertainty is a share of the reading, so it has none; give the meter an uncertainty as a ${meter.measures === 'power' || meter.measures === 'fuel' ? 'power (such as "20 kW")' : 'flow (such as "0.2 t/h")'}` });
+      readingProblems.push({ line: reading.line, message: `reading of ${meter.tag} is zero and its uncertainty is a share of the reading, so it has none; give the meter an uncertainty as a ${meter.measures === 'power' || meter.measures === 'fuel' ? 'power (such as "20 kW")' : meter.measures === 'pressure' ? 'pressure difference (such as "0.1 bar")' : 'flow (such as "0.2 t/h")'}` });
     }
   }
   if (readingProblems.length > 0) {
@@ -54,7 +61,7 @@ export async function reconcileFilesOrFail(casePath: string, readingsPath: strin
   if (readings.size === 0) throw new CliError(`${readingsPath}: no reading of any meter${window.from !== null || window.to !== null ? ' in the window --from/--to' : ''}; nothing was reconciled`, EXIT_PROBLEMS);
 
   try {
-    const outcome = reconcilePlant(plant, metered, readings, { level: settings.level }, network, plan.thermometers, power.metered, fuel.metered);
+    const outcome = reconcilePlant(plant, metered, readings, { level: settings.level }, network, { thermometers: plan.thermometers, pressure: pressure.metered, power: power.metered, fuel: fuel.metered });
     return { outcome, caseText };
   } catch (error) {
     // The energy balances can fail on the readings themselves: say which, never a stack trace.

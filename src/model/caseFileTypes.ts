@@ -371,7 +371,7 @@ export interface MeterEntry {
   tag: string;
   name?: string;
   unit: string;
-  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid' | 'temperature' | 'power' | 'fuel';
+  measures: 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid' | 'temperature' | 'pressure' | 'power' | 'fuel';
   to?: string;
   uncertainty: QuantityText;
   confidence?: QuantityText;

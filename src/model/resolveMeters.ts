@@ -4,23 +4,24 @@
 import type { CasePath, Issue } from './issue.js';
 import { makeIssue, parseYaml } from './yamlSource.js';
 import { ResolveContext } from './resolveContext.js';
+import { BAR_KPA, PSI_KPA } from '../units/exactFactors.js';
 
 export type MeteredFlow = 'steam' | 'feedwater' | 'blowdown' | 'condensate' | 'letdown' | 'spray' | 'extraction' | 'exhaust' | 'vent' | 'makeup' | 'heating_steam' | 'flash_vapour' | 'flash_liquid';
 
-/** What a meter reads: a flow word, `temperature` (a thermometer), `power` (a turbine's output) or `fuel` (a fired boiler's fuel, energy per hour). */
-export type MeterMeasure = MeteredFlow | 'temperature' | 'power' | 'fuel';
+/** What a meter reads: a flow word, `temperature` (a thermometer), `pressure` (a header's gauge), `power` (a turbine's output) or `fuel` (a fired boiler's fuel, energy per hour). */
+export type MeterMeasure = MeteredFlow | 'temperature' | 'pressure' | 'power' | 'fuel';
 
 export interface Meter {
   tag: string;
   name: string;
-  /** unit, header, flash tank or deaerator whose stream it measures; for a power meter, the turbine; for a fuel meter, the boiler */
+  /** unit, header, flash tank or deaerator whose stream it measures; for a pressure gauge, the header; for a power meter, the turbine; for a fuel meter, the boiler */
   unit: string;
   measures: MeterMeasure;
   /** the stream's other end, where the unit has several of that kind */
   to: string | null;
   /** expanded uncertainty as a fraction of the reading, or null */
   relativeUncertainty: number | null;
-  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K; a power or fuel meter's in kW), or null */
+  /** expanded uncertainty as a flow, kg/s (a thermometer's as a temperature difference, K; a pressure gauge's as a pressure difference, MPa; a power or fuel meter's in kW), or null */
   absoluteUncertainty: number | null;
   /** two-sided confidence of the stated uncertainty, e.g. 0.95 */
   confidence: number;
@@ -50,7 +51,7 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
       continue;
     }
     tags.set(tag, path);
-    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature' ? 'temperature' : item.measures === 'power' || item.measures === 'fuel' ? 'power' : 'flow');
+    const uncertainty = uncertaintyOf(context, [...path, 'uncertainty'], item.measures === 'temperature' ? 'temperature' : item.measures === 'pressure' ? 'pressure' : item.measures === 'power' || item.measures === 'fuel' ? 'power' : 'flow');
     let confidence = 0.95;
     if (item.confidence !== undefined) {
       const value = context.quantity([...path, 'confidence'], 'percent');
@@ -76,7 +77,7 @@ export function resolveMeters(text: string): { meters: Meter[]; issues: Issue[] 
   return { meters, issues: context.issues };
 }
 
-function uncertaintyOf(context: ResolveContext, path: CasePath, reads: 'flow' | 'temperature' | 'power'): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
+function uncertaintyOf(context: ResolveContext, path: CasePath, reads: 'flow' | 'temperature' | 'pressure' | 'power'): { relativeUncertainty: number | null; absoluteUncertainty: number | null } | null {
   const text = context.text(path);
   if (text === undefined) return null;
   const relative = /%\s*$/.test(text);
@@ -94,6 +95,7 @@ function uncertaintyOf(context: ResolveContext, path: CasePath, reads: 'flow' | 
     }
     return { relativeUncertainty: null, absoluteUncertainty: value };
   }
+  if (reads === 'pressure' && !relative) return pressureDifference(context, path, text);
   const value = context.quantity(path, relative ? 'percent' : reads === 'power' ? 'power' : 'massFlow');
   if (value === undefined) return null;
   if (!(value > 0)) {
@@ -101,4 +103,25 @@ function uncertaintyOf(context: ResolveContext, path: CasePath, reads: 'flow' | 
     return null;
   }
   return relative ? { relativeUncertainty: value, absoluteUncertainty: null } : { relativeUncertainty: null, absoluteUncertainty: value };
+}
+
+/**
+ * A pressure gauge's uncertainty as a difference of pressures, MPa: "0.1 bar",
+ * "2 psi", "5 kPa". Here a bare bar or psi is a difference (elsewhere the case
+ * must say bara or barg); a gauge unit counts from the atmosphere, so it is
+ * refused.
+ */
+function pressureDifference(context: ResolveContext, path: CasePath, text: string): { relativeUncertainty: null; absoluteUncertainty: number } | null {
+  const match = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(bar|psi|kPa|MPa|Pa)\s*$/i.exec(text);
+  if (!match) {
+    context.error('uncertainty-kind', path, `expected a pressure gauge's uncertainty as a pressure difference such as "0.1 bar", "2 psi" or "5 kPa", or as a share such as "0.5 %", found "${text}"`);
+    return null;
+  }
+  const perUnit: Record<string, number> = { bar: BAR_KPA / 1000, psi: PSI_KPA / 1000, kpa: 1e-3, mpa: 1, pa: 1e-6 };
+  const value = Number(match[1]) * perUnit[match[2].toLowerCase()];
+  if (!(value > 0)) {
+    context.error('uncertainty-not-positive', path, `expected an uncertainty above zero (such as "0.1 bar"), found "${text}"`);
+    return null;
+  }
+  return { relativeUncertainty: null, absoluteUncertainty: value };
 }

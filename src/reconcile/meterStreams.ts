@@ -26,14 +26,14 @@ export interface MeteredStream {
   stream: number;
 }
 
-/** Every flow meter's stream, or a located issue for each meter that names none or several. Thermometers, power and fuel meters are left out (thermometers.ts, powerMeters.ts). */
+/** Every flow meter's stream, or a located issue for each meter that names none or several. Thermometers, pressure gauges, power and fuel meters are left out (thermometers.ts, pressureMeters.ts, powerMeters.ts). */
 export function meterStreams(meters: readonly Meter[], network: StreamNetwork): { metered: MeteredStream[]; issues: Issue[] } {
   const metered: MeteredStream[] = [];
   const issues: Issue[] = [];
   const ends = new Set(network.streams.flatMap((stream) => [stream.from, stream.to]));
   const byStream = new Map<number, Meter>();
   for (const meter of meters) {
-    if (meter.measures === 'temperature' || meter.measures === 'power' || meter.measures === 'fuel') continue; // see thermometers.ts, powerMeters.ts
+    if (meter.measures === 'temperature' || meter.measures === 'pressure' || meter.measures === 'power' || meter.measures === 'fuel') continue; // see thermometers.ts, pressureMeters.ts, powerMeters.ts
     if (!ends.has(meter.unit)) {
       issues.push(meter.issueAt('unit', 'meter-no-stream', `meter ${meter.tag} names "${meter.unit}", which no stream of the plant starts or ends at; expected the id of a unit, header, flash tank or "deaerator"`));
       continue;

@@ -6,7 +6,7 @@
 // the meter's quantity (a mass flow, a temperature, a power), or a negative
 // flow, power or fuel is reported with its line, all at once.
 import { parse } from 'csv-parse/sync';
-import { parseQuantity } from '../units/index.js';
+import { parseQuantity, type ParseOptions } from '../units/index.js';
 
 export interface ReadingIssue {
   line: number;
@@ -34,13 +34,16 @@ export interface ReadingsWindow {
 
 export type ReadingsResult = { ok: true; readings: Map<string, AveragedReading>; series: boolean; rows: number } | { ok: false; issues: ReadingIssue[] };
 
+/** What a tag that is not a flow meter reads. */
+export type ReadingKind = 'temperature' | 'power' | 'fuel' | 'pressure';
+
 /**
- * `temperatureTags`: the thermometers among the known tags, read as
- * temperatures (K inside); `powerTags` and `fuelTags`: the power and fuel
- * meters, read as powers (kW inside); every other tag is a flow meter (kg/s
- * inside).
+ * `kinds`: the known tags that are not flow meters: thermometers, read as
+ * temperatures (K inside); power and fuel meters, read as powers (kW
+ * inside); pressure gauges, read as pressures (MPa abs inside, a gauge unit
+ * from `options`' atmosphere). Every other tag is a flow meter (kg/s inside).
  */
-export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, temperatureTags: ReadonlySet<string> = new Set(), powerTags: ReadonlySet<string> = new Set(), fuelTags: ReadonlySet<string> = new Set()): ReadingsResult {
+export function parseReadings(text: string, knownTags: ReadonlySet<string>, window: ReadingsWindow = { from: null, to: null }, kinds: ReadonlyMap<string, ReadingKind> = new Map(), options: ParseOptions = {}): ReadingsResult {
   const issues: ReadingIssue[] = [];
   let records: { record: string[]; info: { lines: number } }[];
   const skipped = (error: { message?: string; lines?: number } | undefined): undefined => {
@@ -86,18 +89,20 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       }
       if ((window.from !== null && time < window.from) || (window.to !== null && time > window.to)) continue;
     }
-    const thermometer = temperatureTags.has(tag);
-    const fuelMeter = fuelTags.has(tag);
-    const wattmeter = powerTags.has(tag) || fuelMeter;
+    const kind = kinds.get(tag);
+    const thermometer = kind === 'temperature';
+    const fuelMeter = kind === 'fuel';
+    const wattmeter = kind === 'power' || fuelMeter;
+    const gauge = kind === 'pressure';
     if (unit === '') {
-      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : fuelMeter ? 'an energy per hour such as MW, GJ/h or MMBtu/h' : wattmeter ? 'a power unit such as kW or MW' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
+      issues.push({ line, message: `reading of ${tag} has no unit; expected ${thermometer ? 'a temperature unit such as degC, degF or K' : fuelMeter ? 'an energy per hour such as MW, GJ/h or MMBtu/h' : wattmeter ? 'a power unit such as kW or MW' : gauge ? 'a pressure unit such as barg, bara or psig' : 'a mass flow unit such as t/h, kg/s or klb/h'}, found "${valueText}"` });
       continue;
     }
     if (!/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(valueText)) {
       issues.push({ line, message: `value of ${tag}: expected a number, found "${valueText}"` });
       continue;
     }
-    const parsed = parseQuantity(`${valueText} ${unit}`, thermometer ? 'temperature' : wattmeter ? 'power' : 'massFlow');
+    const parsed = parseQuantity(`${valueText} ${unit}`, thermometer ? 'temperature' : wattmeter ? 'power' : gauge ? 'pressure' : 'massFlow', options);
     if (!parsed.ok) {
       issues.push({ line, message: `unit of ${tag}: ${parsed.message}` });
       continue;
@@ -110,7 +115,11 @@ export function parseReadings(text: string, knownTags: ReadonlySet<string>, wind
       issues.push({ line, message: fuelMeter ? `reading of ${tag} is a negative fuel rate, "${valueText} ${unit}"; a fuel meter reads zero or more` : `reading of ${tag} is a negative power, "${valueText} ${unit}"; a turbine's power meter reads zero or more (a motoring generator is not modelled)` });
       continue;
     }
-    if (!thermometer && !wattmeter && parsed.value < 0) {
+    if (gauge && !(parsed.value > 0)) {
+      issues.push({ line, message: `reading of ${tag} is ${valueText} ${unit}, not above vacuum; expected a header's pressure` });
+      continue;
+    }
+    if (!thermometer && !wattmeter && !gauge && parsed.value < 0) {
       issues.push({ line, message: `reading of ${tag} is a negative flow, "${valueText} ${unit}"; a flow meter reads zero or more (check the sign or the meter's direction)` });
       continue;
     }

@@ -10,6 +10,7 @@ import { planThermometers, type Thermometer } from './thermometers.js';
 import type { BalanceRow, LinearProblem, LinearResult, Reading } from './linearReconciliation.js';
 import type { MeteredStream } from './meterStreams.js';
 import { fuelRow, POWER_SCALE, powerRow, steamForFuel, type FuelMeter, type PowerMeter } from './powerMeters.js';
+import type { PressureMeter } from './pressureMeters.js';
 import type { AveragedReading } from './readings.js';
 import { testReconciliation, type GlobalTest } from './serialElimination.js';
 import { coverageFactor } from './statistics.js';
@@ -19,11 +20,11 @@ export const METHOD = 'constrained weighted least squares (Kuehn and Davidson 19
 export interface MeterResult {
   tag: string;
   name: string;
-  /** a flow meter (values in kg/s), a thermometer (values in K, uncertainties in K), a power meter or a fuel meter (values in kW) */
-  quantity: 'flow' | 'temperature' | 'power' | 'fuel';
-  /** the stream it reads; a thermometer on a header, the header; a power meter, its turbine; a fuel meter, its boiler */
+  /** a flow meter (values in kg/s), a thermometer (values in K, uncertainties in K), a pressure gauge (MPa abs), a power meter or a fuel meter (values in kW) */
+  quantity: 'flow' | 'temperature' | 'pressure' | 'power' | 'fuel';
+  /** the stream it reads; a thermometer or a pressure gauge on a header, the header; a power meter, its turbine; a fuel meter, its boiler */
   stream: string;
-  /** averaged reading, kg/s (K for a thermometer, kW for a power or fuel meter) */
+  /** averaged reading, kg/s (K for a thermometer, MPa abs for a pressure gauge, kW for a power or fuel meter) */
   measured: number;
   /** standard deviation of the reading, kg/s (stated uncertainty over its coverage factor) */
   sigma: number;
@@ -97,6 +98,14 @@ export interface ReconcileOutcome {
   notes: string[];
 }
 
+/** The meters that read no stream's flow, each kind as its own module finds them. */
+export interface Instruments {
+  thermometers?: readonly Thermometer[];
+  pressure?: readonly PressureMeter[];
+  power?: readonly PowerMeter[];
+  fuel?: readonly FuelMeter[];
+}
+
 export interface ReconcileSettings {
   /** level of significance of the tests; default 0.05 */
   level?: number;
@@ -121,10 +130,15 @@ export function balanceRows(network: StreamNetwork): BalanceRow[] {
   });
 }
 
-export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), thermometers: readonly Thermometer[] = [], power: readonly PowerMeter[] = [], fuel: readonly FuelMeter[] = []): ReconcileOutcome {
+export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], readings: ReadonlyMap<string, AveragedReading>, settings: ReconcileSettings = {}, network: StreamNetwork = streamNetwork(plant), instruments: Instruments = {}): ReconcileOutcome {
+  const { power = [], fuel = [], pressure = [] } = instruments;
   const level = settings.level ?? 0.05;
   const notes: string[] = [];
   const read = metered.filter(({ meter }) => readings.has(meter.tag));
+  // A gauge's reading is the pressure its header's thermometers take their steam at.
+  const readPressure = pressure.filter(({ meter }) => readings.has(meter.tag));
+  const gaugeAt = new Map(readPressure.map((gauge) => [gauge.header, readings.get(gauge.meter.tag)!.value]));
+  const thermometers = (instruments.thermometers ?? []).map((thermometer) => (gaugeAt.has(thermometer.header) ? { ...thermometer, p: gaugeAt.get(thermometer.header)! } : thermometer));
   const readThermometers = thermometers.filter((thermometer) => readings.has(thermometer.meter.tag) && fixesEnthalpy(thermometer, readings, []));
   const readPower = power.filter(({ meter }) => readings.has(meter.tag));
   const readFuel = fuel.filter(({ meter }) => readings.has(meter.tag));
@@ -133,6 +147,7 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
     ...thermometers.filter((thermometer) => !readings.has(thermometer.meter.tag)).map((thermometer) => thermometer.meter.tag),
     ...power.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
     ...fuel.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
+    ...pressure.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
   ];
   const flowReadings: Reading[] = read.map(({ meter, stream }) => {
     const value = readings.get(meter.tag)!.value;
@@ -269,6 +284,24 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
       unsteady,
     };
   });
+
+  // Pressure gauges: in no balance, so reported as read and never checked.
+  const withEnergy = new Set(energyHeaders);
+  for (const gauge of readPressure) {
+    const { meter } = gauge;
+    const reading = readings.get(meter.tag)!;
+    const sigma = readingSigma(meter, reading.value);
+    const stated = sigma * coverageFactor(meter.confidence);
+    const unsteady = reading.drift !== null && Math.abs(reading.drift) > stated;
+    if (unsteady) notes.push(`${meter.tag} drifted ${(reading.drift! * 10).toFixed(3)} bar across the window, more than its stated uncertainty: the window may not be steady`);
+    const balanced = withEnergy.has(gauge.header) ? `; the energy balance at ${gauge.header} takes its enthalpies at the reading` : '';
+    if (Math.abs(reading.value - gauge.casePressure) > stated) {
+      notes.push(`${meter.tag}: ${gauge.header} reads ${(reading.value * 10).toFixed(3)} bar abs against the case's ${(gauge.casePressure * 10).toFixed(3)} bar abs, more than the gauge's uncertainty: the case's steam states there are not the day's${balanced}`);
+    } else if (balanced) {
+      notes.push(`${meter.tag}${balanced}`);
+    }
+    meters.push({ tag: meter.tag, name: meter.name, quantity: 'pressure', stream: gauge.header, measured: reading.value, sigma, reconciled: reading.value, unbounded: reading.value, atBound: false, reconciledSigma: sigma, adjustment: 0, adjustmentSigma: 0, redundant: false, statistic: null, flagged: false, vdiFlagged: false, suspectRank: null, count: reading.count, drift: reading.drift, unsteady });
+  }
 
   const meterOf = new Map(read.map(({ meter, stream }) => [stream, meter.tag]));
   const streams: StreamResult[] = network.streams.map((stream, index) => {

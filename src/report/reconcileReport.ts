@@ -3,6 +3,8 @@
 // the streams with their estimates. No computation here beyond formatting.
 import type { MeterResult, ReconcileOutcome } from '../reconcile/index.js';
 import { formatQuantity, type UnitSystem } from '../units/index.js';
+import { formatNumber } from '../units/format.js';
+import { PSI_KPA } from '../units/exactFactors.js';
 import { csvCell } from './safeCells.js';
 import type { ReportTable } from './reportTables.js';
 import { table } from './table.js';
@@ -21,6 +23,7 @@ function flow(value: number | null, system: UnitSystem): string {
 
 /** A reading in the case's units: a flow, a thermometer's temperature, a power meter's power or a fuel meter's fuel rate. */
 function reading(value: number, quantity: MeterResult['quantity'], system: UnitSystem): string {
+  if (quantity === 'pressure') return formatQuantity(value, 'pressure', system, { digits: 4, unit: system === 'us' ? 'psia' : 'bara' });
   if (quantity === 'fuel') return fuelRate(value, system);
   if (quantity === 'power') return power(value, system);
   return quantity === 'flow' ? flow(value, system) : formatQuantity(value, 'temperature', system, { digits: 4 });
@@ -28,9 +31,16 @@ function reading(value: number, quantity: MeterResult['quantity'], system: UnitS
 
 /** An adjustment or interval: a flow, a temperature difference, a power or a fuel rate. */
 function difference(value: number, quantity: MeterResult['quantity'], system: UnitSystem): string {
+  if (quantity === 'pressure') return pressureDifference(value, system);
   if (quantity === 'fuel') return fuelRate(value, system);
   if (quantity === 'power') return power(value, system);
   return quantity === 'flow' ? flow(value, system) : formatQuantity(Math.abs(value) < 1e-9 ? 0 : value, 'temperatureDifference', system, { digits: 3 });
+}
+
+/** A difference of pressures (MPa in): bar, or psi in US units (neither gauge nor absolute). */
+function pressureDifference(value: number, system: UnitSystem): string {
+  const shown = Math.abs(value) < 1e-12 ? 0 : system === 'us' ? (value * 1000) / PSI_KPA : value * 10;
+  return `${formatNumber(shown, 4)} ${system === 'us' ? 'psi' : 'bar'}`;
 }
 
 /** Fuel as energy per hour, as fuel is bought: GJ/h, or MMBtu/h in US units. */
@@ -163,7 +173,7 @@ export function reconcileSectionHtml(outcome: ReconcileOutcome, system: UnitSyst
   ].join('\n');
 }
 
-/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K; a power or fuel meter's, `quantity` power or fuel, in kW), for spreadsheets. */
+/** One row per reading, then one per stream, in SI (kg/s; a thermometer's row, `quantity` temperature, in K; a pressure gauge's in MPa abs; a power or fuel meter's, `quantity` power or fuel, in kW), for spreadsheets. */
 export function reconcileCsv(outcome: ReconcileOutcome): string {
   const lines: string[] = [];
   lines.push(['table', 'tag', 'stream', 'measured_kg_s', 'sigma_kg_s', 'reconciled_kg_s', 'reconciled_sigma_kg_s', 'adjustment_kg_s', 'adjustment_sigma_kg_s', 'redundant', 'statistic', 'flagged', 'suspect_rank', 'bias_kg_s', 'bias_sigma_kg_s', 'equivalent', 'unbounded_kg_s', 'at_bound', 'quantity'].join(','));

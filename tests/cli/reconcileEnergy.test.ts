@@ -65,7 +65,7 @@ function workspace(caseText: string, readings: string): string {
 }
 
 interface Outcome {
-  meters: { tag: string; quantity: string; reconciled: number; redundant: boolean }[];
+  meters: { tag: string; quantity: string; measured: number; reconciled: number; redundant: boolean; statistic: number | null }[];
   streams: { id: string; value: number | null }[];
   global: { dof: number; passed: boolean };
   notes: string[];
@@ -99,6 +99,53 @@ describe('steamwright reconcile with thermometers', () => {
     const out = outflows.reduce((sum, id) => sum + value(id), 0) * enthalpyPT(p, temperature('TT-MP'));
     // kW; some 60 MW flow through the header, and p is rounded to 0.1 kPa here.
     expect(Math.abs(into - out - 90)).toBeLessThan(2);
+  });
+
+  test('a pressure gauge on mp: read, never checked, and the energy balance takes its enthalpies at the gauge\'s pressure', async () => {
+    // The header read at 11.5 barg against the case's 12 barg.
+    const gauge = '  - { tag: PT-MP, unit: mp, measures: pressure, uncertainty: 0.05 bar }\n';
+    const readings = `${await solvedReadings()}PT-MP,11.5,barg\n`;
+    const dir = workspace(millWithMeters(`${METERS}${gauge}`), readings);
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv', '--json'], { cwd: dir });
+    expect(result.stderr).toBe('');
+    const outcome = JSON.parse(result.stdout) as Outcome;
+    const pt = outcome.meters.find((meter) => meter.tag === 'PT-MP')!;
+    const p = 1.3013 - 0.05; // 11.5 barg on the mill's site atmosphere, MPa abs
+    expect(pt).toMatchObject({ quantity: 'pressure', redundant: false, statistic: null });
+    expect(pt.measured).toBeCloseTo(p, 9);
+    expect(pt.reconciled).toBe(pt.measured);
+    expect(outcome.notes.join('\n')).toMatch(/PT-MP: mp reads 12\.513 bar abs against the case's 13\.013 bar abs, more than the gauge's uncertainty: the case's steam states there are not the day's; the energy balance at mp takes its enthalpies at the reading/);
+    // The balance closes by IF97 at the gauge's pressure (to a watt), and not at the case's, 0.5 bar away
+    // (by 0.8 kW: at a fixed temperature superheated steam's enthalpy moves little with pressure).
+    const value = (id: string): number => outcome.streams.find((stream) => stream.id === id)!.value!;
+    const temperature = (tag: string): number => outcome.meters.find((meter) => meter.tag === tag)!.reconciled;
+    const outflows = ['mp->bpt1:steam', 'mp->prv_mp_lp:letdown', 'mp->digester:process', 'mp->evaporators:process', 'mp->starch_cooker:process'];
+    const residual = (at: number): number =>
+      value('tg1->mp:extraction') * enthalpyPT(at, temperature('TT-E')) + value('prv_hp_mp->mp:letdown') * enthalpyPT(at, temperature('TT-L')) - outflows.reduce((sum, id) => sum + value(id), 0) * enthalpyPT(at, temperature('TT-MP')) - 90;
+    expect(Math.abs(residual(pt.measured))).toBeLessThan(1e-3);
+    expect(Math.abs(residual(1.3013))).toBeGreaterThan(0.1);
+    // The text shows it in bar abs, and "not checkable".
+    const text = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: dir });
+    expect(text.stdout).toMatch(/ PT-MP +12\.51 bara +12\.51 bara +±0\.05000 bar +0\.000 bar +not checkable/);
+  });
+
+  test('a pressure gauge on a turbine, or with its uncertainty in a gauge unit, is located; a reading in a flow unit too', async () => {
+    const meters = `${METERS}  - { tag: PT-1, unit: tg1, measures: pressure, uncertainty: 0.1 bar }\n  - { tag: PT-2, unit: mp, measures: pressure, uncertainty: 0.1 barg }\n`;
+    const text = millWithMeters(meters);
+    const dir = workspace(text, 'tag,value,unit\nFT-E,50,t/h\n');
+    const result = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: dir });
+    expect(result.code).toBe(1);
+    const lines = text.split('\n');
+    const lineOf = (tag: string): number => lines.findIndex((line) => line.includes(`tag: ${tag}`)) + 1;
+    expect(result.stderr).toContain(`plant.yaml:${lineOf('PT-1')}:`);
+    expect(result.stderr).toMatch(/pressure gauge PT-1 names "tg1", which is not a header; expected one of "hp", "mp", "lp"/);
+    expect(result.stderr).toContain(`plant.yaml:${lineOf('PT-2')}:`);
+    expect(result.stderr).toMatch(/expected a pressure gauge's uncertainty as a pressure difference such as "0\.1 bar", "2 psi" or "5 kPa", or as a share such as "0\.5 %", found "0\.1 barg"/);
+    expect(result.stderr).not.toMatch(STACK_FRAME);
+    const good = workspace(millWithMeters(`${METERS}  - { tag: PT-MP, unit: mp, measures: pressure, uncertainty: 0.5 % }\n`), 'tag,value,unit\nFT-E,50,t/h\nPT-MP,12,t/h\n');
+    const read = await runCli(['reconcile', 'plant.yaml', '--readings', 'readings.csv'], { cwd: good });
+    expect(read.code).toBe(1);
+    expect(read.stderr).toMatch(/readings\.csv:3: unit of PT-MP: /);
   });
 
   test('text output shows the thermometers in degrees', async () => {

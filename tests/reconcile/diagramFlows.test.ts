@@ -52,9 +52,10 @@ describe('reconciledDiagram', () => {
     const power = powerMeters(meters, network).metered;
     const text = readFileSync('cases/millbrook-creamery.readings.csv', 'utf8').replace('JT-111,238,kW', 'JT-111,300,kW').replace('FT-111,14.14,klb/h', 'FT-111,12.30,klb/h');
     const fuel = fuelMeters(meters, network).metered;
-    const parsed = parseReadings(text, new Set(meters.map((meter) => meter.tag)), undefined, new Set(), new Set(power.map(({ meter }) => meter.tag)), new Set(fuel.map(({ meter }) => meter.tag)));
+    const kinds = new Map([...power.map(({ meter }) => [meter.tag, 'power'] as const), ...fuel.map(({ meter }) => [meter.tag, 'fuel'] as const)]);
+    const parsed = parseReadings(text, new Set(meters.map((meter) => meter.tag)), undefined, kinds);
     if (!parsed.ok) throw new Error('readings do not parse');
-    const biased = reconcilePlant(plant, meterStreams(meters, network).metered, parsed.readings, {}, network, [], power, fuel);
+    const biased = reconcilePlant(plant, meterStreams(meters, network).metered, parsed.readings, {}, network, { power, fuel });
     expect(biased.suspects[0]?.tag).toBe('JT-111');
     expect(outcome.suspects[0].tag).toBe('FT-111');
     const diagram = reconciledDiagram(result, biased);

@@ -63,7 +63,7 @@ meters:
     expect([...flows.issues, ...fuel.issues]).toEqual([]);
     const curve = network.fuel.get('boiler_1')!;
     const reconcile = (entries: [string, number][]) =>
-      reconcilePlant(loaded.plant, flows.metered, new Map<string, AveragedReading>(entries.map(([tag, value]) => [tag, { tag, value, count: 1, drift: null, line: 1 }])), {}, network, [], [], fuel.metered);
+      reconcilePlant(loaded.plant, flows.metered, new Map<string, AveragedReading>(entries.map(([tag, value]) => [tag, { tag, value, count: 1, drift: null, line: 1 }])), {}, network, { fuel: fuel.metered });
     return { curve, reconcile, network };
   }
 

@@ -98,8 +98,8 @@ meters:
       ['FT-2', extraction + extractionBias],
       ['FT-3', condensate],
     ];
-    const reconcile = (powerReading: number, extractionBias = 0) => reconcilePlant(loaded.plant, flows.metered, readingsOf([...flowReadings(extractionBias), ['JT-1', powerReading]]), {}, network, [], power.metered);
-    const flowsOnly = (extractionBias: number) => reconcilePlant(loaded.plant, flows.metered, readingsOf(flowReadings(extractionBias)), {}, network, [], power.metered);
+    const reconcile = (powerReading: number, extractionBias = 0) => reconcilePlant(loaded.plant, flows.metered, readingsOf([...flowReadings(extractionBias), ['JT-1', powerReading]]), {}, network, { power: power.metered });
+    const flowsOnly = (extractionBias: number) => reconcilePlant(loaded.plant, flows.metered, readingsOf(flowReadings(extractionBias)), {}, network, { power: power.metered });
     return { reconcile, flowsOnly, truePower, meters };
   }
 
@@ -159,7 +159,7 @@ meters:
       ['FT-2', { tag: 'FT-2', value: 28 / 3.6, count: 1, drift: null, line: 1 }],
       ['JT-1', { tag: 'JT-1', value: truePower, count: 1, drift: null, line: 1 }],
     ]);
-    const outcome = reconcilePlant(loaded.plant, flows.metered, readings, {}, network, [], power.metered);
+    const outcome = reconcilePlant(loaded.plant, flows.metered, readings, {}, network, { power: power.metered });
     const condensed = outcome.streams.find((stream) => stream.id === 'tg1->deaerator:condensate')!;
     const inlet = outcome.streams.find((stream) => stream.id === 'hp->tg1:steam')!;
     expect(condensed.observable).toBe(true);

@@ -3,7 +3,7 @@ import type { Argv, CommandModule } from 'yargs';
 import { readFile } from 'node:fs/promises';
 import { formatIssue, loadCase, resolveMeters, summarisePlant } from '../../model/index.js';
 import { streamNetwork } from '../../plant/index.js';
-import { fuelMeters, meterStreams, planThermometers, powerMeters } from '../../reconcile/index.js';
+import { fuelMeters, meterStreams, planThermometers, powerMeters, pressureMeters } from '../../reconcile/index.js';
 import { EXIT_PROBLEMS } from '../errors.js';
 
 interface CheckArgs {
@@ -61,5 +61,5 @@ export const checkCommand: CommandModule<object, CheckArgs> = {
 
 /** Flow meters and thermometers checked against the plant's streams. */
 function meterIssuesOf(meters: Parameters<typeof meterStreams>[0], network: Parameters<typeof meterStreams>[1], plant: Parameters<typeof planThermometers>[2]) {
-  return [...meterStreams(meters, network).issues, ...planThermometers(meters, network, plant).issues, ...powerMeters(meters, network).issues, ...fuelMeters(meters, network).issues];
+  return [...meterStreams(meters, network).issues, ...planThermometers(meters, network, plant).issues, ...powerMeters(meters, network).issues, ...fuelMeters(meters, network).issues, ...pressureMeters(meters, plant).issues];
 }

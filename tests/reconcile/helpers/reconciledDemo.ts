@@ -19,9 +19,9 @@ export async function reconciledDemo() {
   const { metered } = meterStreams(meters, network);
   const power = powerMeters(meters, network).metered;
   const fuel = fuelMeters(meters, network).metered;
-  const tags = (list: readonly { meter: { tag: string } }[]) => new Set(list.map(({ meter }) => meter.tag));
-  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(meters.map((meter) => meter.tag)), undefined, new Set(), tags(power), tags(fuel));
+  const kinds = new Map([...power.map(({ meter }) => [meter.tag, 'power'] as const), ...fuel.map(({ meter }) => [meter.tag, 'fuel'] as const)]);
+  const parsed = parseReadings(readFileSync(READINGS, 'utf8'), new Set(meters.map((meter) => meter.tag)), undefined, kinds);
   if (!parsed.ok) throw new Error('demo readings do not parse');
-  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network, [], power, fuel);
+  const outcome = reconcilePlant(loaded.plant, metered, parsed.readings, {}, network, { power, fuel });
   return { plant: loaded.plant, network, result: plantResult(solved), outcome };
 }
