@@ -19,31 +19,55 @@ export interface PowerMeter {
 
 /** Each power meter's turbine and relation, or a located issue for a meter that names no turbine or shares one. */
 export function powerMeters(meters: readonly Meter[], network: StreamNetwork): { metered: PowerMeter[]; issues: Issue[] } {
-  const metered: PowerMeter[] = [];
+  const { found, issues } = metersOnUnits(meters, 'power', network.power, { meter: 'power meter', unit: 'turbine', expected: 'a turbine' });
+  return { metered: found.map(({ meter, value }) => ({ meter, turbine: meter.unit, terms: value.terms, constant: value.constant })), issues };
+}
+
+/** How the meters of one kind that read a unit itself are named in messages. */
+interface UnitMeterWords {
+  /** "power meter" */
+  meter: string;
+  /** "turbine" */
+  unit: string;
+  /** "a turbine" */
+  expected: string;
+  /** what the case lacks when it has none, where not `unit`: "fired boiler" */
+  none?: string;
+}
+
+/**
+ * The meters of one kind that read a unit itself rather than a stream (a
+ * turbine's power, a boiler's fuel, a header's pressure): each with what
+ * `known` holds for its unit, or a located issue for a meter whose unit is
+ * not one of them, one with "to", or a second on the same unit.
+ */
+export function metersOnUnits<T>(meters: readonly Meter[], measures: Meter['measures'], known: ReadonlyMap<string, T>, words: UnitMeterWords): { found: { meter: Meter; value: T }[]; issues: Issue[] } {
+  const found: { meter: Meter; value: T }[] = [];
   const issues: Issue[] = [];
-  const byTurbine = new Map<string, Meter>();
-  const turbines = [...network.power.keys()];
+  const byUnit = new Map<string, Meter>();
+  const code = words.unit.replace(/\s+/g, '-');
   for (const meter of meters) {
-    if (meter.measures !== 'power') continue;
-    const relation = network.power.get(meter.unit);
-    if (!relation) {
-      const expected = turbines.length > 0 ? `expected a turbine: ${turbines.map((id) => `"${id}"`).join(', ')}` : 'the case has no turbine';
-      issues.push(meter.issueAt('unit', 'meter-no-turbine', `power meter ${meter.tag} names "${meter.unit}", which is not a turbine; ${expected}`));
+    if (meter.measures !== measures) continue;
+    const value = known.get(meter.unit);
+    if (value === undefined) {
+      const ids = [...known.keys()];
+      const expected = ids.length > 0 ? `expected ${words.expected}: ${ids.map((id) => `"${id}"`).join(', ')}` : `the case has no ${words.none ?? words.unit}`;
+      issues.push(meter.issueAt('unit', `meter-no-${code}`, `${words.meter} ${meter.tag} names "${meter.unit}", which is not ${words.expected}; ${expected}`));
       continue;
     }
     if (meter.to !== null) {
-      issues.push(meter.issueAt('to', 'meter-power-to', `power meter ${meter.tag}: "to" picks a stream, and a power meter reads the turbine ${meter.unit} itself; leave "to" out`));
+      issues.push(meter.issueAt('to', `meter-${code}-to`, `${words.meter} ${meter.tag}: "to" picks a stream, and a ${words.meter} reads the ${words.unit} ${meter.unit} itself; leave "to" out`));
       continue;
     }
-    const other = byTurbine.get(meter.unit);
+    const other = byUnit.get(meter.unit);
     if (other) {
-      issues.push(meter.issueAt('unit', 'meter-same-turbine', `power meters ${other.tag} and ${meter.tag} both read turbine ${meter.unit}; keep one, or combine their readings`));
+      issues.push(meter.issueAt('unit', `meter-same-${code}`, `${words.meter}s ${other.tag} and ${meter.tag} both read ${words.unit} ${meter.unit}; keep one, or combine their readings`));
       continue;
     }
-    byTurbine.set(meter.unit, meter);
-    metered.push({ meter, turbine: meter.unit, terms: relation.terms, constant: relation.constant });
+    byUnit.set(meter.unit, meter);
+    found.push({ meter, value });
   }
-  return { metered, issues };
+  return { found, issues };
 }
 
 /**
@@ -78,31 +102,8 @@ export interface FuelMeter {
 
 /** Each fuel meter's boiler and curve, or a located issue for a meter that names no fired boiler or shares one. */
 export function fuelMeters(meters: readonly Meter[], network: StreamNetwork): { metered: FuelMeter[]; issues: Issue[] } {
-  const metered: FuelMeter[] = [];
-  const issues: Issue[] = [];
-  const byBoiler = new Map<string, Meter>();
-  const boilers = [...network.fuel.keys()];
-  for (const meter of meters) {
-    if (meter.measures !== 'fuel') continue;
-    const curve = network.fuel.get(meter.unit);
-    if (!curve) {
-      const expected = boilers.length > 0 ? `expected a fired boiler: ${boilers.map((id) => `"${id}"`).join(', ')}` : 'the case has no fired boiler';
-      issues.push(meter.issueAt('unit', 'meter-no-boiler', `fuel meter ${meter.tag} names "${meter.unit}", which is not a fired boiler; ${expected}`));
-      continue;
-    }
-    if (meter.to !== null) {
-      issues.push(meter.issueAt('to', 'meter-fuel-to', `fuel meter ${meter.tag}: "to" picks a stream, and a fuel meter reads the boiler ${meter.unit} itself; leave "to" out`));
-      continue;
-    }
-    const other = byBoiler.get(meter.unit);
-    if (other) {
-      issues.push(meter.issueAt('unit', 'meter-same-boiler', `fuel meters ${other.tag} and ${meter.tag} both read boiler ${meter.unit}; keep one, or combine their readings`));
-      continue;
-    }
-    byBoiler.set(meter.unit, meter);
-    metered.push({ meter, boiler: meter.unit, steam: curve.steam, fuel: curve.fuel });
-  }
-  return { metered, issues };
+  const { found, issues } = metersOnUnits(meters, 'fuel', network.fuel, { meter: 'fuel meter', unit: 'boiler', expected: 'a fired boiler', none: 'fired boiler' });
+  return { metered: found.map(({ meter, value }) => ({ meter, boiler: meter.unit, steam: value.steam, fuel: value.fuel })), issues };
 }
 
 /** The fuel's tangent at a steam flow, in MW: fuel - F'(s0) steam - (F(s0) - F'(s0) s0) = 0, the fuel the variable `variable`. */

@@ -4,6 +4,7 @@
 // gauge's pressure instead of the case's, and a gauge far from the case's
 // pressure is named in the notes (the case's states are then not the day's).
 import type { Issue, Meter, Plant } from '../model/index.js';
+import { metersOnUnits } from './powerMeters.js';
 
 export interface PressureMeter {
   meter: Meter;
@@ -15,28 +16,7 @@ export interface PressureMeter {
 
 /** Each pressure gauge's header, or a located issue for a gauge that names no header or shares one. */
 export function pressureMeters(meters: readonly Meter[], plant: Plant): { metered: PressureMeter[]; issues: Issue[] } {
-  const metered: PressureMeter[] = [];
-  const issues: Issue[] = [];
-  const byHeader = new Map<string, Meter>();
   const headers = new Map(plant.headers.map((header) => [header.id, header.pressure]));
-  for (const meter of meters) {
-    if (meter.measures !== 'pressure') continue;
-    const casePressure = headers.get(meter.unit);
-    if (casePressure === undefined) {
-      issues.push(meter.issueAt('unit', 'meter-no-header', `pressure gauge ${meter.tag} names "${meter.unit}", which is not a header; expected one of ${[...headers.keys()].map((id) => `"${id}"`).join(', ')}`));
-      continue;
-    }
-    if (meter.to !== null) {
-      issues.push(meter.issueAt('to', 'meter-pressure-to', `pressure gauge ${meter.tag}: "to" picks a stream, and a gauge reads the header ${meter.unit} itself; leave "to" out`));
-      continue;
-    }
-    const other = byHeader.get(meter.unit);
-    if (other) {
-      issues.push(meter.issueAt('unit', 'meter-same-header', `pressure gauges ${other.tag} and ${meter.tag} both read header ${meter.unit}; keep one, or combine their readings`));
-      continue;
-    }
-    byHeader.set(meter.unit, meter);
-    metered.push({ meter, header: meter.unit, casePressure });
-  }
-  return { metered, issues };
+  const { found, issues } = metersOnUnits(meters, 'pressure', headers, { meter: 'pressure gauge', unit: 'header', expected: 'a header' });
+  return { metered: found.map(({ meter, value }) => ({ meter, header: meter.unit, casePressure: value })), issues };
 }

@@ -138,7 +138,7 @@ describe('steamwright reconcile with thermometers', () => {
     const lines = text.split('\n');
     const lineOf = (tag: string): number => lines.findIndex((line) => line.includes(`tag: ${tag}`)) + 1;
     expect(result.stderr).toContain(`plant.yaml:${lineOf('PT-1')}:`);
-    expect(result.stderr).toMatch(/pressure gauge PT-1 names "tg1", which is not a header; expected one of "hp", "mp", "lp"/);
+    expect(result.stderr).toMatch(/pressure gauge PT-1 names "tg1", which is not a header; expected a header: "hp", "mp", "lp"/);
     expect(result.stderr).toContain(`plant.yaml:${lineOf('PT-2')}:`);
     expect(result.stderr).toMatch(/expected a pressure gauge's uncertainty as a pressure difference such as "0\.1 bar", "2 psi" or "5 kPa", or as a share such as "0\.5 %", found "0\.1 barg"/);
     expect(result.stderr).not.toMatch(STACK_FRAME);
