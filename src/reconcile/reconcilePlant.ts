@@ -142,13 +142,7 @@ export function reconcilePlant(plant: Plant, metered: readonly MeteredStream[], 
   const readThermometers = thermometers.filter((thermometer) => readings.has(thermometer.meter.tag) && fixesEnthalpy(thermometer, readings, []));
   const readPower = power.filter(({ meter }) => readings.has(meter.tag));
   const readFuel = fuel.filter(({ meter }) => readings.has(meter.tag));
-  const unread = [
-    ...metered.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
-    ...thermometers.filter((thermometer) => !readings.has(thermometer.meter.tag)).map((thermometer) => thermometer.meter.tag),
-    ...power.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
-    ...fuel.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
-    ...pressure.filter(({ meter }) => !readings.has(meter.tag)).map(({ meter }) => meter.tag),
-  ];
+  const unread = [...metered, ...thermometers, ...power, ...fuel, ...pressure].map(({ meter }) => meter.tag).filter((tag) => !readings.has(tag));
   const flowReadings: Reading[] = read.map(({ meter, stream }) => {
     const value = readings.get(meter.tag)!.value;
     return { variable: stream, value, sigma: readingSigma(meter, value) };
