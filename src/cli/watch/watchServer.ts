@@ -93,6 +93,10 @@ export class WatchServer {
     // chokidar follows an editor's save-by-rename, which a plain fs.watch on the file loses.
     this.watcher = watch([...this.watched], { ignoreInitial: true });
     this.watcher.on('all', () => this.changed());
+    // Until chokidar has set up its watches a save is not seen: on a busy
+    // machine that took long enough for a save right after start to be lost.
+    const watcher = this.watcher;
+    await new Promise<void>((done) => watcher.once('ready', () => done()));
     return `http://${WATCH_HOST}:${this.port}/`;
   }
 
